@@ -1,0 +1,11 @@
+package dev.countercheck.review;
+
+/**
+ * Something the designer must answer.
+ *
+ * @param id    stable across runs of the same element and check: {@code <element>/<check>/<n>}
+ * @param check the check id it belongs to
+ * @param basis the clause (or "common practice") it rests on
+ */
+public record Finding(String id, Severity severity, String check, String message, String basis) {
+}

@@ -1,0 +1,34 @@
+package dev.countercheck.review;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * The finished review of one submission: what the JSON result and the HTML report show.
+ *
+ * @param reviewDate   ISO date of the review (from {@code --date}, SOURCE_DATE_EPOCH or the clock)
+ * @param assumptions  every assumption the review made, in plain words, for the report
+ */
+public record Review(ToolInfo tool, SubmissionInfo submission, RulesetInfo ruleset, String reviewDate,
+                     Verdict verdict, List<ElementReview> elements, Summary summary, List<String> assumptions) {
+
+    public record ToolInfo(String name, String version) {
+    }
+
+    public record SubmissionInfo(String file, String sha256, Optional<String> title, Optional<String> reference,
+                                 Optional<String> revision, Optional<String> preparedBy, Optional<String> date) {
+    }
+
+    public record RulesetInfo(String id, String title, String sha256, List<String> files) {
+    }
+
+    /**
+     * Counts over all elements.
+     *
+     * @param verdicts element count by verdict
+     * @param findings finding count by severity
+     */
+    public record Summary(int elements, Map<Verdict, Integer> verdicts, Map<Severity, Integer> findings) {
+    }
+}

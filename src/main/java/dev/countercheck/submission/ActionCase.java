@@ -1,0 +1,23 @@
+package dev.countercheck.submission;
+
+/**
+ * One action case at the top of the element. Compression positive; {@code mx} increases the
+ * reactions at positive y, {@code my} those at positive x.
+ */
+public record ActionCase(String name, Kind kind, double nKn, double mxKnm, double myKnm, double hxKn, double hyKn,
+                         SourceLocation location) {
+
+    public enum Kind {
+        ULS("uls"), SLS_CHARACTERISTIC("sls-characteristic"), SLS_QUASI_PERMANENT("sls-quasi-permanent");
+
+        private final String label;
+
+        Kind(String label) {
+            this.label = label;
+        }
+
+        public String label() {
+            return label;
+        }
+    }
+}

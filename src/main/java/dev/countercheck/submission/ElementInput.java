@@ -1,0 +1,14 @@
+package dev.countercheck.submission;
+
+/** One element of a submission: a reviewable element of a known type, or one too incomplete to review. */
+public sealed interface ElementInput permits PileCap, IncompleteElement {
+
+    String id();
+
+    /** The submission's {@code type} value, e.g. {@code "pile-cap"}. */
+    String type();
+
+    String description();
+
+    SourceLocation location();
+}

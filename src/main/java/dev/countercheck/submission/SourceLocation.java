@@ -1,0 +1,10 @@
+package dev.countercheck.submission;
+
+/** A place in an input file: 1-based line and column. */
+public record SourceLocation(String file, int line, int column) {
+
+    @Override
+    public String toString() {
+        return file + ":" + line + ":" + column;
+    }
+}
