@@ -1,0 +1,35 @@
+package dev.countercheck.cli;
+
+import picocli.CommandLine.Command;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.concurrent.Callable;
+
+/** {@code example}: prints a commented starter submission. */
+@Command(name = "example", mixinStandardHelpOptions = true, versionProvider = Version.class,
+        description = "Print a commented starter submission to adapt: countercheck example > my-project.yaml")
+public final class ExampleCommand implements Callable<Integer> {
+
+    static final String RESOURCE = "/example-submission.yaml";
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        spec.commandLine().getOut().print(text());
+        spec.commandLine().getOut().flush();
+        return ExitCodes.OK;
+    }
+
+    static String text() {
+        try (InputStream in = ExampleCommand.class.getResourceAsStream(RESOURCE)) {
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

@@ -1,0 +1,60 @@
+package dev.countercheck.cli;
+
+import dev.countercheck.submission.ElementInput;
+import dev.countercheck.submission.IncompleteElement;
+import dev.countercheck.submission.Submission;
+import dev.countercheck.submission.SubmissionException;
+import dev.countercheck.submission.SubmissionReader;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Parameters;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+
+/** {@code validate FILE...}: reads and validates submissions, writes nothing. */
+@Command(name = "validate", mixinStandardHelpOptions = true, versionProvider = Version.class,
+        description = "Read and validate submissions without reviewing them. Exit 0 when all are usable, 2 otherwise.")
+public final class ValidateCommand implements Callable<Integer> {
+
+    @Parameters(arity = "1..*", paramLabel = "FILE", description = "Submission files (YAML or JSON) or folders of them.")
+    List<Path> files;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        int status = ExitCodes.OK;
+        List<Path> inputs;
+        try {
+            inputs = SubmissionFiles.expand(files);
+        } catch (UsageException e) {
+            err.println("countercheck validate: " + e.getMessage());
+            return ExitCodes.UNUSABLE;
+        }
+        for (Path file : inputs) {
+            try {
+                Submission s = new SubmissionReader().read(file);
+                long incomplete = s.elements().stream().filter(e -> e instanceof IncompleteElement).count();
+                out.println(file + ": valid, " + s.elements().size() + " element" + (s.elements().size() == 1 ? "" : "s")
+                        + (incomplete > 0 ? " (" + incomplete + " incomplete)" : ""));
+                for (ElementInput e : s.elements()) {
+                    if (e instanceof IncompleteElement inc) {
+                        out.println("  " + inc.location() + ": " + inc.id() + " is incomplete; missing: "
+                                + String.join(", ", inc.missing()));
+                    }
+                }
+            } catch (SubmissionException e) {
+                e.errors().forEach(err::println);
+                err.println(file + ": invalid (" + e.errors().size() + " error" + (e.errors().size() == 1 ? "" : "s")
+                        + ")");
+                status = ExitCodes.UNUSABLE;
+            }
+        }
+        return status;
+    }
+}

@@ -1,0 +1,95 @@
+package dev.countercheck.element;
+
+import dev.countercheck.element.pilecap.PileCapReviewer;
+import dev.countercheck.review.ClaimComparer;
+import dev.countercheck.review.ElementAssembler;
+import dev.countercheck.review.ElementReview;
+import dev.countercheck.review.Finding;
+import dev.countercheck.review.Review;
+import dev.countercheck.review.Severity;
+import dev.countercheck.review.Verdict;
+import dev.countercheck.ruleset.Ruleset;
+import dev.countercheck.submission.ElementInput;
+import dev.countercheck.submission.IncompleteElement;
+import dev.countercheck.submission.PileCap;
+import dev.countercheck.submission.Submission;
+
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/** Reviews a whole submission: each element by the reviewer of its type, then the summary. */
+public final class ProjectReviewer {
+
+    /** Stated on every report and in the README (rule of the product). */
+    public static final String GENERAL_CAUTION = "This review assists a competent engineer and does not replace one."
+            + " Local codes, the applicable National Annex and licensed engineering practice govern.";
+
+    /** Every ruleset parameter a review reads; the ruleset loader refuses a chain that lacks one. */
+    public static final Set<String> REQUIRED_PARAMETERS = union(PileCapReviewer.PARAMETERS, Set.of("claim_tolerance"));
+
+    private final Review.ToolInfo tool;
+
+    public ProjectReviewer(Review.ToolInfo tool) {
+        this.tool = tool;
+    }
+
+    public Review review(Submission submission, Ruleset rules, String reviewDate) {
+        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance")));
+        PileCapReviewer pileCaps = new PileCapReviewer(assembler);
+        List<ElementReview> elements = new ArrayList<>();
+        for (ElementInput e : submission.elements()) {
+            if (e instanceof PileCap cap) {
+                elements.add(pileCaps.review(cap, rules));
+            } else if (e instanceof IncompleteElement inc) {
+                elements.add(incomplete(inc));
+            }
+        }
+        List<String> assumptions = new ArrayList<>();
+        assumptions.add(GENERAL_CAUTION);
+        assumptions.add("Nationally determined parameters come from ruleset " + rules.id() + " (" + rules.title()
+                + "); every value used is shown in the calculation trace with the file that set it.");
+        assumptions.addAll(PileCapReviewer.ASSUMPTIONS);
+        assumptions.add("Checks marked not-checked were not performed; the review says nothing about them.");
+        var p = submission.project();
+        return new Review(tool,
+                new Review.SubmissionInfo(submission.file(), submission.sha256(), p.title(), p.reference(),
+                        p.revision(), p.preparedBy(), p.date()),
+                new Review.RulesetInfo(rules.id(), rules.title(), rules.sha256(), rules.files()),
+                reviewDate, ElementAssembler.overall(elements), List.copyOf(elements), summary(elements),
+                List.copyOf(assumptions));
+    }
+
+    private static ElementReview incomplete(IncompleteElement e) {
+        Finding f = new Finding(e.id() + "/input/1", Severity.MINOR, "input",
+                "The element could not be reviewed; missing: " + String.join(", ", e.missing()) + ".",
+                "submission format");
+        return new ElementReview(e.id(), e.type(), e.description(), Verdict.INCOMPLETE, List.of(), List.of(f),
+                List.of("No check of " + e.id() + " was performed."));
+    }
+
+    private static Set<String> union(Set<String> a, Set<String> b) {
+        Set<String> all = new java.util.TreeSet<>(a);
+        all.addAll(b);
+        return Set.copyOf(all);
+    }
+
+    private static Review.Summary summary(List<ElementReview> elements) {
+        Map<Verdict, Integer> verdicts = new EnumMap<>(Verdict.class);
+        Map<Severity, Integer> findings = new EnumMap<>(Severity.class);
+        for (Verdict v : Verdict.values()) {
+            verdicts.put(v, 0);
+        }
+        for (Severity s : Severity.values()) {
+            findings.put(s, 0);
+        }
+        for (ElementReview e : elements) {
+            verdicts.merge(e.verdict(), 1, Integer::sum);
+            e.findings().forEach(f -> findings.merge(f.severity(), 1, Integer::sum));
+        }
+        return new Review.Summary(elements.size(), verdicts, findings);
+    }
+
+}

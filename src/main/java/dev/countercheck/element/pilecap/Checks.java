@@ -1,0 +1,16 @@
+package dev.countercheck.element.pilecap;
+
+import dev.countercheck.review.CheckBuilder;
+import dev.countercheck.submission.CheckCatalogue;
+import dev.countercheck.submission.PileCap;
+
+/** Shared starting point of the pile-cap checks. */
+final class Checks {
+
+    private Checks() {
+    }
+
+    static CheckBuilder builder(String checkId) {
+        return new CheckBuilder(CheckCatalogue.check(PileCap.TYPE, checkId));
+    }
+}

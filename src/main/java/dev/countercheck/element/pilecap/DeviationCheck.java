@@ -1,0 +1,71 @@
+package dev.countercheck.element.pilecap;
+
+import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.review.CheckBuilder;
+import dev.countercheck.review.CheckOutcome;
+import dev.countercheck.review.Severity;
+import dev.countercheck.submission.Point;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * {@code pile-reactions-deviation}: each pile in turn moved by the plan tolerance δ in each of eight
+ * directions (45° steps), the reactions recomputed for every ULS case; the worst reaction is
+ * reported. A caution, not a failure, unless it exceeds the pile's resistance.
+ */
+final class DeviationCheck {
+
+    private static final String BASIS = "EN 1992-1-1 9.8.1(1); 8 directions at 45° (common practice)";
+
+    private DeviationCheck() {
+    }
+
+    static CheckOutcome run(PileCapContext ctx) {
+        CheckBuilder b = Checks.builder("pile-reactions-deviation");
+        Step delta = ctx.cap.piles().toleranceMm()
+                .map(t -> Step.of("δ", "stated plan tolerance", Num.f(t), t, "mm", "submission"))
+                .orElseGet(() -> ctx.rules.parameter("pile_tolerance").asStep());
+        b.trace(delta);
+        if (ctx.cap.piles().toleranceMm().isEmpty()) {
+            b.caution("No pile positional tolerance was stated; " + Num.f(delta.value())
+                    + " mm was assumed (common practice).");
+        }
+        List<Point> nominal = ctx.cap.piles().positions();
+        double worst = Double.NEGATIVE_INFINITY;
+        String where = "";
+        double nominalMax = Double.NEGATIVE_INFINITY;
+        for (UlsCase u : ctx.uls) {
+            nominalMax = Math.max(nominalMax, u.withSelfWeight().max());
+            for (int moved = 0; moved < nominal.size(); moved++) {
+                for (int dir = 0; dir < 8; dir++) {
+                    double angle = Math.toRadians(45.0 * dir);
+                    List<Point> shifted = new ArrayList<>(nominal);
+                    Point p = nominal.get(moved);
+                    shifted.set(moved, new Point(p.xMm() + delta.value() * Math.cos(angle),
+                            p.yMm() + delta.value() * Math.sin(angle)));
+                    double[] r = ctx.reactions(shifted, u.action(), true).reactionsKn();
+                    for (int i = 0; i < r.length; i++) {
+                        if (r[i] > worst) {
+                            worst = r[i];
+                            where = "pile " + (i + 1) + " in " + u.action().name() + ", with pile " + (moved + 1)
+                                    + " moved " + Num.f(delta.value()) + " mm at " + (45 * dir) + "° from +x";
+                        }
+                    }
+                }
+            }
+        }
+        b.value("max", Step.of("P,max,δ", "max P_i with one pile off position by δ", where, worst, "kN", BASIS));
+        double rc = ctx.cap.piles().compressionKn();
+        b.require(worst, rc, Severity.CRITICAL, "With one pile " + Num.f(delta.value()) + " mm off position, "
+                + where + " carries " + Num.f(worst) + " kN, more than its design resistance " + Num.f(rc) + " kN.");
+        double rise = (worst - nominalMax) / nominalMax;
+        if (worst <= rc && rise > 0) {
+            b.caution("With one pile " + Num.f(delta.value()) + " mm off position the largest reaction rises to "
+                    + Num.f(worst) + " kN (+" + Num.f(rise * 100) + " %, " + where + "); check the as-built positions.");
+        }
+        return b.build();
+    }
+}

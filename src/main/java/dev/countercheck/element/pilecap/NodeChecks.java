@@ -1,0 +1,85 @@
+package dev.countercheck.element.pilecap;
+
+import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
+import dev.countercheck.eurocode.NodeType;
+import dev.countercheck.eurocode.Nodes;
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.review.CheckBuilder;
+import dev.countercheck.review.CheckOutcome;
+import dev.countercheck.review.Severity;
+import dev.countercheck.submission.Column;
+import dev.countercheck.submission.Point;
+
+/** {@code node-column} and {@code node-pile}: node stresses of the strut-and-tie model (6.5.4). */
+final class NodeChecks {
+
+    private NodeChecks() {
+    }
+
+    static CheckOutcome column(PileCapContext ctx) {
+        CheckBuilder b = Checks.builder("node-column");
+        Column c = ctx.cap.column();
+        double nMax = ctx.maxColumnN();
+        double as = c.starterBars().map(Column.StarterBars::areaMm2).orElse(0.0);
+        if (c.starterBars().isEmpty()) {
+            b.caution("No column starter bars were given: the column node was checked on concrete alone.");
+        }
+        b.trace(ctx.fyd);
+        Step area = b.trace(Step.of("Ac,col", c.shape() == Column.ColumnShape.CIRCULAR ? "π·D²/4" : "cx·cy",
+                Num.f(c.cxMm()) + (c.shape() == Column.ColumnShape.CIRCULAR ? "" : "·" + Num.f(c.cyMm())),
+                c.areaMm2(), "mm2", "column size"));
+        double sigma = Math.max(0, (nMax * 1000 - as * ctx.fyd.value()) / area.value());
+        Step stress = b.value("stress", Step.of("σEd", "(N,max − As,starters·fyd)/Ac,col",
+                "(" + Num.f(nMax) + "·1000 − " + Num.f(as) + "·" + Num.f(ctx.fyd.value()) + ")/" + Num.f(area.value()),
+                sigma, "MPa", "EN 1992-1-1 6.5.4; starter bars' share common practice"));
+        Step limit = b.value("limit", limit(ctx, b, NodeType.CCC, "node_k1"));
+        b.require(stress.value(), limit.value(), Severity.CRITICAL, "Column node stress " + Num.f(stress.value())
+                + " MPa exceeds σRd,max = " + Num.f(limit.value()) + " MPa.");
+        return b.build();
+    }
+
+    static CheckOutcome pile(PileCapContext ctx) {
+        CheckBuilder b = Checks.builder("node-pile");
+        int n = ctx.cap.piles().count();
+        double pMax = maxReaction(ctx);
+        double phi = ctx.cap.piles().diameterMm();
+        Step area = b.trace(Step.of("Ap", "π·φ²/4", "π·" + Num.f(phi) + "²/4", Math.PI * phi * phi / 4, "mm2",
+                "circular pile head"));
+        Step stress = b.value("stress", Step.of("σEd", "P,max/Ap", Num.f(pMax) + "·1000/" + Num.f(area.value()),
+                pMax * 1000 / area.value(), "MPa", "EN 1992-1-1 6.5.4"));
+        NodeType type = n >= 3 ? NodeType.CTT : n == 2 ? NodeType.CCT : NodeType.CCC;
+        String k = n >= 3 ? "node_k3" : n == 2 ? "node_k2" : "node_k1";
+        Step limit = b.value("limit", limit(ctx, b, type, k));
+        b.require(stress.value(), limit.value(), Severity.CRITICAL, "Pile node stress " + Num.f(stress.value())
+                + " MPa exceeds σRd,max = " + Num.f(limit.value()) + " MPa (" + type + " node).");
+        if (ctx.section.isPresent()) {
+            Point col = ctx.cap.column().position();
+            double far = ctx.cap.piles().positions().stream().mapToDouble(p -> p.distanceTo(col)).max().orElse(0);
+            if (far > 0) {
+                Step z = b.trace(Truss.leverArm(ctx.rules.number("lever_arm_factor"),
+                        ctx.section.get().dMean().value()));
+                Step angle = b.value("strut_angle", Nodes.strutAngle(z.value(), far));
+                Step min = b.trace(ctx.rules.parameter("strut_angle_min").asStep());
+                if (angle.value() < min.value()) {
+                    b.caution("The strut to the most distant pile is at " + Num.f(angle.value()) + "° to the horizontal,"
+                            + " flatter than " + Num.f(min.value()) + "°: the truss model is doubtful for this cap"
+                            + " (common practice).");
+                }
+            }
+        }
+        return b.build();
+    }
+
+    private static Step limit(PileCapContext ctx, CheckBuilder b, NodeType type, String kParameter) {
+        Step nuPrime = b.trace(Nodes.nuPrime(ctx.fck.value()));
+        b.trace(ctx.fcd);
+        Step k = b.trace(ctx.rules.parameter(kParameter).asStep());
+        return Nodes.nodeLimit(type, k.value(), nuPrime.value(), ctx.fcd.value());
+    }
+
+    static double maxReaction(PileCapContext ctx) {
+        return ctx.uls.stream().map(UlsCase::withSelfWeight).mapToDouble(RigidCapReactions.Distribution::max)
+                .max().orElse(0);
+    }
+}

@@ -1,0 +1,104 @@
+package dev.countercheck.element.pilecap;
+
+import dev.countercheck.element.pilecap.RigidCapReactions.Distribution;
+import dev.countercheck.element.pilecap.RigidCapReactions.Load;
+import dev.countercheck.eurocode.Materials;
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.ruleset.Ruleset;
+import dev.countercheck.submission.ActionCase;
+import dev.countercheck.submission.PileCap;
+import dev.countercheck.submission.Point;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * What every pile-cap check needs, computed once: material strengths, the section, and the pile
+ * reactions of every ULS case (with the cap's own weight, and from the column actions alone).
+ */
+final class PileCapContext {
+
+    /** One ULS case with its reactions. */
+    record UlsCase(ActionCase action, Distribution withSelfWeight, Distribution columnOnly) {
+    }
+
+    final PileCap cap;
+    final Ruleset rules;
+    final Optional<CapSection> section;
+    final List<UlsCase> uls;
+    final Step selfWeight;
+    final Step fck;
+    final Step fctm;
+    final Step fctk005;
+    final Step fcd;
+    final Step fcdShear;
+    final Step fctd;
+    final Step fyd;
+
+    PileCapContext(PileCap cap, Ruleset rules) {
+        this.cap = cap;
+        this.rules = rules;
+        this.section = CapSection.of(cap);
+        double fckMpa = cap.materials().fckMpa();
+        this.fck = Step.of("fck", "characteristic cylinder strength",
+                cap.materials().concreteClass().orElse("fck given"), fckMpa, "MPa", "EN 1992-1-1 Table 3.1");
+        this.fctm = Materials.fctm(fckMpa);
+        this.fctk005 = Materials.fctk005(fctm.value());
+        double gammaC = rules.number("gamma_c");
+        this.fcd = Materials.fcd(rules.number("alpha_cc"), fckMpa, gammaC);
+        this.fcdShear = Materials.fcd(rules.number("alpha_cc_shear"), fckMpa, gammaC);
+        this.fctd = Materials.fctd(rules.number("alpha_ct"), fctk005.value(), gammaC);
+        this.fyd = Materials.fyd(cap.materials().fykMpa(), rules.number("gamma_s"));
+        double weight = rules.number("concrete_unit_weight") * cap.planXMm() * cap.planYMm() * cap.depthMm() / 1e9;
+        this.selfWeight = Step.of("Wcap", "γconc·Lx·Ly·h", Num.f(rules.number("concrete_unit_weight")) + "·"
+                        + Num.f(cap.planXMm() / 1000) + "·" + Num.f(cap.planYMm() / 1000) + "·"
+                        + Num.f(cap.depthMm() / 1000), weight, "kN", "EN 1991-1-1 Table A.1");
+        List<UlsCase> cases = new ArrayList<>();
+        for (ActionCase a : cap.actions()) {
+            if (a.kind() == ActionCase.Kind.ULS) {
+                cases.add(new UlsCase(a, reactions(a, addsSelfWeight()), reactions(a, false)));
+            }
+        }
+        this.uls = List.copyOf(cases);
+    }
+
+    boolean addsSelfWeight() {
+        return cap.selfWeight() == PileCap.SelfWeight.ADD;
+    }
+
+    /** γG·Wcap, the factored self weight the review adds to each ULS case (0 when already included). */
+    double factoredSelfWeightKn() {
+        return addsSelfWeight() ? rules.number("gamma_g") * selfWeight.value() : 0.0;
+    }
+
+    Distribution reactions(ActionCase a, boolean withSelfWeight) {
+        return reactions(cap.piles().positions(), a, withSelfWeight);
+    }
+
+    /** Reactions of piles at {@code piles} (which may be moved off position) under action case {@code a}. */
+    Distribution reactions(List<Point> piles, ActionCase a, boolean withSelfWeight) {
+        List<Load> loads = new ArrayList<>();
+        loads.add(new Load("N", a.nKn(), cap.column().position()));
+        if (withSelfWeight && addsSelfWeight()) {
+            loads.add(new Load("γG·Wcap", factoredSelfWeightKn(), new Point(0, 0)));
+        }
+        double h = cap.depthMm() / 1000.0;
+        return RigidCapReactions.solve(piles, loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h);
+    }
+
+    /** The largest column N over the ULS cases (the cap's own weight is not part of it). */
+    double maxColumnN() {
+        return uls.stream().mapToDouble(u -> u.action().nKn()).max().orElse(0);
+    }
+
+    boolean anyMoment() {
+        return uls.stream().anyMatch(u -> u.action().mxKnm() != 0 || u.action().myKnm() != 0
+                || u.action().hxKn() != 0 || u.action().hyKn() != 0);
+    }
+
+    String clauseOf(String parameter) {
+        return rules.parameter(parameter).clause();
+    }
+}

@@ -1,0 +1,78 @@
+package dev.countercheck.element.pilecap;
+
+import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
+import dev.countercheck.element.pilecap.RigidCapReactions.Distribution;
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.review.CheckBuilder;
+import dev.countercheck.review.CheckOutcome;
+import dev.countercheck.review.Severity;
+
+/**
+ * {@code pile-reactions}: the largest and least pile reactions over the ULS cases, against the
+ * piles' design resistances in compression and tension.
+ */
+final class ReactionsCheck {
+
+    private static final String BASIS = "rigid cap, linear distribution (common practice)";
+
+    private ReactionsCheck() {
+    }
+
+    static CheckOutcome run(PileCapContext ctx) {
+        CheckBuilder b = Checks.builder("pile-reactions");
+        if (ctx.addsSelfWeight()) {
+            b.trace(ctx.selfWeight);
+            b.trace(ctx.rules.parameter("gamma_g").asStep());
+        }
+        Extreme max = Extreme.over(ctx, true);
+        Extreme min = Extreme.over(ctx, false);
+        RigidCapReactions.trace(max.distribution, max.caseName).forEach(b::trace);
+        if (!min.caseName.equals(max.caseName)) {
+            RigidCapReactions.trace(min.distribution, min.caseName).forEach(b::trace);
+        }
+        b.value("max", Step.of("P,max", "max P_i over piles and ULS cases",
+                "pile " + max.pile + " in " + max.caseName, max.value, "kN", BASIS));
+        b.value("min", Step.of("P,min", "min P_i over piles and ULS cases",
+                "pile " + min.pile + " in " + min.caseName, min.value, "kN", BASIS));
+        double rc = ctx.cap.piles().compressionKn();
+        double rt = ctx.cap.piles().tensionKn();
+        b.require(max.value, rc, Severity.CRITICAL, "Pile " + max.pile + " carries " + show(max.value) + " in "
+                + max.caseName + ", more than its design resistance " + show(rc) + ".");
+        if (min.value < 0) {
+            b.require(-min.value, rt, Severity.CRITICAL, "Pile " + min.pile + " is in tension, " + show(-min.value)
+                    + " in " + min.caseName + ", beyond its tension resistance " + show(rt) + ".");
+        }
+        for (UlsCase u : ctx.uls) {
+            double m = u.withSelfWeight().unresistedKnm();
+            if (m > 0.5) {
+                b.finding(Severity.MAJOR, "The piles lie on one line: in " + u.action().name() + " a moment of "
+                        + CheckBuilder.show(m, "kNm") + " about that line is not resisted by the pile group. "
+                        + "It needs tie beams or another restraint, which this review did not check.");
+            }
+        }
+        return b.build();
+    }
+
+    private static String show(double kn) {
+        return Num.f(kn) + " kN";
+    }
+
+    /** The governing reaction of one kind (largest or least) over all ULS cases. */
+    private record Extreme(double value, int pile, String caseName, Distribution distribution) {
+
+        static Extreme over(PileCapContext ctx, boolean largest) {
+            Extreme best = null;
+            for (UlsCase u : ctx.uls) {
+                double[] p = u.withSelfWeight().reactionsKn();
+                for (int i = 0; i < p.length; i++) {
+                    boolean better = best == null || (largest ? p[i] > best.value : p[i] < best.value);
+                    if (better) {
+                        best = new Extreme(p[i], i + 1, u.action().name(), u.withSelfWeight());
+                    }
+                }
+            }
+            return best;
+        }
+    }
+}

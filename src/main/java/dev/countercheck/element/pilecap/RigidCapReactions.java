@@ -1,0 +1,126 @@
+package dev.countercheck.element.pilecap;
+
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.submission.Point;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Pile reactions under a rigid cap, distributed linearly (common practice):
+ * P_i = V/n + a·(x_i − x̄) + b·(y_i − ȳ), with (a, b) from
+ * [Σdx² Σdxdy; Σdxdy Σdy²]·[a; b] = [My*; Mx*], which also serves groups that are not symmetric.
+ * A collinear group (two piles, a single row) carries only the moment in its own line; the moment
+ * about the line is returned as {@link Distribution#unresistedKnm()} for the reviewer to report.
+ */
+final class RigidCapReactions {
+
+    /** A vertical load (kN, downwards positive) at a plan position (mm). */
+    record Load(String name, double forceKn, Point at) {
+    }
+
+    /**
+     * The result for one set of loads.
+     *
+     * @param totalKn      V, the sum of the vertical loads
+     * @param mxStarKnm    Mx* about the pile-group centroid
+     * @param myStarKnm    My* about the pile-group centroid
+     * @param reactionsKn  P_i in pile order
+     * @param unresistedKnm the moment about the line of a collinear group (0 otherwise)
+     */
+    record Distribution(double totalKn, double mxStarKnm, double myStarKnm, double[] reactionsKn,
+                        double unresistedKnm) {
+
+        double max() {
+            return java.util.Arrays.stream(reactionsKn).max().orElse(0);
+        }
+
+        double min() {
+            return java.util.Arrays.stream(reactionsKn).min().orElse(0);
+        }
+    }
+
+    private RigidCapReactions() {
+    }
+
+    static Distribution solve(List<Point> piles, List<Load> loads, double mxKnm, double myKnm) {
+        int n = piles.size();
+        double xBar = piles.stream().mapToDouble(Point::xMm).average().orElse(0);
+        double yBar = piles.stream().mapToDouble(Point::yMm).average().orElse(0);
+        double v = 0;
+        double mx = mxKnm;
+        double my = myKnm;
+        for (Load load : loads) {
+            v += load.forceKn();
+            mx += load.forceKn() * (load.at().yMm() - yBar) / 1000.0;
+            my += load.forceKn() * (load.at().xMm() - xBar) / 1000.0;
+        }
+        double[] dx = new double[n];
+        double[] dy = new double[n];
+        double sxx = 0;
+        double syy = 0;
+        double sxy = 0;
+        for (int i = 0; i < n; i++) {
+            dx[i] = piles.get(i).xMm() - xBar;
+            dy[i] = piles.get(i).yMm() - yBar;
+            sxx += dx[i] * dx[i];
+            syy += dy[i] * dy[i];
+            sxy += dx[i] * dy[i];
+        }
+        double[] p = new double[n];
+        double det = sxx * syy - sxy * sxy;
+        double scale = (sxx + syy) * (sxx + syy);
+        if (n == 1) {
+            p[0] = v;
+            return new Distribution(v, mx, my, p, Math.hypot(mx, my));
+        }
+        if (det <= 1e-9 * scale) {
+            double ux;
+            double uy;
+            if (sxx >= syy) {
+                double len = Math.hypot(sxx, sxy);
+                ux = sxx / len;
+                uy = sxy / len;
+            } else {
+                double len = Math.hypot(sxy, syy);
+                ux = sxy / len;
+                uy = syy / len;
+            }
+            double inLine = (my * ux + mx * uy) * 1000.0;
+            double ss = 0;
+            double[] s = new double[n];
+            for (int i = 0; i < n; i++) {
+                s[i] = dx[i] * ux + dy[i] * uy;
+                ss += s[i] * s[i];
+            }
+            for (int i = 0; i < n; i++) {
+                p[i] = v / n + inLine * s[i] / ss;
+            }
+            return new Distribution(v, mx, my, p, Math.abs(mx * ux - my * uy));
+        }
+        double a = (my * 1000.0 * syy - mx * 1000.0 * sxy) / det;
+        double b = (mx * 1000.0 * sxx - my * 1000.0 * sxy) / det;
+        for (int i = 0; i < n; i++) {
+            p[i] = v / n + a * dx[i] + b * dy[i];
+        }
+        return new Distribution(v, mx, my, p, 0.0);
+    }
+
+    /** Trace steps of a distribution: V, Mx*, My* and every P_i. */
+    static List<Step> trace(Distribution d, String caseName) {
+        String basis = "rigid cap, linear distribution (common practice)";
+        List<Step> steps = new ArrayList<>();
+        steps.add(Step.of("V (" + caseName + ")", "Σ vertical loads", Num.f(d.totalKn()), d.totalKn(), "kN", basis));
+        steps.add(Step.of("Mx* (" + caseName + ")", "Mx + Hy·h + Σ F·(y_F − ȳ)", Num.f(d.mxStarKnm()),
+                d.mxStarKnm(), "kNm", basis));
+        steps.add(Step.of("My* (" + caseName + ")", "My + Hx·h + Σ F·(x_F − x̄)", Num.f(d.myStarKnm()),
+                d.myStarKnm(), "kNm", basis));
+        double[] p = d.reactionsKn();
+        for (int i = 0; i < p.length; i++) {
+            steps.add(Step.of("P" + (i + 1) + " (" + caseName + ")", "V/n + a·(x_i − x̄) + b·(y_i − ȳ)",
+                    Num.f(p[i]), p[i], "kN", basis));
+        }
+        return steps;
+    }
+}

@@ -1,0 +1,126 @@
+package dev.countercheck.element.pilecap;
+
+import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.Shear;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.review.CheckBuilder;
+import dev.countercheck.review.CheckOutcome;
+import dev.countercheck.review.Severity;
+import dev.countercheck.submission.Point;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * {@code shear-x}, {@code shear-y}: one-way shear across the full cap width (6.2.2). On each side of
+ * the column the piles whose centres lie beyond the column face load the section; each pile's
+ * contribution is reduced by its own β = av/2d (6.2.2(6)), av measured to a point 0.2φ inside the
+ * pile face (common practice) and not taken below 0.5d.
+ */
+final class ShearCheck {
+
+    private ShearCheck() {
+    }
+
+    /** One side of one case: reduced and unreduced shear, and the steps of its nearest pile. */
+    private record Side(double ved, double unreduced, String caseName, Step av, Step beta, List<Step> steps) {
+    }
+
+    static CheckOutcome run(PileCapContext ctx, Axis axis) {
+        CheckBuilder b = Checks.builder("shear-" + axis.label());
+        if (ctx.section.isEmpty()) {
+            return b.notChecked("no bottom reinforcement given: d and ρl are unknown").build();
+        }
+        CapSection section = ctx.section.get();
+        Step d = b.trace(section.d(axis.bars()));
+        Side worst = null;
+        Side worstUnreduced = null;
+        for (UlsCase u : ctx.uls) {
+            for (int sign : new int[] {1, -1}) {
+                Side side = side(ctx, axis, sign, d.value(), u);
+                if (side == null) {
+                    continue;
+                }
+                if (worst == null || side.ved > worst.ved) {
+                    worst = side;
+                }
+                if (worstUnreduced == null || side.unreduced > worstUnreduced.unreduced) {
+                    worstUnreduced = side;
+                }
+            }
+        }
+        if (worst == null) {
+            return b.notApplicable("no pile centre lies beyond the column face along " + axis.label()).build();
+        }
+        worst.steps.forEach(b::trace);
+        b.value("av", worst.av);
+        b.value("beta", worst.beta);
+        Step ved = b.value("ved", Step.of("VEd", "Σ β_i·P_i (piles beyond the face)", worst.caseName,
+                worst.ved, "kN", "EN 1992-1-1 6.2.2(6)"));
+        Step unreduced = b.value("ved_unreduced", Step.of("VEd,0", "Σ P_i (piles beyond the face)",
+                worstUnreduced.caseName, worstUnreduced.unreduced, "kN", "EN 1992-1-1 6.2.2(6)"));
+        double width = axis.capWidth(ctx.cap);
+        Step nu = b.trace(Shear.nu(ctx.fck.value()));
+        b.trace(ctx.fcdShear);
+        Step vMax = b.value("vrd_max", Shear.vEdMax(nu.value(), ctx.fcdShear.value(), width, d.value()));
+        Step rho = b.trace(Shear.rhoL(section.as(axis.bars()).value(), width, d.value()));
+        Step k = b.trace(Shear.kSize(d.value()));
+        double gammaC = ctx.rules.number("gamma_c");
+        double cRdcFactor = ctx.rules.number("c_rdc_factor");
+        Step cRdc = b.trace(Step.of("CRd,c", "0.18/γc", Num.f(cRdcFactor) + "/" + Num.f(gammaC), cRdcFactor / gammaC,
+                "-", ctx.clauseOf("c_rdc_factor")));
+        Step stress = b.trace(Shear.vRdcStress(cRdc.value(), k.value(), rho.value(), ctx.fck.value()));
+        Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), ctx.fck.value()));
+        Step vrdc = b.value("vrdc", Shear.vRdc(stress, vMin, width, d.value()));
+        b.require(ved.value(), vrdc.value(), Severity.CRITICAL, "VEd = " + Num.f(ved.value()) + " kN exceeds VRd,c = "
+                + Num.f(vrdc.value()) + " kN on the section across " + axis.label() + " (" + worst.caseName + ").");
+        b.require(unreduced.value(), vMax.value(), Severity.CRITICAL, "Unreduced VEd = " + Num.f(unreduced.value())
+                + " kN exceeds 0.5·b·d·ν·fcd = " + Num.f(vMax.value()) + " kN (EN 1992-1-1 6.2.2(6)).");
+        double phi = ctx.cap.piles().diameterMm();
+        if (ctx.cap.piles().count() > 1 && GeometryChecks.minSpacing(ctx.cap)
+                > ctx.rules.number("pile_spacing_factor") * phi + 1e-6) {
+            b.caution("Pile spacing exceeds " + Num.f(ctx.rules.number("pile_spacing_factor"))
+                    + "φ: the full cap width was taken in one-way shear, which may not all be effective"
+                    + " (common practice).");
+        }
+        return b.build();
+    }
+
+    /** The side {@code sign} (+1 beyond the +face, −1 beyond the −face) of case {@code u}, or null when empty. */
+    private static Side side(PileCapContext ctx, Axis axis, int sign, double dMm, UlsCase u) {
+        double face = axis.along(ctx.cap.column().position()) + sign * axis.columnHalf(ctx.cap.column());
+        double phi = ctx.cap.piles().diameterMm();
+        List<Point> piles = ctx.cap.piles().positions();
+        double[] p = u.withSelfWeight().reactionsKn();
+        double ved = 0;
+        double unreduced = 0;
+        Step nearestAv = null;
+        Step nearestBeta = null;
+        List<Step> steps = new ArrayList<>();
+        for (int i = 0; i < piles.size(); i++) {
+            double distance = sign * (axis.along(piles.get(i)) - face);
+            if (distance <= 0) {
+                continue;
+            }
+            Step raw = Step.of("av,raw,P" + (i + 1), "(face to pile centre) − 0.3φ",
+                    Num.f(distance) + " − 0.3·" + Num.f(phi), distance - 0.3 * phi, "mm",
+                    "critical section 0.2φ inside the pile face (common practice)");
+            Step av = Shear.avFloored(raw.value(), dMm);
+            Step beta = Shear.betaShortSpan(av.value(), dMm);
+            steps.add(raw);
+            steps.add(av);
+            steps.add(beta);
+            ved += beta.value() * p[i];
+            unreduced += p[i];
+            if (nearestAv == null || av.value() < nearestAv.value()) {
+                nearestAv = av;
+                nearestBeta = beta;
+            }
+        }
+        if (nearestAv == null) {
+            return null;
+        }
+        return new Side(Math.max(0, ved), Math.max(0, unreduced), u.action().name(), nearestAv, nearestBeta, steps);
+    }
+}

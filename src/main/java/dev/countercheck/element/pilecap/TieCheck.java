@@ -1,0 +1,106 @@
+package dev.countercheck.element.pilecap;
+
+import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
+import dev.countercheck.eurocode.Bending;
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.OutOfRangeException;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.review.CheckBuilder;
+import dev.countercheck.review.CheckOutcome;
+import dev.countercheck.review.Severity;
+import dev.countercheck.submission.PileCap.TieMethod;
+import dev.countercheck.submission.Point;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * {@code tie-x}, {@code tie-y}: the bottom tie steel of one direction, by the truss method (single
+ * node under the column centre) or, when the submission declares it, by the bending method at the
+ * column face.
+ */
+final class TieCheck {
+
+    private TieCheck() {
+    }
+
+    /** The governing side of one case: the sum Σ P_i·l_i (kN·mm) and its terms for the trace. */
+    private record Side(double sumKnMm, String terms, String caseName) {
+    }
+
+    static CheckOutcome run(PileCapContext ctx, Axis axis) {
+        CheckBuilder b = Checks.builder("tie-" + axis.label());
+        if (ctx.section.isEmpty()) {
+            return b.notChecked("no bottom reinforcement given: d and As,prov are unknown").build();
+        }
+        CapSection section = ctx.section.get();
+        Step d = b.trace(section.d(axis.bars()));
+        b.trace(ctx.fyd);
+        boolean bending = ctx.cap.tieMethod() == TieMethod.BENDING;
+        double offset = bending ? axis.columnHalf(ctx.cap.column()) : 0.0;
+        Side side = governing(ctx, axis, offset);
+        Step force;
+        Step required;
+        if (bending) {
+            b.caution("Ties of " + ctx.cap.id() + " were designed by the bending method (as declared): moments at the"
+                    + " column face, rectangular stress block (EN 1992-1-1 3.1.7(3)).");
+            Step moment = b.value("moment", Step.of("M", "Σ P_i·(distance beyond the column face)",
+                    side.terms + " (" + side.caseName + ")", side.sumKnMm / 1000, "kNm", "EN 1992-1-1 6.1"));
+            double width = axis.capWidth(ctx.cap);
+            Step k = b.trace(Bending.kFactor(moment.value(), width, d.value(), ctx.fck.value()));
+            Step kPrime = b.trace(ctx.rules.parameter("k_prime").asStep());
+            if (k.value() > kPrime.value()) {
+                b.fail(Severity.CRITICAL, "K = " + Num.f(k.value()) + " exceeds K' = " + Num.f(kPrime.value())
+                        + ": the section needs compression steel or more depth.");
+            }
+            Step z;
+            try {
+                z = b.value("z", Bending.leverArm(k.value(), d.value(), ctx.rules.number("alpha_cc"),
+                        ctx.rules.number("gamma_c")));
+            } catch (OutOfRangeException e) {
+                return b.fail(Severity.CRITICAL, e.getMessage()).build();
+            }
+            force = b.value("force", Truss.forceFromMoment(moment.value(), z.value()));
+            required = b.value("as_required", Bending.asRequired(moment.value(), ctx.fyd.value(), z.value()));
+        } else {
+            Step z = b.value("z", Truss.leverArm(ctx.rules.number("lever_arm_factor"), d.value()));
+            force = b.value("force", Truss.tieForce(side.sumKnMm, side.terms + " (" + side.caseName + ")", z.value()));
+            required = b.value("as_required", Truss.tieArea(force.value(), ctx.fyd.value()));
+        }
+        Step provided = b.value("as_provided", section.as(axis.bars()));
+        if (force.value() == 0) {
+            return b.pass().build();
+        }
+        b.require(required.value(), provided.value(), Severity.CRITICAL, "Bottom " + axis.label() + "-bars give "
+                + Num.f(provided.value()) + " mm2, less than the " + Num.f(required.value()) + " mm2 the tie needs.");
+        return b.build();
+    }
+
+    /**
+     * The side and ULS case with the largest Σ P_i·l_i, l_i measured from the column centre plus
+     * {@code offset} (0 for the truss node, half the column for the face), piles beyond it only.
+     */
+    private static Side governing(PileCapContext ctx, Axis axis, double offset) {
+        double centre = axis.along(ctx.cap.column().position());
+        List<Point> piles = ctx.cap.piles().positions();
+        Side best = new Side(0, "no pile beyond the column", ctx.uls.get(0).action().name());
+        for (UlsCase u : ctx.uls) {
+            double[] p = u.withSelfWeight().reactionsKn();
+            for (int sign : new int[] {1, -1}) {
+                double sum = 0;
+                List<String> terms = new ArrayList<>();
+                for (int i = 0; i < piles.size(); i++) {
+                    double lever = sign * (axis.along(piles.get(i)) - centre) - offset;
+                    if (lever > 0) {
+                        sum += p[i] * lever;
+                        terms.add(Num.f(p[i]) + "·" + Num.f(lever));
+                    }
+                }
+                if (sum > best.sumKnMm) {
+                    best = new Side(sum, String.join(" + ", terms), u.action().name());
+                }
+            }
+        }
+        return best;
+    }
+}

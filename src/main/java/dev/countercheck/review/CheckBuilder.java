@@ -1,0 +1,134 @@
+package dev.countercheck.review;
+
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.submission.CheckCatalogue.CheckSpec;
+import dev.countercheck.submission.CheckCatalogue.QuantitySpec;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+/**
+ * Collects one check's values, trace, status, findings and cautions while a reviewer computes it.
+ * Every value goes in under a quantity name of the check's catalogue entry, so the unit that the
+ * result carries is the catalogue's.
+ */
+public final class CheckBuilder {
+
+    private final CheckSpec spec;
+    private final Map<String, Value> values = new LinkedHashMap<>();
+    private final List<Step> trace = new ArrayList<>();
+    private final List<DraftFinding> findings = new ArrayList<>();
+    private final List<String> cautions = new ArrayList<>();
+    private CheckStatus status = CheckStatus.NOT_CHECKED;
+    private OptionalDouble utilisation = OptionalDouble.empty();
+    private Optional<String> reason = Optional.of("not computed");
+    private final List<String> failures = new ArrayList<>();
+
+    public CheckBuilder(CheckSpec spec) {
+        this.spec = spec;
+    }
+
+    public String id() {
+        return spec.id();
+    }
+
+    /** Adds a step to the trace and returns it, so that a computation reads as a sequence. */
+    public Step trace(Step step) {
+        trace.add(step);
+        return step;
+    }
+
+    /** Records {@code step} as the check's quantity {@code name} (and in the trace). */
+    public Step value(String name, Step step) {
+        QuantitySpec q = spec.quantity(name)
+                .orElseThrow(() -> new IllegalArgumentException(spec.id() + " has no quantity " + name));
+        if (!q.unit().equals(step.unit())) {
+            throw new IllegalArgumentException(spec.id() + "." + name + " is in " + q.unit() + ", step "
+                    + step.symbol() + " is in " + step.unit());
+        }
+        if (trace.stream().noneMatch(s -> s == step)) {
+            trace(step);
+        }
+        values.put(name, new Value(step.value(), q.unit()));
+        return step;
+    }
+
+    /**
+     * Sets pass or fail from {@code demand ≤ capacity} (equality passes), with the utilisation
+     * demand/capacity. A failure raises a finding of {@code failSeverity} with {@code failMessage}.
+     */
+    public CheckBuilder require(double demand, double capacity, Severity failSeverity, String failMessage) {
+        double u = capacity > 0 ? demand / capacity : (demand > 0 ? Double.POSITIVE_INFINITY : 0);
+        if (Double.isFinite(u)) {
+            utilisation = OptionalDouble.of(Math.max(u, utilisation.orElse(0)));
+        }
+        if (demand > capacity) {
+            fail(failSeverity, failMessage);
+        } else if (status != CheckStatus.FAIL) {
+            status = CheckStatus.PASS;
+            reason = Optional.empty();
+        }
+        return this;
+    }
+
+    /** Marks the check failed with a finding; a later {@link #require} cannot turn it back to pass. */
+    public CheckBuilder fail(Severity severity, String message) {
+        status = CheckStatus.FAIL;
+        failures.add(message);
+        findings.add(new DraftFinding(severity, spec.id(), message, spec.basis()));
+        return this;
+    }
+
+    /** The check passes (for checks with no demand/capacity comparison, e.g. geometry notes). */
+    public CheckBuilder pass() {
+        if (status != CheckStatus.FAIL) {
+            status = CheckStatus.PASS;
+            reason = Optional.empty();
+        }
+        return this;
+    }
+
+    public CheckBuilder notApplicable(String why) {
+        status = CheckStatus.NOT_APPLICABLE;
+        reason = Optional.of(why);
+        return this;
+    }
+
+    public CheckBuilder notChecked(String why) {
+        status = CheckStatus.NOT_CHECKED;
+        reason = Optional.of(why);
+        return this;
+    }
+
+    /** A finding that does not change the status (a note, a remark on geometry). */
+    public CheckBuilder finding(Severity severity, String message) {
+        findings.add(new DraftFinding(severity, spec.id(), message, spec.basis()));
+        return this;
+    }
+
+    public CheckBuilder caution(String text) {
+        cautions.add(text);
+        return this;
+    }
+
+    /** "1870 kN" for messages. */
+    public static String show(double value, String unit) {
+        return Num.f(value) + ("-".equals(unit) ? "" : " " + unit);
+    }
+
+    public CheckOutcome build() {
+        Map<String, Value> ordered = new LinkedHashMap<>();
+        spec.quantities().stream().filter(q -> values.containsKey(q.name()))
+                .forEach(q -> ordered.put(q.name(), values.get(q.name())));
+        Optional<String> why = status == CheckStatus.FAIL ? Optional.of(String.join("; ", failures)) : reason;
+        CheckResult result = new CheckResult(spec.id(), spec.title(), spec.basis(), status, utilisation, why,
+                Collections.unmodifiableMap(ordered), List.of(), List.copyOf(trace));
+        return new CheckOutcome(result, List.copyOf(findings), List.copyOf(cautions));
+    }
+}

@@ -1,0 +1,110 @@
+package dev.countercheck.review;
+
+import dev.countercheck.submission.CheckCatalogue;
+import dev.countercheck.submission.CheckCatalogue.CheckSpec;
+import dev.countercheck.submission.CheckCatalogue.QuantitySpec;
+import dev.countercheck.submission.Claim;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+
+/**
+ * Turns the outcomes of an element's checks and the designer's claims into the element's review:
+ * claims compared, findings numbered with stable ids, verdict decided. Shared by every element type.
+ */
+public final class ElementAssembler {
+
+    private final ClaimComparer comparer;
+
+    public ElementAssembler(ClaimComparer comparer) {
+        this.comparer = comparer;
+    }
+
+    public ElementReview assemble(String id, String type, String description, List<CheckOutcome> outcomes,
+                                  List<Claim> claims, List<String> elementCautions) {
+        Map<String, CheckResult> results = new LinkedHashMap<>();
+        Map<String, List<DraftFinding>> drafts = new LinkedHashMap<>();
+        List<String> cautions = new ArrayList<>(elementCautions);
+        for (CheckOutcome o : outcomes) {
+            results.put(o.result().id(), o.result());
+            drafts.computeIfAbsent(o.result().id(), k -> new ArrayList<>()).addAll(o.findings());
+            o.cautions().stream().filter(c -> !cautions.contains(c)).forEach(cautions::add);
+        }
+        Map<String, List<ClaimComparison>> compared = new HashMap<>();
+        for (Claim claim : claims) {
+            CheckSpec spec = CheckCatalogue.check(type, claim.checkId());
+            QuantitySpec q = spec.quantity(claim.quantity()).orElseThrow();
+            CheckResult r = results.get(claim.checkId());
+            Value computed = r == null ? null : r.values().get(claim.quantity());
+            List<DraftFinding> list = drafts.computeIfAbsent(claim.checkId(), k -> new ArrayList<>());
+            if (computed == null) {
+                list.add(new DraftFinding(Severity.NOTE, claim.checkId(), "Claimed " + claim.checkId() + "."
+                        + claim.quantity() + " = " + CheckBuilder.show(claim.value(), q.unit())
+                        + " was not compared: " + notComparedReason(r), spec.basis()));
+                continue;
+            }
+            ClaimComparison c = comparer.compare(claim, computed.value(), q.safeSide());
+            compared.computeIfAbsent(claim.checkId(), k -> new ArrayList<>()).add(c);
+            comparer.findingFor(c, spec, q).ifPresent(list::add);
+        }
+        List<CheckResult> checks = results.values().stream()
+                .map(r -> withClaims(r, compared.getOrDefault(r.id(), List.of()))).toList();
+        List<Finding> findings = number(id, drafts);
+        return new ElementReview(id, type, description, verdict(checks, findings), checks, findings,
+                List.copyOf(cautions));
+    }
+
+    private static String notComparedReason(CheckResult r) {
+        if (r == null) {
+            return "this check is not part of the review.";
+        }
+        return r.reason().map(why -> "the check is " + r.status().label() + " (" + why + ").")
+                .orElse("the check does not compute this quantity for the method used.");
+    }
+
+    private static CheckResult withClaims(CheckResult r, List<ClaimComparison> claims) {
+        return new CheckResult(r.id(), r.title(), r.basis(), r.status(), r.utilisation(), r.reason(), r.values(),
+                List.copyOf(claims), r.trace());
+    }
+
+    /** Ids {@code <element>/<check>/<n>}, n counting from 1 within a check in the order raised. */
+    private static List<Finding> number(String elementId, Map<String, List<DraftFinding>> drafts) {
+        List<Finding> out = new ArrayList<>();
+        drafts.forEach((check, list) -> {
+            for (int i = 0; i < list.size(); i++) {
+                DraftFinding d = list.get(i);
+                out.add(new Finding(elementId + "/" + check + "/" + (i + 1), d.severity(), check, d.message(),
+                        d.basis()));
+            }
+        });
+        out.sort(Comparator.comparing(Finding::severity));
+        return List.copyOf(out);
+    }
+
+    /**
+     * does-not-conform when a critical or major finding stands; else incomplete when a check could
+     * not be done; else conforms-with-remarks when a minor finding or a note stands; else conforms.
+     */
+    public static Verdict verdict(List<CheckResult> checks, List<Finding> findings) {
+        if (findings.stream().anyMatch(f -> f.severity().atLeast(Severity.MAJOR))) {
+            return Verdict.DOES_NOT_CONFORM;
+        }
+        if (checks.stream().anyMatch(c -> c.status() == CheckStatus.NOT_CHECKED)) {
+            return Verdict.INCOMPLETE;
+        }
+        return findings.isEmpty() ? Verdict.CONFORMS : Verdict.CONFORMS_WITH_REMARKS;
+    }
+
+    /** The worst of the elements' verdicts: does-not-conform, incomplete, with remarks, conforms. */
+    public static Verdict overall(List<ElementReview> elements) {
+        List<Verdict> order = List.of(Verdict.DOES_NOT_CONFORM, Verdict.INCOMPLETE, Verdict.CONFORMS_WITH_REMARKS);
+        return order.stream().filter(v -> elements.stream().anyMatch(e -> e.verdict() == v)).findFirst()
+                .orElse(Verdict.CONFORMS);
+    }
+
+}

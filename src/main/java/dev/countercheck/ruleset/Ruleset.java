@@ -1,0 +1,33 @@
+package dev.countercheck.ruleset;
+
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The effective ruleset: a ruleset file with everything it {@code extends} resolved.
+ *
+ * @param id          the id of the most specific file
+ * @param title       its title
+ * @param standard    the standard and annex it represents
+ * @param version     its own version
+ * @param sha256      hash over the contents of every file of the chain, most general first
+ * @param files       the files of the chain, most general first
+ * @param parameters  every parameter by name, with the file that set its value
+ */
+public record Ruleset(String id, String title, String standard, String version, String sha256, List<String> files,
+                      Map<String, Parameter> parameters) {
+
+    /** The parameter {@code name}; every name the engine asks for is validated at load. */
+    public Parameter parameter(String name) {
+        Parameter p = parameters.get(name);
+        if (p == null) {
+            throw new IllegalStateException("ruleset " + id + " has no parameter '" + name
+                    + "' (the loader should have refused it)");
+        }
+        return p;
+    }
+
+    public double number(String name) {
+        return parameter(name).value();
+    }
+}
