@@ -22,37 +22,40 @@ import java.util.stream.IntStream;
  * An absent value is the empty string; the template tests it with {@code ?has_content}.
  * Enum values travel as their JSON labels. Anchors are positional ({@code e2}, {@code e2-c3})
  * because element and check ids may hold any character.
+ *
+ * <p>Public only because the template engine reads public members of public classes; it is the
+ * template's view, not an API: build reports with {@link HtmlReportWriter}.
  */
-record HtmlModel(Header header, List<Count> verdictCounts, List<Count> severityCounts, List<String> assumptions,
+public record HtmlModel(Header header, List<Count> verdictCounts, List<Count> severityCounts, List<String> assumptions,
                  List<FindingRow> register, List<ElementView> elements) {
 
-    record Header(String title, String reference, String revision, String preparedBy, String submissionDate,
+    public record Header(String title, String reference, String revision, String preparedBy, String submissionDate,
                   String file, String sha256, String rulesetId, String rulesetTitle, String rulesetSha256,
                   List<String> rulesetFiles, String toolName, String toolVersion, String reviewDate,
                   String verdict, int elementCount) {
     }
 
-    record Count(String label, int count) {
+    public record Count(String label, int count) {
     }
 
-    record FindingRow(String id, String elementId, String elementAnchor, String severity, String check,
+    public record FindingRow(String id, String elementId, String elementAnchor, String severity, String check,
                       String checkAnchor, String basis, String message) {
     }
 
-    record ElementView(String anchor, String id, String type, String description, String verdict,
+    public record ElementView(String anchor, String id, String type, String description, String verdict,
                        List<CheckView> checks, List<FindingRow> findings, List<String> cautions) {
     }
 
-    record CheckView(String anchor, String id, String title, String basis, String status, String utilisation,
+    public record CheckView(String anchor, String id, String title, String basis, String status, String utilisation,
                      String reason, List<QuantityView> quantities, List<StepView> trace) {
     }
 
     /** A computed quantity, with the designer's claim beside it when there is one. */
-    record QuantityView(String name, String value, String unit, String claimed, String difference,
+    public record QuantityView(String name, String value, String unit, String claimed, String difference,
                         String claimVerdict) {
     }
 
-    record StepView(String symbol, String formula, String substituted, String value, String unit, String clause,
+    public record StepView(String symbol, String formula, String substituted, String value, String unit, String clause,
                     String remark) {
     }
 
