@@ -116,7 +116,8 @@ public record HtmlModel(Header header, List<Count> verdictCounts, List<Count> se
                 ? ReportNumbers.ratioText(check.utilisation().getAsDouble())
                 : "";
         return new CheckView(anchor, check.id(), check.title(), check.basis(), check.status().label(),
-                utilisation, text(check.reason()), quantities(check), check.trace().stream().map(HtmlModel::step).toList());
+                utilisation, text(check.reason()), quantities(check),
+                check.trace().stream().map(HtmlModel::step).toList());
     }
 
     /**
