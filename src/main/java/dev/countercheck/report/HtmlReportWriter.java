@@ -1,0 +1,55 @@
+package dev.countercheck.report;
+
+import dev.countercheck.review.Review;
+import freemarker.core.HTMLOutputFormat;
+import freemarker.core.TemplateClassResolver;
+import freemarker.template.Configuration;
+import freemarker.template.Template;
+import freemarker.template.TemplateException;
+import freemarker.template.TemplateExceptionHandler;
+
+import java.io.IOException;
+import java.io.StringWriter;
+import java.util.Locale;
+import java.util.TimeZone;
+
+/**
+ * Renders a finished {@link Review} as one self-contained HTML page: inline CSS, no scripts,
+ * no external resources, a print stylesheet. Every value is HTML-escaped by the template's
+ * output format. Numbers are formatted in Java ({@link ReportNumbers}), so the output does not
+ * depend on the machine's locale or time zone.
+ */
+public final class HtmlReportWriter {
+
+    static final String TEMPLATE = "review.ftlh";
+
+    private final Configuration freemarker;
+
+    public HtmlReportWriter() {
+        freemarker = new Configuration(Configuration.VERSION_2_3_34);
+        freemarker.setClassForTemplateLoading(HtmlReportWriter.class, "/templates");
+        freemarker.setDefaultEncoding("UTF-8");
+        freemarker.setOutputFormat(HTMLOutputFormat.INSTANCE);
+        freemarker.setLocale(Locale.ROOT);
+        freemarker.setTimeZone(TimeZone.getTimeZone("UTC"));
+        freemarker.setNumberFormat("computer");
+        freemarker.setTemplateExceptionHandler(TemplateExceptionHandler.RETHROW_HANDLER);
+        freemarker.setLogTemplateExceptions(false);
+        freemarker.setWrapUncheckedExceptions(true);
+        freemarker.setFallbackOnNullLoopVariable(false);
+        freemarker.setNewBuiltinClassResolver(TemplateClassResolver.ALLOWS_NOTHING_RESOLVER);
+    }
+
+    /** The HTML page for {@code review}. */
+    public String write(Review review) {
+        StringWriter out = new StringWriter();
+        try {
+            Template template = freemarker.getTemplate(TEMPLATE);
+            template.process(HtmlModel.of(review), out);
+        } catch (IOException | TemplateException e) {
+            // The template ships inside the jar and its model is built here: failing is a bug in this package.
+            throw new IllegalStateException("could not render templates/" + TEMPLATE + ": " + e.getMessage(), e);
+        }
+        return out.toString();
+    }
+}
