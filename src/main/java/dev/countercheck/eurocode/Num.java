@@ -10,8 +10,14 @@ public final class Num {
     private Num() {
     }
 
-    /** {@code 1870.4321 → "1870"}, {@code 0.0123456 → "0.01235"}, {@code 2.0 → "2"}. */
+    /**
+     * {@code 1870.4321 → "1870"}, {@code 0.0123456 → "0.01235"}, {@code 2.0 → "2"};
+     * a non-finite value (only ever seen in an error message) prints as {@code "NaN"} or {@code "Infinity"}.
+     */
     public static String f(double value) {
+        if (!Double.isFinite(value)) {
+            return Double.toString(value);
+        }
         if (value == 0.0) {
             return "0";
         }

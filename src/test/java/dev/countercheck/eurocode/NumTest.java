@@ -1,5 +1,6 @@
 package dev.countercheck.eurocode;
 
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -20,5 +21,12 @@ class NumTest {
     })
     void formatsToFourSignificantFigures(double value, String expected) {
         assertThat(Num.f(value)).isEqualTo(expected);
+    }
+
+    /** Error messages may quote a bad input that is not a finite number; formatting must not throw. */
+    @Test
+    void printsNonFiniteValuesInsteadOfThrowing() {
+        assertThat(Num.f(Double.NaN)).isEqualTo("NaN");
+        assertThat(Num.f(Double.POSITIVE_INFINITY)).isEqualTo("Infinity");
     }
 }
