@@ -39,7 +39,7 @@ public final class ReviewCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ${DEFAULT-VALUE}).",
             defaultValue = "reports")
-    Path out;
+    Path outDir;
 
     @Option(names = "--ruleset", paramLabel = "ID|PATH",
             description = "Ruleset to apply, overriding the submission's basis.ruleset (default en1992-recommended).")
@@ -86,9 +86,9 @@ public final class ReviewCommand implements Callable<Integer> {
                 Submission submission = new dev.countercheck.submission.SubmissionReader().read(file);
                 Ruleset rules = rulesets.load(ruleset.or(submission::ruleset).orElse(Rulesets.DEFAULT));
                 Review review = reviewer.review(submission, rules, reviewDate);
-                Path json = out.resolve(SubmissionFiles.basename(file) + ".json");
-                Path html = out.resolve(SubmissionFiles.basename(file) + ".html");
-                Files.createDirectories(out);
+                Path json = outDir.resolve(SubmissionFiles.basename(file) + ".json");
+                Path html = outDir.resolve(SubmissionFiles.basename(file) + ".html");
+                Files.createDirectories(outDir);
                 ReportFiles.writeAtomically(json, new JsonResultWriter().write(review));
                 ReportFiles.writeAtomically(html, new HtmlReportWriter().write(review));
                 out.println(SummaryLine.of(file, review, json, html));
@@ -107,7 +107,7 @@ public final class ReviewCommand implements Callable<Integer> {
                 err.println(file + ": not reviewed (the ruleset cannot be used)");
                 status = ExitCodes.UNUSABLE;
             } catch (IOException e) {
-                err.println(file + ": cannot write the reports to " + out + ": " + e.getMessage());
+                err.println(file + ": cannot write the reports to " + outDir + ": " + e.getMessage());
                 status = ExitCodes.UNUSABLE;
             }
         }
