@@ -34,7 +34,11 @@ final class SubmissionBinder {
 
     Optional<Submission> bind(Node root, String sha256) {
         return Fields.of(root, "", values, KEYS).flatMap(f -> {
-            f.require("countercheck").flatMap(n -> values.wholeNumber(n, "countercheck")).ifPresent(v -> {
+            if (!f.has("countercheck")) {
+                values.problems().add(f.location(), "countercheck", "missing required key 'countercheck', the format"
+                        + " version: a submission starts with 'countercheck: " + FORMAT_VERSION + "'");
+            }
+            f.get("countercheck").flatMap(n -> values.wholeNumber(n, "countercheck")).ifPresent(v -> {
                 if (v != FORMAT_VERSION) {
                     values.error(f.get("countercheck").orElseThrow(), "countercheck", "unsupported format version "
                             + v + ": this version of countercheck reads format version " + FORMAT_VERSION);

@@ -2,6 +2,8 @@ package dev.countercheck.submission;
 
 import java.util.Collection;
 import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 
 /** "Did you mean ...?": the known word nearest to a misspelt one, by Levenshtein distance. */
@@ -11,13 +13,19 @@ final class Suggestions {
     }
 
     /**
-     * The candidate nearest to {@code word}, when it is near enough to be a plausible misspelling:
-     * at most 2 edits, or a third of the candidate's length for longer words.
+     * The candidate nearest to {@code word} among the plausible ones: those at most 2 edits away
+     * (a third of the candidate's length for longer words), and those {@code word} abbreviates
+     * ({@code as_req} for {@code as_required}). Empty when none is plausible, or when several are
+     * equally near ({@code XC5} is as near to XC1 as to XC4): a guess would then mislead.
      */
     static Optional<String> nearest(String word, Collection<String> candidates) {
-        return candidates.stream()
-                .min(Comparator.comparingInt((String c) -> distance(word, c)))
-                .filter(c -> distance(word, c) <= Math.max(2, c.length() / 3));
+        List<String> plausible = candidates.stream()
+                .filter(c -> distance(word, c) <= Math.max(2, c.length() / 3)
+                        || (word.length() >= 2 && c.toLowerCase(Locale.ROOT).startsWith(word.toLowerCase(Locale.ROOT))))
+                .sorted(Comparator.comparingInt((String c) -> distance(word, c)))
+                .toList();
+        boolean tie = plausible.size() > 1 && distance(word, plausible.get(0)) == distance(word, plausible.get(1));
+        return plausible.isEmpty() || tie ? Optional.empty() : Optional.of(plausible.get(0));
     }
 
     /** "; did you mean 'x'?" or "; expected one of: a, b, c". */
@@ -29,8 +37,8 @@ final class Suggestions {
 
     /** Levenshtein distance, case-insensitive (so that a wrong capital is one small slip, not a new word). */
     static int distance(String a, String b) {
-        String s = a.toLowerCase(java.util.Locale.ROOT);
-        String t = b.toLowerCase(java.util.Locale.ROOT);
+        String s = a.toLowerCase(Locale.ROOT);
+        String t = b.toLowerCase(Locale.ROOT);
         int[] previous = new int[t.length() + 1];
         int[] current = new int[t.length() + 1];
         for (int j = 0; j <= t.length(); j++) {

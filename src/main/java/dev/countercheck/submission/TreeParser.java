@@ -36,7 +36,9 @@ import java.util.Optional;
 final class TreeParser {
 
     private static final JsonFactory JSON = JsonFactory.builder().build();
-    private static final YAMLFactory YAML = YAMLFactory.builder().build();
+    /** As {@code new YAMLFactory()}: {@code key:} without a value is null (the builder leaves that off). */
+    private static final YAMLFactory YAML = YAMLFactory.builder()
+            .enable(YAMLParser.Feature.EMPTY_STRING_AS_NULL).build();
 
     private final Problems problems;
     private String text = "";
@@ -213,6 +215,6 @@ final class TreeParser {
                 text = text.substring(0, cut);
             }
         }
-        return text.replace("<stream end>", "the end of the file").strip();
+        return text.replace("'<stream end>'", "the end of the file").replace("<stream end>", "the end of the file").strip();
     }
 }

@@ -44,7 +44,9 @@ final class Values {
     private static final String DECIMAL = "[+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?";
     private static final Pattern NUMBER = Pattern.compile(DECIMAL);
     private static final Pattern NUMBER_AND_UNIT = Pattern.compile("\\s*(" + DECIMAL + ")\\s*(\\S.*?)?\\s*");
-    private static final Pattern NOT_FINITE = Pattern.compile("[+-]?\\.?(?:nan|inf|infinity)", Pattern.CASE_INSENSITIVE);
+    /** NaN or infinity as YAML or Java writes them, with or without a unit after. */
+    private static final Pattern NOT_FINITE = Pattern.compile("\\s*[+-]?\\.?(?:nan|inf|infinity)\\b.*",
+            Pattern.CASE_INSENSITIVE);
 
     private final Problems problems;
 
@@ -96,7 +98,7 @@ final class Values {
         String text = scalar.text();
         Matcher m = NUMBER_AND_UNIT.matcher(text);
         if (!m.matches()) {
-            error(scalar, path, NOT_FINITE.matcher(text.strip()).matches()
+            error(scalar, path, NOT_FINITE.matcher(text).matches()
                     ? "'" + text + "' is not a finite number"
                     : "'" + text + "' is not " + dimension.noun() + ": write a number"
                     + (dimension == Dimension.NUMBER ? "" : " in " + dimension.defaultUnit()
