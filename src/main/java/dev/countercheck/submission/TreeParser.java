@@ -25,8 +25,10 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Pattern;
 
 /**
  * Turns the bytes of a YAML or JSON file into a located {@link Node} tree with Jackson's streaming
@@ -40,11 +42,19 @@ final class TreeParser {
     private static final YAMLFactory YAML = YAMLFactory.builder()
             .enable(YAMLParser.Feature.EMPTY_STRING_AS_NULL).build();
 
+    /** A reference to one of the parser's settings, in backticks: {@code ", from `StreamReadConstraints...`"}. */
+    private static final Pattern SETTING = Pattern.compile(",?\\s*(?:from\\s+)?`[^`]*`");
+    /** A YAML event as the parser prints it: {@code <org.yaml.snakeyaml.events.SequenceStartEvent(...)>}. */
+    private static final Pattern EVENT = Pattern.compile("<[\\w.]*\\.(\\w+?)Event\\(.*?\\)>");
+
     private final Problems problems;
     private String text = "";
+    /** Where the last token started: the place to report a failure the parser does not locate. */
+    private SourceLocation lastToken;
 
     TreeParser(Problems problems) {
         this.problems = problems;
+        this.lastToken = problems.at(1, 1);
     }
 
     /**
@@ -81,7 +91,7 @@ final class TreeParser {
     }
 
     private static boolean isJson(String fileName, String text) {
-        String name = fileName.toLowerCase(java.util.Locale.ROOT);
+        String name = fileName.toLowerCase(Locale.ROOT);
         if (name.endsWith(".json")) {
             return true;
         }
@@ -108,6 +118,7 @@ final class TreeParser {
     /** Reads the value that starts at {@code token}; empty after a reported problem that stops reading. */
     private Optional<Node> read(JsonParser parser, JsonToken token) throws IOException {
         SourceLocation at = location(parser);
+        lastToken = at;
         if (parser instanceof YAMLParser yaml && yaml.isCurrentAlias()) {
             problems.add(at, "", "YAML aliases ('*" + parser.getText() + "') are not supported: write the value out");
             return Optional.empty();
@@ -132,6 +143,7 @@ final class TreeParser {
         while (parser.nextToken() == JsonToken.FIELD_NAME) {
             String key = parser.currentName();
             SourceLocation keyAt = location(parser);
+            lastToken = keyAt;
             Optional<Node> value = read(parser, parser.nextToken());
             if (value.isEmpty()) {
                 return Optional.empty();
@@ -177,13 +189,13 @@ final class TreeParser {
                 return;
             }
         }
-        SourceLocation at = problems.at(1, 1);
+        SourceLocation at = lastToken;
         String message = e.getMessage();
         if (e instanceof JsonProcessingException processing) {
             message = processing.getOriginalMessage();
             JsonLocation location = processing.getLocation();
-            if (location != null) {
-                at = problems.at(Math.max(1, location.getLineNr()), Math.max(1, location.getColumnNr()));
+            if (location != null && location.getLineNr() > 0) {
+                at = problems.at(location.getLineNr(), Math.max(1, location.getColumnNr()));
             }
         }
         problems.add(at, "", (json ? "JSON" : "YAML") + " syntax: " + plain(message));
@@ -206,7 +218,10 @@ final class TreeParser {
         problems.add(at, "", "YAML syntax: " + plain(problem) + context);
     }
 
-    /** The first line of a parser message, without references to the parser's own settings. */
+    /**
+     * The first line of a parser message, without the parser's internals: references to its
+     * settings (", from `StreamReadConstraints...`") and its event class names, which become words.
+     */
     private static String plain(String message) {
         String text = message == null ? "the file cannot be parsed" : message.lines().findFirst().orElse("");
         for (String tail : List.of(" (start marker at", ": enable `", "; enable `")) {
@@ -215,6 +230,9 @@ final class TreeParser {
                 text = text.substring(0, cut);
             }
         }
+        text = SETTING.matcher(text).replaceAll("");
+        text = EVENT.matcher(text).replaceAll(m -> "a " + m.group(1).replaceAll("([a-z])([A-Z])", "$1 $2")
+                .toLowerCase(Locale.ROOT));
         return text.replace("'<stream end>'", "the end of the file").replace("<stream end>", "the end of the file").strip();
     }
 }
