@@ -6,6 +6,7 @@ import dev.countercheck.submission.Node.ScalarNode;
 import dev.countercheck.submission.Node.ScalarNode.Kind;
 
 import java.math.BigDecimal;
+import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -229,9 +230,9 @@ final class Values {
                 : Optional.empty();
     }
 
-    /** A number for a message: whole numbers without decimals, others to 0.1. */
+    /** A finite number for a message: whole numbers without decimals, others to 0.1. */
     static String format(double value) {
-        return BigDecimal.valueOf(Math.round(value * 10) / 10.0).stripTrailingZeros().toPlainString();
+        return BigDecimal.valueOf(value).setScale(1, RoundingMode.HALF_UP).stripTrailingZeros().toPlainString();
     }
 
     Optional<MapNode> map(Node node, String path) {

@@ -20,6 +20,7 @@ import java.util.Optional;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.catchThrowableOfType;
 import static org.assertj.core.api.Assertions.within;
 
 /**
@@ -159,6 +160,21 @@ class SubmissionReaderTest {
                 .ignoringFieldsOfTypes(SourceLocation.class)
                 .isEqualTo(yaml);
         assertThat(json.sha256()).isNotEqualTo(yaml.sha256());
+    }
+
+    @Test
+    void aNameWithoutAKnownExtensionIsReadByItsContent(@TempDir Path dir) throws Exception {
+        Path json = Files.writeString(dir.resolve("broken.txt"), "  {\"countercheck\": 1,}");
+        Path yaml = Files.writeString(dir.resolve("broken"), "countercheck: 1: 2");
+
+        assertThat(catchSubmissionErrors(json)).singleElement().asString().contains("JSON syntax");
+        assertThat(catchSubmissionErrors(yaml)).singleElement().asString().contains("YAML syntax");
+    }
+
+    private List<InputError> catchSubmissionErrors(Path file) {
+        SubmissionException e = catchThrowableOfType(SubmissionException.class, () -> reader.read(file));
+        assertThat(e).isNotNull();
+        return e.errors();
     }
 
     @Test
