@@ -1,0 +1,96 @@
+package dev.countercheck.submission;
+
+import dev.countercheck.submission.ActionCase.Kind;
+import dev.countercheck.submission.PileCap.CastAgainst;
+import dev.countercheck.submission.PileCap.SelfWeight;
+import dev.countercheck.submission.Values.Bound;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Reads one {@code type: pile-cap} element. An element that lacks an item every check needs (its
+ * plan, depth, piles, column, actions, or a ULS action case) but is otherwise readable becomes an
+ * {@link IncompleteElement} naming what is missing; whatever it does give is still validated.
+ */
+final class PileCapBinder {
+
+    static final List<String> KEYS = List.of("id", "type", "description", "materials", "plan", "depth",
+            "cast_against", "self_weight", "piles", "column", "actions", "reinforcement", "claims", "punching_beta");
+    private static final List<String> PLAN_KEYS = List.of("x", "y");
+
+    private final Values values;
+    private final MaterialsBinder materialsBinder;
+
+    PileCapBinder(Values values, MaterialsBinder materialsBinder) {
+        this.values = values;
+        this.materialsBinder = materialsBinder;
+    }
+
+    /** The element, or empty when it has errors (they are in the problems). */
+    Optional<ElementInput> read(Fields f, String id, String description, MaterialsBinder.Draft fileMaterials) {
+        Optional<Materials> materials = materialsBinder.complete(f.fields("materials", MaterialsBinder.KEYS)
+                .map(materialsBinder::read).orElse(MaterialsBinder.Draft.NONE).over(fileMaterials), f);
+        Optional<Plan> plan = f.fields("plan", PLAN_KEYS).flatMap(this::plan);
+        Optional<Double> depth = f.quantity("depth", Dimension.LENGTH, Bound.POSITIVE);
+        Optional<CastAgainst> castAgainst = f.choice("cast_against", Values.options(CastAgainst.values()),
+                CastAgainst.BLINDING);
+        Optional<SelfWeight> selfWeight = f.choice("self_weight", Values.options(SelfWeight.values()), SelfWeight.ADD);
+        Optional<PileGroup> piles = f.fields("piles", PileGroupBinder.KEYS)
+                .flatMap(p -> new PileGroupBinder(values).read(p, plan, depth));
+        Optional<Column> column = f.fields("column", ColumnBinder.KEYS)
+                .flatMap(c -> new ColumnBinder(values).read(c, plan));
+        Optional<List<ActionCase>> actions = f.get("actions")
+                .flatMap(n -> new ActionsBinder(values).read(n, f.path("actions")));
+        Optional<Double> punchingBeta = f.quantity("punching_beta", Dimension.NUMBER, Bound.POSITIVE)
+                .filter(beta -> atLeastOne(f, beta));
+        Optional<Reinforcement> reinforcement = f.fields("reinforcement", ReinforcementBinder.KEYS)
+                .flatMap(r -> new ReinforcementBinder(values).read(r, plan, depth));
+        Optional<ClaimsBinder.Claims> claims = f.has("claims")
+                ? f.get("claims").flatMap(n -> new ClaimsBinder(values).read(n, f.path("claims"), PileCap.TYPE))
+                : Optional.of(ClaimsBinder.Claims.NONE);
+
+        List<String> missing = missing(f, actions);
+        if (values.problems().any()) {
+            return Optional.empty();
+        }
+        if (!missing.isEmpty()) {
+            return Optional.of(new IncompleteElement(id, PileCap.TYPE, description, f.location(), List.copyOf(missing)));
+        }
+        return Optional.of(new PileCap(id, description, f.location(), materials.orElseThrow(),
+                plan.orElseThrow().xMm(), plan.orElseThrow().yMm(), depth.orElseThrow(), castAgainst.orElseThrow(),
+                selfWeight.orElseThrow(), piles.orElseThrow(), column.orElseThrow(), actions.orElseThrow(),
+                punchingBeta, reinforcement, claims.orElseThrow().method(), claims.orElseThrow().claims()));
+    }
+
+    private Optional<Plan> plan(Fields f) {
+        Optional<Double> x = f.requiredQuantity("x", Dimension.LENGTH, Bound.POSITIVE);
+        Optional<Double> y = f.requiredQuantity("y", Dimension.LENGTH, Bound.POSITIVE);
+        return x.flatMap(a -> y.map(b -> new Plan(a, b)));
+    }
+
+    private boolean atLeastOne(Fields f, double beta) {
+        if (beta < 1) {
+            values.error(f.get("punching_beta").orElseThrow(), f.path("punching_beta"),
+                    "β must be at least 1 (EN 1992-1-1 6.4.3(3)), found " + Values.format(beta));
+        }
+        return beta >= 1;
+    }
+
+    /** The items every check needs that the element does not give. */
+    private static List<String> missing(Fields f, Optional<List<ActionCase>> actions) {
+        List<String> missing = new ArrayList<>();
+        for (String key : List.of("plan", "depth", "piles", "column")) {
+            if (!f.has(key)) {
+                missing.add(key);
+            }
+        }
+        if (!f.has("actions") || actions.map(List::isEmpty).orElse(false)) {
+            missing.add("actions");
+        } else if (actions.isPresent() && actions.get().stream().noneMatch(a -> a.kind() == Kind.ULS)) {
+            missing.add("a ULS action case (kind: uls)");
+        }
+        return missing;
+    }
+}

@@ -1,0 +1,69 @@
+package dev.countercheck.submission;
+
+import java.io.IOException;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+import java.util.Optional;
+
+/**
+ * Reads a submission file (YAML or JSON, see {@code spec/submission.md}) into a validated
+ * {@link Submission}.
+ *
+ * <p>The file is only read. It is parsed with Jackson's streaming parser into a tree that knows
+ * the line and column of every key and value, and the tree is bound by hand, so that every
+ * problem of the file is reported (not only the first) with its place. Quantities are numbers in
+ * the default unit (mm, kN, kNm, MPa, mm2) or text with a unit ({@code "1.1 m"}), converted.
+ * Elements that are readable but lack an item every check needs become {@link IncompleteElement};
+ * all other problems reject the file.
+ */
+public final class SubmissionReader {
+
+    /**
+     * Reads and validates {@code file}.
+     *
+     * @throws SubmissionException listing every problem found, each with file, line and column; no
+     *                             other exception leaves this method for any content of the file
+     */
+    public Submission read(Path file) throws SubmissionException {
+        String name = file.toString();
+        Problems problems = new Problems(name);
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (IOException e) {
+            problems.add(problems.at(1, 1), "", cannotRead(file, e));
+            throw new SubmissionException(problems.sorted());
+        }
+        Optional<Submission> submission = new TreeParser(problems).parse(bytes, name)
+                .flatMap(root -> new SubmissionBinder(new Values(problems)).bind(root, sha256(bytes)));
+        if (problems.any()) {
+            throw new SubmissionException(problems.sorted());
+        }
+        return submission.orElseThrow();
+    }
+
+    private static String cannotRead(Path file, IOException e) {
+        if (e instanceof NoSuchFileException) {
+            return "no such file";
+        }
+        if (e instanceof AccessDeniedException) {
+            return "the file cannot be read: permission denied";
+        }
+        return Files.isDirectory(file) ? "this is a folder, not a submission file"
+                : "the file cannot be read (" + e.getMessage() + ")";
+    }
+
+    /** Lower-case hex SHA-256 of {@code bytes}. */
+    static String sha256(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java platform provides SHA-256", e);
+        }
+    }
+}
