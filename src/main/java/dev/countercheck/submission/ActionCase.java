@@ -1,5 +1,7 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.*;
+
 /**
  * One action case at the top of the element. Compression positive; {@code mx} increases the
  * reactions at positive y, {@code my} those at positive x.

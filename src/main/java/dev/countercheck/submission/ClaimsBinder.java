@@ -1,8 +1,9 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.*;
 import dev.countercheck.submission.CheckCatalogue.CheckSpec;
 import dev.countercheck.submission.CheckCatalogue.QuantitySpec;
-import dev.countercheck.submission.Node.Entry;
+import dev.countercheck.input.Node.Entry;
 import dev.countercheck.submission.PileCap.TieMethod;
 import dev.countercheck.submission.Values.Bound;
 

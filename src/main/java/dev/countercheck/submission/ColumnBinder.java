@@ -1,5 +1,6 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.*;
 import dev.countercheck.submission.Column.ColumnShape;
 import dev.countercheck.submission.Column.StarterBars;
 import dev.countercheck.submission.Values.Bound;

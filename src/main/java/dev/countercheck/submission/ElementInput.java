@@ -1,5 +1,7 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.*;
+
 /** One element of a submission: a reviewable element of a known type, or one too incomplete to review. */
 public sealed interface ElementInput permits PileCap, IncompleteElement {
 

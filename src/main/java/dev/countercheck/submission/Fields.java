@@ -1,8 +1,9 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.submission.Node.Entry;
-import dev.countercheck.submission.Node.MapNode;
-import dev.countercheck.submission.Node.ScalarNode;
+import dev.countercheck.input.*;
+import dev.countercheck.input.Node.Entry;
+import dev.countercheck.input.Node.MapNode;
+import dev.countercheck.input.Node.ScalarNode;
 import dev.countercheck.submission.Values.Bound;
 
 import java.util.List;

@@ -1,5 +1,6 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.*;
 import java.util.List;
 import java.util.Optional;
 

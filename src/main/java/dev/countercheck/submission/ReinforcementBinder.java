@@ -1,5 +1,6 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.*;
 import dev.countercheck.submission.Reinforcement.BarEnds;
 import dev.countercheck.submission.Reinforcement.BarSet;
 import dev.countercheck.submission.Reinforcement.Covers;

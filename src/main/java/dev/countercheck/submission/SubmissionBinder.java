@@ -1,6 +1,7 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.submission.Node.MapNode;
+import dev.countercheck.input.*;
+import dev.countercheck.input.Node.MapNode;
 
 import java.util.HashMap;
 import java.util.List;

@@ -1,5 +1,6 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.*;
 import java.io.IOException;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;

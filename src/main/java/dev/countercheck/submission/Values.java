@@ -1,9 +1,10 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.submission.Node.ListNode;
-import dev.countercheck.submission.Node.MapNode;
-import dev.countercheck.submission.Node.ScalarNode;
-import dev.countercheck.submission.Node.ScalarNode.Kind;
+import dev.countercheck.input.*;
+import dev.countercheck.input.Node.ListNode;
+import dev.countercheck.input.Node.MapNode;
+import dev.countercheck.input.Node.ScalarNode;
+import dev.countercheck.input.Node.ScalarNode.Kind;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;

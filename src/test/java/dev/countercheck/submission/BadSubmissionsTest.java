@@ -1,5 +1,6 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.*;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 

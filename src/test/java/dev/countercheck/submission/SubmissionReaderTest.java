@@ -1,5 +1,6 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.*;
 import dev.countercheck.submission.ActionCase.Kind;
 import dev.countercheck.submission.Column.ColumnShape;
 import dev.countercheck.submission.PileCap.CastAgainst;

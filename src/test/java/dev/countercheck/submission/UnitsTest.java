@@ -1,7 +1,8 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.submission.Node.ScalarNode;
-import dev.countercheck.submission.Node.ScalarNode.Kind;
+import dev.countercheck.input.*;
+import dev.countercheck.input.Node.ScalarNode;
+import dev.countercheck.input.Node.ScalarNode.Kind;
 import dev.countercheck.submission.Values.Bound;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;

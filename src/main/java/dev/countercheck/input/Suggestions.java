@@ -1,4 +1,4 @@
-package dev.countercheck.submission;
+package dev.countercheck.input;
 
 import java.util.Collection;
 import java.util.Comparator;
@@ -7,7 +7,7 @@ import java.util.Locale;
 import java.util.Optional;
 
 /** "Did you mean ...?": the known word nearest to a misspelt one, by Levenshtein distance. */
-final class Suggestions {
+public final class Suggestions {
 
     private Suggestions() {
     }
@@ -18,7 +18,7 @@ final class Suggestions {
      * ({@code as_req} for {@code as_required}). Empty when none is plausible, or when several are
      * equally near ({@code XC5} is as near to XC1 as to XC4): a guess would then mislead.
      */
-    static Optional<String> nearest(String word, Collection<String> candidates) {
+    public static Optional<String> nearest(String word, Collection<String> candidates) {
         List<String> plausible = candidates.stream()
                 .filter(c -> distance(word, c) <= Math.max(2, c.length() / 3)
                         || (word.length() >= 2 && c.toLowerCase(Locale.ROOT).startsWith(word.toLowerCase(Locale.ROOT))))
@@ -29,14 +29,14 @@ final class Suggestions {
     }
 
     /** "; did you mean 'x'?" or "; expected one of: a, b, c". */
-    static String hint(String word, Collection<String> candidates) {
+    public static String hint(String word, Collection<String> candidates) {
         return nearest(word, candidates)
                 .map(c -> "; did you mean '" + c + "'?")
                 .orElse("; expected one of: " + String.join(", ", candidates));
     }
 
     /** Levenshtein distance, case-insensitive (so that a wrong capital is one small slip, not a new word). */
-    static int distance(String a, String b) {
+    public static int distance(String a, String b) {
         String s = a.toLowerCase(Locale.ROOT);
         String t = b.toLowerCase(Locale.ROOT);
         int[] previous = new int[t.length() + 1];

@@ -1,4 +1,4 @@
-package dev.countercheck.submission;
+package dev.countercheck.input;
 
 /** A place in an input file: 1-based line and column. */
 public record SourceLocation(String file, int line, int column) {

@@ -1,4 +1,4 @@
-package dev.countercheck.submission;
+package dev.countercheck.input;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
@@ -7,11 +7,11 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import com.fasterxml.jackson.dataformat.yaml.YAMLParser;
-import dev.countercheck.submission.Node.Entry;
-import dev.countercheck.submission.Node.ListNode;
-import dev.countercheck.submission.Node.MapNode;
-import dev.countercheck.submission.Node.ScalarNode;
-import dev.countercheck.submission.Node.ScalarNode.Kind;
+import dev.countercheck.input.Node.Entry;
+import dev.countercheck.input.Node.ListNode;
+import dev.countercheck.input.Node.MapNode;
+import dev.countercheck.input.Node.ScalarNode;
+import dev.countercheck.input.Node.ScalarNode.Kind;
 import org.yaml.snakeyaml.error.Mark;
 import org.yaml.snakeyaml.error.MarkedYAMLException;
 import org.yaml.snakeyaml.reader.ReaderException;
@@ -35,7 +35,7 @@ import java.util.regex.Pattern;
  * parser. Syntax errors, duplicate keys, YAML aliases and bytes that are not UTF-8 become input
  * errors at their place in the file; nothing is thrown.
  */
-final class TreeParser {
+public final class TreeParser {
 
     private static final JsonFactory JSON = JsonFactory.builder().build();
     /** As {@code new YAMLFactory()}: {@code key:} without a value is null (the builder leaves that off). */
@@ -52,7 +52,7 @@ final class TreeParser {
     /** Where the last token started: the place to report a failure the parser does not locate. */
     private SourceLocation lastToken;
 
-    TreeParser(Problems problems) {
+    public TreeParser(Problems problems) {
         this.problems = problems;
         this.lastToken = problems.at(1, 1);
     }
@@ -65,7 +65,7 @@ final class TreeParser {
      *                 {@code .yml} are YAML; any other name is JSON when the content starts with
      *                 '{' or '[', else YAML
      */
-    Optional<Node> parse(byte[] bytes, String fileName) {
+    public Optional<Node> parse(byte[] bytes, String fileName) {
         Optional<String> decoded = decodeUtf8(bytes);
         if (decoded.isEmpty()) {
             return Optional.empty();

@@ -1,4 +1,4 @@
-package dev.countercheck.submission;
+package dev.countercheck.input;
 
 /**
  * One problem found in a submission file.

@@ -1,4 +1,4 @@
-package dev.countercheck.submission;
+package dev.countercheck.input;
 
 import java.util.List;
 import java.util.Optional;
@@ -7,12 +7,12 @@ import java.util.Optional;
  * The parsed file before binding: mappings, lists and scalars, each knowing where it starts.
  * YAML and JSON give the same tree, so one binder serves both.
  */
-sealed interface Node permits Node.MapNode, Node.ListNode, Node.ScalarNode {
+public sealed interface Node permits Node.MapNode, Node.ListNode, Node.ScalarNode {
 
-    SourceLocation location();
+    public SourceLocation location();
 
     /** How the node reads in an error message: "a mapping", "a list", "the text 'abc'", ... */
-    String describe();
+    public String describe();
 
     /** One {@code key: value} of a mapping, with the key's own location. */
     record Entry(String key, SourceLocation keyLocation, Node value) {
@@ -20,7 +20,7 @@ sealed interface Node permits Node.MapNode, Node.ListNode, Node.ScalarNode {
 
     record MapNode(SourceLocation location, List<Entry> entries) implements Node {
 
-        Optional<Entry> entry(String key) {
+        public Optional<Entry> entry(String key) {
             return entries.stream().filter(e -> e.key().equals(key)).findFirst();
         }
 
@@ -40,7 +40,7 @@ sealed interface Node permits Node.MapNode, Node.ListNode, Node.ScalarNode {
     /** A scalar as written; {@code text} is the source text (numbers are converted later, by the binder). */
     record ScalarNode(SourceLocation location, Kind kind, String text) implements Node {
 
-        enum Kind { TEXT, NUMBER, BOOLEAN, NULL }
+        public enum Kind { TEXT, NUMBER, BOOLEAN, NULL }
 
         @Override
         public String describe() {
