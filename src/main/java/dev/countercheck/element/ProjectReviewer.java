@@ -18,6 +18,7 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 
 /** Reviews a whole submission: each element by the reviewer of its type, then the summary. */
@@ -67,7 +68,7 @@ public final class ProjectReviewer {
                 "The element could not be reviewed; missing: " + String.join(", ", e.missing()) + ".",
                 "submission format");
         return new ElementReview(e.id(), e.type(), e.description(), Verdict.INCOMPLETE, List.of(), List.of(f),
-                List.of("No check of " + e.id() + " was performed."));
+                List.of("No check of " + e.id() + " was performed."), Optional.empty());
     }
 
     private static Set<String> union(Set<String> a, Set<String> b) {

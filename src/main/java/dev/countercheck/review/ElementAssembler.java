@@ -11,6 +11,7 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 
 /**
@@ -26,7 +27,7 @@ public final class ElementAssembler {
     }
 
     public ElementReview assemble(String id, String type, String description, List<CheckOutcome> outcomes,
-                                  List<Claim> claims, List<String> elementCautions) {
+                                  List<Claim> claims, List<String> elementCautions, Optional<Drawing> drawing) {
         Map<String, CheckResult> results = new LinkedHashMap<>();
         Map<String, List<DraftFinding>> drafts = new LinkedHashMap<>();
         List<String> cautions = new ArrayList<>(elementCautions);
@@ -56,7 +57,7 @@ public final class ElementAssembler {
                 .map(r -> withClaims(r, compared.getOrDefault(r.id(), List.of()))).toList();
         List<Finding> findings = number(id, drafts);
         return new ElementReview(id, type, description, verdict(checks, findings), checks, findings,
-                List.copyOf(cautions));
+                List.copyOf(cautions), drawing);
     }
 
     private static String notComparedReason(CheckResult r) {

@@ -109,7 +109,7 @@ class HtmlReportWriterTest {
                 tie.reason(), Map.of(), List.of(new ClaimComparison("lever_arm", 640.0, 655.5, -0.023646,
                 ClaimVerdict.DIFFERS_CONSERVATIVE)), tie.trace());
         ElementReview changed = new ElementReview(first.id(), first.type(), first.description(), first.verdict(),
-                List.of(stray), first.findings(), first.cautions());
+                List.of(stray), first.findings(), first.cautions(), first.drawing());
         Review variant = new Review(review.tool(), review.submission(), review.ruleset(), review.reviewDate(),
                 review.verdict(), List.of(changed), review.summary(), review.assumptions());
 

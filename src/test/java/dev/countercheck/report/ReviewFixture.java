@@ -92,7 +92,8 @@ final class ReviewFixture {
                                 "Anchorage length beyond the pile not shown", "EN 1992-1-1 8.4.4"),
                         new Finding("PC-D1/tie-x/1", Severity.MINOR, "tie-x",
                                 "Claimed As,req is conservative", "EN 1992-1-1 6.5.4")),
-                List.of("Pile spacing exceeds three diameters: concentrate tie bars over the piles."));
+                List.of("Pile spacing exceeds three diameters: concentrate tie bars over the piles."),
+                Optional.empty());
     }
 
     private static ElementReview padFooting() {
@@ -111,7 +112,7 @@ final class ReviewFixture {
                                 "Allowable bearing pressure not referenced to a ground report", "common practice"),
                         new Finding("PF-A2/shear-y/1", Severity.NOTE, "shear-y",
                                 "Shear in y not checked: not applicable to this geometry", "EN 1992-1-1 6.2.2")),
-                List.of());
+                List.of(), Optional.empty());
     }
 
     /** Values in the order given (name, value, name, value, ...), as the reviewer keeps them. */

@@ -12,6 +12,7 @@ import dev.countercheck.submission.PileCap;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.function.Function;
 
@@ -56,7 +57,8 @@ public final class PileCapReviewer {
             Function<PileCapContext, CheckOutcome> check = checks.get(id);
             outcomes.add(check == null ? notInThisVersion(id) : guarded(id, check, ctx));
         }
-        return assembler.assemble(cap.id(), cap.type(), cap.description(), outcomes, cap.claims(), List.of());
+        return assembler.assemble(cap.id(), cap.type(), cap.description(), outcomes, cap.claims(), List.of(),
+                Optional.of(DrawingNotes.of(ctx)));
     }
 
     private static Map<String, Function<PileCapContext, CheckOutcome>> checks() {
