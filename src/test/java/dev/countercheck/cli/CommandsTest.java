@@ -1,0 +1,95 @@
+package dev.countercheck.cli;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import static dev.countercheck.cli.SampleSubmissionsTest.run;
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** The commands other than a plain review: exit codes and what they print. */
+class CommandsTest {
+
+    @Test
+    void versionIsPrinted() {
+        SampleSubmissionsTest.Run r = run("--version");
+        assertThat(r.exit()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).startsWith("countercheck ");
+    }
+
+    @Test
+    void theStarterSubmissionIsValid(@TempDir Path dir) throws IOException {
+        SampleSubmissionsTest.Run example = run("example");
+        assertThat(example.exit()).isEqualTo(ExitCodes.OK);
+        Path file = dir.resolve("starter.yaml");
+        Files.writeString(file, example.out());
+        SampleSubmissionsTest.Run validate = run("validate", file.toString());
+        assertThat(validate.exit()).as(validate.err()).isEqualTo(ExitCodes.OK);
+        assertThat(validate.out()).contains("valid, 1 element");
+    }
+
+    @Test
+    void validateRefusesABrokenFileWithItsLocation(@TempDir Path dir) throws IOException {
+        Path file = dir.resolve("broken.yaml");
+        Files.writeString(file, "countercheck: 1\nproject: {title: x}\nelemnts: []\n");
+        SampleSubmissionsTest.Run r = run("validate", file.toString());
+        assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(r.err()).contains(file + ":3:1").contains("did you mean 'elements'");
+    }
+
+    @Test
+    void reviewOfAMissingFileIsUnusableInput(@TempDir Path dir) {
+        SampleSubmissionsTest.Run r = run("review", dir.resolve("nowhere.yaml").toString(), "--out", dir.toString());
+        assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(r.err()).contains("nowhere.yaml").doesNotContain("Exception");
+    }
+
+    @Test
+    void aBadDateIsAUsageError(@TempDir Path dir) {
+        SampleSubmissionsTest.Run r = run("review", "sample-submissions/quayside-annex.yaml", "--out", dir.toString(),
+                "--date", "1st of May");
+        assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(r.err()).contains("--date");
+        assertThat(dir).isEmptyDirectory();
+    }
+
+    @Test
+    void anUnknownRulesetStopsTheReviewBeforeAnyReport(@TempDir Path dir) {
+        SampleSubmissionsTest.Run r = run("review", "sample-submissions/quayside-annex.yaml", "--out", dir.toString(),
+                "--ruleset", "en1992-atlantis");
+        assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(r.err()).contains("en1992-atlantis");
+        assertThat(dir).isEmptyDirectory();
+    }
+
+    @Test
+    void failOnMinorTurnsMinorFindingsIntoExitOne(@TempDir Path dir) {
+        // quayside-annex has only minor findings (its comment says so): exit 0 by default, 1 with --fail-on minor.
+        assertThat(run("review", "sample-submissions/quayside-annex.yaml", "--out", dir.toString()).exit())
+                .isEqualTo(ExitCodes.OK);
+        assertThat(run("review", "sample-submissions/quayside-annex.yaml", "--out", dir.toString(),
+                "--fail-on", "minor").exit()).isEqualTo(ExitCodes.FINDINGS);
+        assertThat(run("review", "sample-submissions/quayside-annex.yaml", "--out", dir.toString(),
+                "--fail-on", "severe").exit()).isEqualTo(ExitCodes.UNUSABLE);
+    }
+
+    @Test
+    void rulesListsEachParameterWithTheFileThatSetIt() {
+        SampleSubmissionsTest.Run r = run("rules", "--ruleset", "en1992-uk-na");
+        assertThat(r.exit()).isEqualTo(ExitCodes.OK);
+        // The UK annex overrides αcc (0.85) and keeps γc from the recommended file.
+        assertThat(r.out()).containsPattern("alpha_cc +αcc +0\\.85 .*en1992-uk-na\\.yaml");
+        assertThat(r.out()).containsPattern("gamma_c +γc +1\\.5 .*en1992-recommended\\.yaml");
+    }
+
+    @Test
+    void rulesWritesAMarkdownReference() {
+        SampleSubmissionsTest.Run r = run("rules", "--ruleset", "house-example", "--format", "markdown");
+        assertThat(r.exit()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("# Ruleset house-example").contains("| `min_edge_distance` |")
+                .contains("house rule HR-3");
+    }
+}
