@@ -27,7 +27,7 @@ class RulesetLoaderTest {
             """;
 
     private static RulesetLoader loader(Path dir) {
-        return new RulesetLoader(dir, Set.of("gamma_c", "gamma_s"));
+        return new RulesetLoader(dir, RuleVocabulary.parametersOnly(Set.of("gamma_c", "gamma_s")));
     }
 
     private static List<InputError> errors(Path dir, String reference) {
@@ -129,7 +129,7 @@ class RulesetLoaderTest {
     void theShippedRulesetsLoadWithEveryParameterTheReviewNeeds() throws Exception {
         for (String id : List.of("en1992-recommended", "en1992-uk-na", "house-example")) {
             Ruleset r = new RulesetLoader(Path.of("rulesets"),
-                    dev.countercheck.element.ProjectReviewer.REQUIRED_PARAMETERS).load(id);
+                    dev.countercheck.element.ProjectReviewer.RULE_VOCABULARY).load(id);
             assertThat(r.id()).isEqualTo(id);
         }
     }
