@@ -66,13 +66,14 @@ class RigidCapReactionsTest {
     @Test
     void aLineOfPilesAnalysedOnItsDesignedLineIgnoresAnOffLineMove() {
         // Hand calculation: piles at (0, −1500), (0, 0), (0, 1500); N = 3000 kN at the origin, My = 120 kNm
-        // about the line. On the designed line (y) the middle pile moved 75 mm in x changes nothing:
-        // P = 1000 kN each, and the 120 kNm stays unresisted. (Solved as a free group, the 75 mm offset
-        // would carry 120 kNm on a 75 mm lever arm: a found-by-property artefact this guards against.)
+        // about the line. On the designed line (y) the middle pile moved 75 mm in x changes the reactions
+        // not at all: P = 1000 kN each. The centroid moves to x̄ = 75/3 = 25 mm, so the moment about the
+        // line left unresisted is 120 + 3000·(0 − 25)/1000 = 45 kNm. (Solved as a free group, the offset
+        // would carry that moment on a 75 mm lever arm: an artefact found by a property test.)
         List<Point> moved = List.of(new Point(0, -1500), new Point(75, 0), new Point(0, 1500));
         Distribution d = RigidCapReactions.solve(moved, List.of(column(3000, 0, 0)), 0, 120,
                 java.util.Optional.of(new double[] {0, 1}));
         assertThat(d.reactionsKn()).containsExactly(new double[] {1000, 1000, 1000}, within(1e-9));
-        assertThat(d.unresistedKnm()).isCloseTo(120, within(1e-9));
+        assertThat(d.unresistedKnm()).isCloseTo(45, within(1e-9));
     }
 }
