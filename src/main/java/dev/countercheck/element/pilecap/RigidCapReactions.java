@@ -88,19 +88,10 @@ final class RigidCapReactions {
             }
             return new Distribution(v, mx, my, p, Math.abs(mx * ux - my * uy));
         }
-        double sxx = 0;
-        double syy = 0;
-        double sxy = 0;
-        for (Point pile : piles) {
-            double dx = pile.xMm() - xBar;
-            double dy = pile.yMm() - yBar;
-            sxx += dx * dx;
-            syy += dy * dy;
-            sxy += dx * dy;
-        }
-        double det = sxx * syy - sxy * sxy;
-        double a = (my * 1000.0 * syy - mx * 1000.0 * sxy) / det;
-        double b = (mx * 1000.0 * sxx - my * 1000.0 * sxy) / det;
+        Spread g = Spread.of(piles);
+        double det = g.sxx * g.syy - g.sxy * g.sxy;
+        double a = (my * 1000.0 * g.syy - mx * 1000.0 * g.sxy) / det;
+        double b = (mx * 1000.0 * g.sxx - my * 1000.0 * g.sxy) / det;
         for (int i = 0; i < n; i++) {
             p[i] = v / n + a * (piles.get(i).xMm() - xBar) + b * (piles.get(i).yMm() - yBar);
         }
@@ -112,23 +103,33 @@ final class RigidCapReactions {
         if (piles.size() < 2) {
             return Optional.empty();
         }
-        double xBar = piles.stream().mapToDouble(Point::xMm).average().orElse(0);
-        double yBar = piles.stream().mapToDouble(Point::yMm).average().orElse(0);
-        double sxx = 0;
-        double syy = 0;
-        double sxy = 0;
-        for (Point pile : piles) {
-            double dx = pile.xMm() - xBar;
-            double dy = pile.yMm() - yBar;
-            sxx += dx * dx;
-            syy += dy * dy;
-            sxy += dx * dy;
-        }
-        if (sxx * syy - sxy * sxy > 1e-9 * (sxx + syy) * (sxx + syy)) {
+        Spread g = Spread.of(piles);
+        if (g.sxx * g.syy - g.sxy * g.sxy > 1e-9 * (g.sxx + g.syy) * (g.sxx + g.syy)) {
             return Optional.empty();
         }
-        double len = sxx >= syy ? Math.hypot(sxx, sxy) : Math.hypot(sxy, syy);
-        return Optional.of(sxx >= syy ? new double[] {sxx / len, sxy / len} : new double[] {sxy / len, syy / len});
+        double len = g.sxx >= g.syy ? Math.hypot(g.sxx, g.sxy) : Math.hypot(g.sxy, g.syy);
+        return Optional.of(g.sxx >= g.syy ? new double[] {g.sxx / len, g.sxy / len}
+                : new double[] {g.sxy / len, g.syy / len});
+    }
+
+    /** Second moments of the pile positions about their centroid: Σdx², Σdy², Σdx·dy (mm²). */
+    private record Spread(double sxx, double syy, double sxy) {
+
+        static Spread of(List<Point> piles) {
+            double xBar = piles.stream().mapToDouble(Point::xMm).average().orElse(0);
+            double yBar = piles.stream().mapToDouble(Point::yMm).average().orElse(0);
+            double sxx = 0;
+            double syy = 0;
+            double sxy = 0;
+            for (Point pile : piles) {
+                double dx = pile.xMm() - xBar;
+                double dy = pile.yMm() - yBar;
+                sxx += dx * dx;
+                syy += dy * dy;
+                sxy += dx * dy;
+            }
+            return new Spread(sxx, syy, sxy);
+        }
     }
 
     /** Trace steps of a distribution: V, Mx*, My* and every P_i. */
