@@ -100,4 +100,13 @@ class CommandsTest {
         SampleSubmissionsTest.Run r = run("rules", "--format", "markdown");
         assertThat(r.out()).isEqualTo(Files.readString(Path.of("docs/rules-en1992-recommended.md")));
     }
+
+    @Test
+    void validateAlsoRefusesARulesetThatDoesNotResolve(@TempDir Path dir) throws IOException {
+        Path file = dir.resolve("starter.yaml");
+        Files.writeString(file, run("example").out().replace("ruleset: en1992-recommended", "ruleset: en1992-mars"));
+        SampleSubmissionsTest.Run r = run("validate", file.toString());
+        assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(r.err()).contains("en1992-mars").contains("cannot be used");
+    }
 }
