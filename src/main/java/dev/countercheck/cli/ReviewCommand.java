@@ -3,7 +3,9 @@ package dev.countercheck.cli;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.report.HtmlReportWriter;
 import dev.countercheck.report.JsonResultWriter;
+import dev.countercheck.report.PdfReportWriter;
 import dev.countercheck.report.ReportFiles;
+import dev.countercheck.report.ReportIndex;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 import dev.countercheck.ruleset.Ruleset;
@@ -27,7 +29,8 @@ import java.util.concurrent.Callable;
 
 /** {@code review FILE...}: reviews each submission and writes its JSON result and HTML report. */
 @Command(name = "review", mixinStandardHelpOptions = true, versionProvider = Version.class,
-        description = "Recompute every check of each submission and write DIR/<name>.json and DIR/<name>.html.",
+        description = "Recompute every check of each submission and write DIR/<name>.json and DIR/<name>.html;"
+                + " for several submissions or a folder, also DIR/index.html.",
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:nothing at or above the --fail-on severity was found",
                 "1:something at or above the --fail-on severity was found",
@@ -54,6 +57,9 @@ public final class ReviewCommand implements Callable<Integer> {
             description = "Review date to state (default: SOURCE_DATE_EPOCH if set, else today).")
     Optional<String> date;
 
+    @Option(names = "--pdf", description = "Also write DIR/<name>.pdf, the report laid out on A4.")
+    boolean pdf;
+
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -77,6 +83,7 @@ public final class ReviewCommand implements Callable<Integer> {
         Rulesets rulesets = new Rulesets();
         ProjectReviewer reviewer = new ProjectReviewer(Version.tool());
         int status = ExitCodes.OK;
+        ReportIndex index = new ReportIndex(Version.tool(), reviewDate);
         for (int i = 0; i < inputs.size(); i++) {
             Path file = inputs.get(i);
             if (inputs.size() > 1) {
@@ -91,6 +98,12 @@ public final class ReviewCommand implements Callable<Integer> {
                 Files.createDirectories(outDir);
                 ReportFiles.writeAtomically(json, new JsonResultWriter().write(review));
                 ReportFiles.writeAtomically(html, new HtmlReportWriter().write(review));
+                Optional<Path> pdfFile = pdf ? Optional.of(outDir.resolve(SubmissionFiles.basename(file) + ".pdf"))
+                        : Optional.empty();
+                if (pdfFile.isPresent()) {
+                    ReportFiles.writeAtomically(pdfFile.get(), new PdfReportWriter().write(review));
+                }
+                index.reviewed(review, json, html, pdfFile);
                 out.println(SummaryLine.of(file, review, json, html));
                 boolean found = review.elements().stream().flatMap(e -> e.findings().stream())
                         .anyMatch(f -> f.severity().atLeast(threshold));
@@ -101,13 +114,25 @@ public final class ReviewCommand implements Callable<Integer> {
                 e.errors().forEach(err::println);
                 err.println(file + ": not reviewed (" + e.errors().size() + " input error"
                         + (e.errors().size() == 1 ? "" : "s") + ")");
+                index.notReviewed(file.toString(), "input errors");
                 status = ExitCodes.UNUSABLE;
             } catch (RulesetException e) {
                 e.errors().forEach(err::println);
                 err.println(file + ": not reviewed (the ruleset cannot be used)");
+                index.notReviewed(file.toString(), "the ruleset cannot be used");
                 status = ExitCodes.UNUSABLE;
             } catch (IOException e) {
                 err.println(file + ": cannot write the reports to " + outDir + ": " + e.getMessage());
+                index.notReviewed(file.toString(), "its reports could not be written");
+                status = ExitCodes.UNUSABLE;
+            }
+        }
+        if (inputs.size() > 1 || files.stream().anyMatch(Files::isDirectory)) {
+            try {
+                ReportFiles.writeAtomically(outDir.resolve("index.html"), index.html());
+                out.println("index of " + inputs.size() + " submissions -> " + outDir.resolve("index.html"));
+            } catch (IOException e) {
+                err.println("cannot write " + outDir.resolve("index.html") + ": " + e.getMessage());
                 status = ExitCodes.UNUSABLE;
             }
         }
