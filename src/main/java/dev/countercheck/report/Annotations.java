@@ -37,6 +37,14 @@ final class Annotations {
         }
     }
 
+    /** A vertical dimension whose value stands to the right of its upper end (for short ones beside an object). */
+    static void verticalLabelRight(Svg svg, double x, double y1, double y2, String value, String style) {
+        svg.line(x, y1, x, y2, style);
+        tick(svg, x, y1, style);
+        tick(svg, x, y2, style);
+        svg.text(x + 4, Math.min(y1, y2) - 2, value, "start", Styles.TEXT_SMALL);
+    }
+
     /** A short extension line, from the object towards its dimension line. */
     static void extension(Svg svg, double x1, double y1, double x2, double y2) {
         svg.line(x1, y1, x2, y2, "stroke=\"#9aa1aa\" stroke-width=\"0.6\"");

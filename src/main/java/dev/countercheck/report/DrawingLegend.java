@@ -42,8 +42,9 @@ final class DrawingLegend {
             s.rect(WIDTH / 2 - 8, 2, 16, HEIGHT - 4, Styles.COLUMN_EDGE);
         }), column(cap.column())));
         rows.add(new LegendRow(sample("bars-x", s -> s.line(3, HEIGHT / 2, WIDTH - 3, HEIGHT / 2, Styles.BAR_X)),
-                "Bottom bars along x (solid). Bar sets are named count, φ diameter, face and layer: B1 bottom layer"
-                        + " 1 (nearest the soffit), B2 bottom layer 2, T1 top layer 1."));
+                "Bottom bars along x (solid). A bar set is named by count, φ diameter, face and layer (B1 bottom"
+                        + " layer 1, nearest the soffit; B2 bottom layer 2; T1 top layer 1) and, in the section, the"
+                        + " direction its bars run: 6 φ25 B1 (x)."));
         rows.add(new LegendRow(sample("bars-y", s -> s.line(3, HEIGHT / 2, WIDTH - 3, HEIGHT / 2, Styles.BAR_Y)),
                 "Bottom bars along y (long dashes); in the section, bars along y are the dots."));
         rows.add(new LegendRow(sample("bars-top", s -> s.line(3, HEIGHT / 2, WIDTH - 3, HEIGHT / 2, Styles.BAR_TOP)),
@@ -108,7 +109,7 @@ final class DrawingLegend {
     }
 
     private static String sample(String name, Painter painter) {
-        Svg svg = new Svg(WIDTH, HEIGHT, "legend sample: " + name);
+        Svg svg = new Svg(WIDTH, HEIGHT, "legend sample: " + name, "sample");
         painter.paint(svg);
         return svg.done();
     }

@@ -22,9 +22,9 @@ import java.util.List;
  */
 final class PlanDrawing {
 
-    static final double WIDTH = 760;
+    static final double WIDTH = 800;
     static final double LEFT = 92;
-    static final double RIGHT = 118;
+    static final double RIGHT = 160;
     private static final double TOP = 76;
     private static final double BOTTOM = 116;
     private static final double MAX_HEIGHT = 420;
@@ -37,6 +37,8 @@ final class PlanDrawing {
     private final double centreX;
     private final double centreY;
     private final Svg svg;
+    /** Labels and tags, drawn last so that no line or pile hides them. */
+    private final List<Runnable> overlay = new ArrayList<>();
 
     private PlanDrawing(String id, Drawing drawing, DrawingMarks marks) {
         this.id = id;
@@ -85,11 +87,13 @@ final class PlanDrawing {
         svg.endGroup();
         drawing.shearSections().forEach(s -> shearSection(s, left, right, top, bottom));
         cutLine(left, right);
+        columnHatch();
         piles();
-        column();
+        columnEdge();
         dimensions(left, right, top, bottom);
         cap.reinforcement().ifPresent(r -> barLabels(r, left, top, bottom));
         axesAndScale(left, bottom);
+        overlay.forEach(Runnable::run);
         return svg.done();
     }
 
@@ -154,16 +158,16 @@ final class PlanDrawing {
         if ("x".equals(line.axis())) {
             double at = x(line.positionMm());
             svg.line(at, top - 8, at, bottom + 8, style);
-            Annotations.label(svg, at + 3, top + 11, line.checkId(), "start", Styles.TEXT_SMALL);
+            overlay.add(() -> Annotations.label(svg, at + 3, top + 11, line.checkId(), "start", Styles.TEXT_SMALL));
             if (!tags.isEmpty()) {
-                Annotations.tag(svg, at + 3, top + 24, tags);
+                overlay.add(() -> Annotations.tag(svg, at + 3, top + 24, tags));
             }
         } else {
             double at = y(line.positionMm());
             svg.line(left - 8, at, right + 8, at, style);
-            Annotations.label(svg, left + 3, at - 4, line.checkId(), "start", Styles.TEXT_SMALL);
+            overlay.add(() -> Annotations.label(svg, left + 3, at - 4, line.checkId(), "start", Styles.TEXT_SMALL));
             if (!tags.isEmpty()) {
-                Annotations.tag(svg, left + 3 + line.checkId().length() * 5.6 + 4, at - 8, tags);
+                overlay.add(() -> Annotations.tag(svg, left + 3 + line.checkId().length() * 5.6 + 4, at - 8, tags));
             }
         }
     }
@@ -193,36 +197,46 @@ final class PlanDrawing {
             svg.circle(px, py, radius, tags.isEmpty() ? Styles.PILE : Styles.PILE_FAIL);
             svg.text(px, py + 4.5, String.valueOf(i + 1), "middle", Styles.TEXT_PILE);
             if (i < drawing.pileReactionsKn().size()) {
-                Annotations.label(svg, px, py + radius + 13,
-                        ReportNumbers.display(drawing.pileReactionsKn().get(i), "kN") + " kN", "middle",
-                        tags.isEmpty() ? Styles.TEXT : Styles.TEXT_FAIL);
+                String reaction = ReportNumbers.display(drawing.pileReactionsKn().get(i), "kN") + " kN";
+                overlay.add(() -> Annotations.label(svg, px, py + radius + 13, reaction, "middle",
+                        tags.isEmpty() ? Styles.TEXT : Styles.TEXT_FAIL));
             }
             if (!tags.isEmpty()) {
-                Annotations.tag(svg, px + radius * 0.72, py - radius * 0.72 - 6, tags);
+                overlay.add(() -> Annotations.tag(svg, px + radius * 0.72, py - radius * 0.72 - 6, tags));
             }
         }
     }
 
-    private void column() {
-        Column c = cap.column();
-        String tags = marks.tags(Item.COLUMN);
-        String edge = tags.isEmpty() ? Styles.COLUMN_EDGE : Styles.COLUMN_EDGE_FAIL;
+    /** The column's hatched area, under the piles so that a pile beneath the column still shows. */
+    private void columnHatch() {
         String fill = "fill=\"url(#" + Svg.escape(id) + "-hatch)\" stroke=\"none\"";
+        columnShape("fill=\"#ffffff\"");
+        columnShape(fill);
+    }
+
+    /** The column's outline, over the piles, and its fail tag. */
+    private void columnEdge() {
+        String tags = marks.tags(Item.COLUMN);
+        columnShape(tags.isEmpty() ? Styles.COLUMN_EDGE : Styles.COLUMN_EDGE_FAIL);
+        if (!tags.isEmpty()) {
+            Column c = cap.column();
+            double halfX = c.cxMm() / 2 * scale;
+            double halfY = (c.shape() == ColumnShape.CIRCULAR ? c.cxMm() : c.cyMm()) / 2 * scale;
+            overlay.add(() -> Annotations.tag(svg, x(c.position().xMm()) + halfX + 3,
+                    y(c.position().yMm()) - halfY + 2, tags));
+        }
+    }
+
+    private void columnShape(String style) {
+        Column c = cap.column();
         double cx = x(c.position().xMm());
         double cy = y(c.position().yMm());
         double halfX = c.cxMm() / 2 * scale;
-        double halfY = (c.shape() == ColumnShape.CIRCULAR ? c.cxMm() : c.cyMm()) / 2 * scale;
         if (c.shape() == ColumnShape.CIRCULAR) {
-            svg.circle(cx, cy, halfX, "fill=\"#ffffff\"");
-            svg.circle(cx, cy, halfX, fill);
-            svg.circle(cx, cy, halfX, edge);
+            svg.circle(cx, cy, halfX, style);
         } else {
-            svg.rect(cx - halfX, cy - halfY, 2 * halfX, 2 * halfY, "fill=\"#ffffff\"");
-            svg.rect(cx - halfX, cy - halfY, 2 * halfX, 2 * halfY, fill);
-            svg.rect(cx - halfX, cy - halfY, 2 * halfX, 2 * halfY, edge);
-        }
-        if (!tags.isEmpty()) {
-            Annotations.tag(svg, cx + halfX + 3, cy - halfY + 2, tags);
+            double halfY = c.cyMm() / 2 * scale;
+            svg.rect(cx - halfX, cy - halfY, 2 * halfX, 2 * halfY, style);
         }
     }
 

@@ -103,9 +103,10 @@ final class ReportNumbers {
 
     /**
      * A utilisation to two decimals, rounded up so that the text is never below the value:
-     * {@code 1.0004 → "1.01"} (a failing check never reads 1.00), {@code 0.8123 → "0.82"}.
+     * {@code 1.0004 → "1.01"} (a failing check never reads 1.00), {@code 0.8123 → "0.82"}. Rounded
+     * from the shortest decimal of the double, so that 0.9 stays 0.90.
      */
     static String utilisation(double value) {
-        return new BigDecimal(value).setScale(UTILISATION_DECIMALS, RoundingMode.CEILING).toPlainString();
+        return BigDecimal.valueOf(value).setScale(UTILISATION_DECIMALS, RoundingMode.CEILING).toPlainString();
     }
 }

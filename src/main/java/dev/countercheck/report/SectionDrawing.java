@@ -178,19 +178,21 @@ final class SectionDrawing {
     }
 
     private static String axis(BarSet set) {
-        return set.direction() == Direction.X ? "along x" : "along y";
+        return set.direction() == Direction.X ? "x" : "y";
     }
 
     private String tags(BarSet set) {
         return marks.tags(set.direction() == Direction.X ? Item.BARS_X : Item.BARS_Y);
     }
 
+    /** A leader from the bars to their label at the right; a fail tag stands before the label. */
     private void leader(double right, double from, double at, String text, String tags) {
         svg.line(right + 2, from, right + 12, at, "stroke=\"#9aa1aa\" stroke-width=\"0.6\"");
-        svg.text(right + 14, at + 4, text, "start", tags.isEmpty() ? Styles.TEXT : Styles.TEXT_FAIL);
+        double x = right + 14;
         if (!tags.isEmpty()) {
-            Annotations.tag(svg, right + 18 + text.length() * 6.1, at, tags);
+            x += Annotations.tag(svg, x, at, tags) + 4;
         }
+        svg.text(x, at + 4, text, "start", tags.isEmpty() ? Styles.TEXT : Styles.TEXT_FAIL);
     }
 
     /** Draws one set and returns its level above the soffit, mm. */
@@ -249,8 +251,11 @@ final class SectionDrawing {
         Annotations.extension(svg, left - 3, soffit, at - 4, soffit);
         Annotations.vertical(svg, at, soffit, TOP, ReportNumbers.display(cap.depthMm(), "mm"), Styles.DIMENSION);
         List<List<Integer>> columns = pileColumns();
-        double leftEdge = x(cap.piles().positions().get(columns.get(0).get(0)).xMm() - cap.piles().diameterMm() / 2);
-        Annotations.vertical(svg, leftEdge - 8, soffit, z(cap.piles().embedmentMm()),
+        if (columns.isEmpty()) {
+            return;
+        }
+        double rightEdge = x(cap.piles().positions().get(columns.get(0).get(0)).xMm() + cap.piles().diameterMm() / 2);
+        Annotations.verticalLabelRight(svg, rightEdge + 7, soffit, z(cap.piles().embedmentMm()),
                 ReportNumbers.display(cap.piles().embedmentMm(), "mm"), Styles.DIMENSION);
     }
 }

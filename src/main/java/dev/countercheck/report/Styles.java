@@ -16,9 +16,9 @@ final class Styles {
 
     static final String CAP = "fill=\"#efece4\" stroke=\"" + INK + "\" stroke-width=\"1.6\"";
     static final String CAP_SECTION = "fill=\"#e4e0d5\" stroke=\"" + INK + "\" stroke-width=\"1.6\"";
-    static final String PILE = "fill=\"#fbfaf6\" stroke=\"" + INK + "\" stroke-width=\"1.3\"";
+    static final String PILE = "fill=\"#fbfaf6\" fill-opacity=\"0.8\" stroke=\"" + INK + "\" stroke-width=\"1.3\"";
     static final String PILE_BELOW = "fill=\"#d8d2c4\" stroke=\"" + INK + "\" stroke-width=\"1.3\"";
-    static final String PILE_FAIL = "fill=\"#fbfaf6\" stroke=\"" + FAIL_COLOUR
+    static final String PILE_FAIL = "fill=\"#fbfaf6\" fill-opacity=\"0.8\" stroke=\"" + FAIL_COLOUR
             + "\" stroke-width=\"3.2\" stroke-dasharray=\"7 3\"";
     static final String COLUMN_EDGE = "fill=\"none\" stroke=\"" + INK + "\" stroke-width=\"1.6\"";
     static final String COLUMN_EDGE_FAIL = "fill=\"none\" stroke=\"" + FAIL_COLOUR

@@ -17,13 +17,18 @@ final class Svg {
     private final StringBuilder out = new StringBuilder();
 
     /**
-     * Opens a picture {@code width} × {@code height} canvas units (rounded up to whole units) with
+     * Opens a drawing {@code width} × {@code height} canvas units (rounded up to whole units) with
      * {@code title} as its accessible name.
      */
     Svg(double width, double height, String title) {
+        this(width, height, title, "drawing");
+    }
+
+    /** As {@link #Svg(double, double, String)}, with the picture's class ("drawing", "sample"). */
+    Svg(double width, double height, String title, String cssClass) {
         String w = num(Math.ceil(width));
         String h = num(Math.ceil(height));
-        out.append("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"drawing\" viewBox=\"0 0 ")
+        out.append("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"").append(cssClass).append("\" viewBox=\"0 0 ")
                 .append(w).append(' ').append(h).append("\" width=\"").append(w)
                 .append("\" height=\"").append(h).append("\" role=\"img\" font-family=\"")
                 .append(Styles.FONT).append("\"><title>").append(escape(title)).append("</title>");
