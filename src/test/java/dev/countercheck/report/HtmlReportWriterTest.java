@@ -132,6 +132,9 @@ class HtmlReportWriterTest {
                     .isEqualTo("http://www.w3.org/2000/svg");
         }
         assertThat(page.select("a[href]").eachAttr("href")).allMatch(href -> href.startsWith("#"));
+        assertThat(page.select("meta[http-equiv=Content-Security-Policy]").attr("content"))
+                .as("and the browser is told to refuse any load, should one slip in")
+                .startsWith("default-src 'none';");
     }
 
     @Test
