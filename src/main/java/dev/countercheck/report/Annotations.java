@@ -47,7 +47,7 @@ final class Annotations {
 
     /** A short extension line, from the object towards its dimension line. */
     static void extension(Svg svg, double x1, double y1, double x2, double y2) {
-        svg.line(x1, y1, x2, y2, "stroke=\"#9aa1aa\" stroke-width=\"0.6\"");
+        svg.line(x1, y1, x2, y2, Styles.LEADER);
     }
 
     private static void tick(Svg svg, double x, double y, String style) {

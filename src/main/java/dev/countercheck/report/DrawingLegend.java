@@ -58,7 +58,7 @@ final class DrawingLegend {
                         + " only the part on the cap is drawn.")));
         BarLayout.spreadMm(cap).ifPresent(rise -> rows.add(new LegendRow(sample("spread", s -> {
             s.circle(WIDTH / 2, HEIGHT / 2, 7, Styles.SPREAD);
-            s.line(WIDTH / 2 + 10, HEIGHT - 3, WIDTH / 2 + 18, 5, Styles.SPREAD.replace("fill=\"none\" ", ""));
+            s.line(WIDTH / 2 + 10, HEIGHT - 3, WIDTH / 2 + 18, 5, Styles.SPREAD_LINE);
         }), "45° spread from the edge of each pile head up to the lowest bottom bars: a ring " + mm(rise)
                 + " mm outside the pile in plan, lines and end points in the section.")));
         rows.add(new LegendRow(sample("cut", s -> {

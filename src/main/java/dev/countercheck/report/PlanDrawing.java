@@ -33,9 +33,8 @@ final class PlanDrawing {
     private final Drawing drawing;
     private final DrawingMarks marks;
     private final String id;
+    private final PlanFrame frame;
     private final double scale;
-    private final double centreX;
-    private final double centreY;
     private final Svg svg;
     /** Labels and tags, drawn last so that no line or pile hides them. */
     private final List<Runnable> overlay = new ArrayList<>();
@@ -46,8 +45,7 @@ final class PlanDrawing {
         this.cap = drawing.cap();
         this.marks = marks;
         this.scale = scale(cap);
-        this.centreX = centreX();
-        this.centreY = TOP + cap.planYMm() * scale / 2;
+        this.frame = new PlanFrame(cap, scale, centreX(), TOP + cap.planYMm() * scale / 2);
         this.svg = new Svg(WIDTH, TOP + cap.planYMm() * scale + BOTTOM, "Plan of pile cap " + cap.id());
     }
 
@@ -67,18 +65,18 @@ final class PlanDrawing {
     }
 
     private double x(double mm) {
-        return centreX + mm * scale;
+        return frame.x(mm);
     }
 
     private double y(double mm) {
-        return centreY - mm * scale;
+        return frame.y(mm);
     }
 
     private String draw() {
-        double left = x(-cap.planXMm() / 2);
-        double right = x(cap.planXMm() / 2);
-        double top = y(cap.planYMm() / 2);
-        double bottom = y(-cap.planYMm() / 2);
+        double left = frame.left();
+        double right = frame.right();
+        double top = frame.top();
+        double bottom = frame.bottom();
         svg.hatch(id + "-hatch", 6, Styles.HATCH_COLOUR);
         svg.rect(left, top, right - left, bottom - top, Styles.CAP);
         cap.reinforcement().ifPresent(this::bars);
@@ -90,7 +88,7 @@ final class PlanDrawing {
         columnHatch();
         piles();
         columnEdge();
-        dimensions(left, right, top, bottom);
+        PlanDimensions.draw(svg, frame);
         cap.reinforcement().ifPresent(r -> barLabels(r, left, top, bottom));
         axesAndScale(left, bottom);
         overlay.forEach(Runnable::run);
@@ -178,13 +176,13 @@ final class PlanDrawing {
         svg.line(left - 22, at, right + 12, at, Styles.CUT);
         for (double end : new double[] {left - 22, right + 12}) {
             svg.path(new Svg.Path().moveTo(end - 4, at - 3).lineTo(end + 4, at - 3).lineTo(end, at - 11).close(),
-                    "fill=\"" + Styles.INK + "\"");
+                    Styles.ARROW_HEAD);
             svg.text(end, at + 15, "A", "middle", Styles.TEXT_CUT);
         }
     }
 
     private void piles() {
-        double radius = pileRadius();
+        double radius = frame.pileRadius();
         double spread = BarLayout.spreadMm(cap).orElse(0);
         List<Point> positions = cap.piles().positions();
         for (int i = 0; i < positions.size(); i++) {
@@ -240,70 +238,6 @@ final class PlanDrawing {
         }
     }
 
-    private void dimensions(double left, double right, double top, double bottom) {
-        double overallY = top - 48;
-        Annotations.extension(svg, left, top - 4, left, overallY - 4);
-        Annotations.extension(svg, right, top - 4, right, overallY - 4);
-        Annotations.horizontal(svg, left, right, overallY, ReportNumbers.display(cap.planXMm(), "mm"),
-                Styles.DIMENSION);
-        double overallX = left - 56;
-        Annotations.extension(svg, left - 4, top, overallX - 4, top);
-        Annotations.extension(svg, left - 4, bottom, overallX - 4, bottom);
-        Annotations.vertical(svg, overallX, bottom, top, ReportNumbers.display(cap.planYMm(), "mm"),
-                Styles.DIMENSION);
-        List<Double> xs = chain(cap.piles().positions().stream().map(Point::xMm).toList(), cap.planXMm());
-        double chainY = bottom + 26;
-        for (int i = 0; i < xs.size(); i++) {
-            double from = i == 0 || i == xs.size() - 1 ? bottom + 4 : y(lowestAt(xs.get(i))) + pileRadius() + 16;
-            Annotations.extension(svg, x(xs.get(i)), Math.min(from, bottom + 4), x(xs.get(i)), chainY + 4);
-            if (i > 0) {
-                Annotations.horizontal(svg, x(xs.get(i - 1)), x(xs.get(i)), chainY,
-                        ReportNumbers.display(xs.get(i) - xs.get(i - 1), "mm"), Styles.DIMENSION);
-            }
-        }
-        List<Double> ys = chain(cap.piles().positions().stream().map(Point::yMm).toList(), cap.planYMm());
-        double chainX = right + 30;
-        for (int i = 0; i < ys.size(); i++) {
-            double from = i == 0 || i == ys.size() - 1 ? right + 4 : x(rightmostAt(ys.get(i))) + pileRadius() + 2;
-            Annotations.extension(svg, Math.min(from, right + 4), y(ys.get(i)), chainX + 4, y(ys.get(i)));
-            if (i > 0) {
-                Annotations.vertical(svg, chainX, y(ys.get(i - 1)), y(ys.get(i)),
-                        ReportNumbers.display(ys.get(i) - ys.get(i - 1), "mm"), Styles.DIMENSION);
-            }
-        }
-    }
-
-    /** The cap's edges and the distinct pile coordinates between them, in order (coordinates within 0.5 mm are one). */
-    private static List<Double> chain(List<Double> coordinates, double length) {
-        List<Double> sorted = new ArrayList<>(coordinates);
-        sorted.sort(Double::compare);
-        List<Double> chain = new ArrayList<>();
-        chain.add(-length / 2);
-        for (double c : sorted) {
-            if (c - chain.get(chain.size() - 1) > 0.5 && length / 2 - c > 0.5) {
-                chain.add(c);
-            }
-        }
-        chain.add(length / 2);
-        return chain;
-    }
-
-    private double pileRadius() {
-        return cap.piles().diameterMm() / 2 * scale;
-    }
-
-    /** The y of the lowest pile centre at x, so that its extension line starts at a pile. */
-    private double lowestAt(double xMm) {
-        return cap.piles().positions().stream().filter(p -> Math.abs(p.xMm() - xMm) <= 0.5)
-                .mapToDouble(Point::yMm).min().orElse(-cap.planYMm() / 2);
-    }
-
-    /** The x of the rightmost pile centre at y. */
-    private double rightmostAt(double yMm) {
-        return cap.piles().positions().stream().filter(p -> Math.abs(p.yMm() - yMm) <= 0.5)
-                .mapToDouble(Point::xMm).max().orElse(cap.planXMm() / 2);
-    }
-
     private void barLabels(Reinforcement r, double left, double top, double bottom) {
         String xText = "x-bars: " + BarLayout.describe(r, Direction.X);
         svg.text(left, top - 12, xText, "start", Styles.TEXT);
@@ -322,13 +256,13 @@ final class PlanDrawing {
     private void axesAndScale(double left, double bottom) {
         double ox = left;
         double oy = bottom + 100;
-        svg.line(ox, oy, ox + 26, oy, "stroke=\"" + Styles.INK + "\" stroke-width=\"1\"");
+        svg.line(ox, oy, ox + 26, oy, Styles.ARROW_SHAFT);
         svg.path(new Svg.Path().moveTo(ox + 30, oy).lineTo(ox + 24, oy - 3).lineTo(ox + 24, oy + 3).close(),
-                "fill=\"" + Styles.INK + "\"");
+                Styles.ARROW_HEAD);
         svg.text(ox + 34, oy + 4, "x", "start", Styles.TEXT);
-        svg.line(ox, oy, ox, oy - 26, "stroke=\"" + Styles.INK + "\" stroke-width=\"1\"");
+        svg.line(ox, oy, ox, oy - 26, Styles.ARROW_SHAFT);
         svg.path(new Svg.Path().moveTo(ox, oy - 30).lineTo(ox - 3, oy - 24).lineTo(ox + 3, oy - 24).close(),
-                "fill=\"" + Styles.INK + "\"");
+                Styles.ARROW_HEAD);
         svg.text(ox, oy - 33, "y", "middle", Styles.TEXT);
         Annotations.scaleBar(svg, ox + 80, oy - 14, scale, WIDTH - LEFT - RIGHT);
     }

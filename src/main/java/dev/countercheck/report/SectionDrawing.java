@@ -144,7 +144,7 @@ final class SectionDrawing {
             for (int side : new int[] {-1, 1}) {
                 double from = px + side * radius;
                 double to = from + side * rise;
-                svg.line(x(from), z(head), x(to), z(head + rise), Styles.SPREAD.replace("fill=\"none\" ", ""));
+                svg.line(x(from), z(head), x(to), z(head + rise), Styles.SPREAD_LINE);
                 svg.circle(x(to), z(head + rise), 2.2, Styles.SPREAD_POINT);
             }
         }
@@ -187,7 +187,7 @@ final class SectionDrawing {
 
     /** A leader from the bars to their label at the right; a fail tag stands before the label. */
     private void leader(double right, double from, double at, String text, String tags) {
-        svg.line(right + 2, from, right + 12, at, "stroke=\"#9aa1aa\" stroke-width=\"0.6\"");
+        svg.line(right + 2, from, right + 12, at, Styles.LEADER);
         double x = right + 14;
         if (!tags.isEmpty()) {
             x += Annotations.tag(svg, x, at, tags) + 4;
@@ -202,7 +202,7 @@ final class SectionDrawing {
         double side = r.cover().sideMm();
         if (set.direction() == Direction.X) {
             double width = Math.max(set.diameterMm() * scale, 1.4);
-            String colour = failing ? Styles.FAIL_COLOUR : (bottom ? "#2f5d8a" : "#5f86ad");
+            String colour = failing ? Styles.FAIL_COLOUR : (bottom ? Styles.BAR_COLOUR : Styles.BAR_TOP_COLOUR);
             String dash = failing ? " stroke-dasharray=\"7 3\"" : "";
             String style = "fill=\"none\" stroke=\"" + colour + "\" stroke-width=\"" + Svg.num(width) + "\"" + dash;
             double end = cap.planXMm() / 2 - side - set.diameterMm() / 2;
@@ -219,7 +219,7 @@ final class SectionDrawing {
             double radius = Math.max(set.diameterMm() / 2 * scale, 1.8);
             for (double at : BarLayout.positions(set.count(), cap.planXMm(), side, set.diameterMm())) {
                 svg.circle(x(at), z(level), radius, failing ? Styles.BAR_FILL_FAIL
-                        : bottom ? Styles.BAR_FILL : "fill=\"#5f86ad\" stroke=\"none\"");
+                        : bottom ? Styles.BAR_FILL : Styles.BAR_TOP_FILL);
             }
         }
         return level;

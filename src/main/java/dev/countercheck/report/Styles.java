@@ -24,20 +24,27 @@ final class Styles {
     static final String COLUMN_EDGE_FAIL = "fill=\"none\" stroke=\"" + FAIL_COLOUR
             + "\" stroke-width=\"3.2\" stroke-dasharray=\"7 3\"";
     static final String HATCH_COLOUR = "#7d7566";
-    static final String BAR_X = "stroke=\"#2f5d8a\" stroke-width=\"0.9\"";
-    static final String BAR_Y = "stroke=\"#2f5d8a\" stroke-width=\"0.9\" stroke-dasharray=\"10 2\"";
-    static final String BAR_TOP = "stroke=\"#5f86ad\" stroke-width=\"0.9\" stroke-dasharray=\"2 3\"";
+    static final String BAR_COLOUR = "#2f5d8a";
+    static final String BAR_TOP_COLOUR = "#5f86ad";
+    static final String BAR_X = "stroke=\"" + BAR_COLOUR + "\" stroke-width=\"0.9\"";
+    static final String BAR_Y = "stroke=\"" + BAR_COLOUR + "\" stroke-width=\"0.9\" stroke-dasharray=\"10 2\"";
+    static final String BAR_TOP = "stroke=\"" + BAR_TOP_COLOUR + "\" stroke-width=\"0.9\" stroke-dasharray=\"2 3\"";
     static final String BAR_FAIL = "stroke=\"" + FAIL_COLOUR + "\" stroke-width=\"1.3\" stroke-dasharray=\"7 3\"";
-    static final String BAR_FILL = "fill=\"#2f5d8a\" stroke=\"none\"";
+    static final String BAR_FILL = "fill=\"" + BAR_COLOUR + "\" stroke=\"none\"";
+    static final String BAR_TOP_FILL = "fill=\"" + BAR_TOP_COLOUR + "\" stroke=\"none\"";
     static final String BAR_FILL_FAIL = "fill=\"" + FAIL_COLOUR + "\" stroke=\"" + FAIL_COLOUR + "\" stroke-width=\"1\"";
     static final String SHEAR = "stroke=\"#5b3f8c\" stroke-width=\"1.4\" stroke-dasharray=\"12 3 2 3\"";
     static final String SHEAR_FAIL = "stroke=\"" + FAIL_COLOUR + "\" stroke-width=\"3.2\" stroke-dasharray=\"7 3\"";
     static final String PERIMETER = "fill=\"none\" stroke=\"#16766a\" stroke-width=\"1.5\" stroke-dasharray=\"6 3\"";
     static final String PERIMETER_FAIL = "fill=\"none\" stroke=\"" + FAIL_COLOUR
             + "\" stroke-width=\"3.2\" stroke-dasharray=\"7 3\"";
-    static final String SPREAD = "fill=\"none\" stroke=\"#8a6a12\" stroke-width=\"1\" stroke-dasharray=\"1.5 2\"";
+    static final String SPREAD_LINE = "stroke=\"#8a6a12\" stroke-width=\"1\" stroke-dasharray=\"1.5 2\"";
+    static final String SPREAD = "fill=\"none\" " + SPREAD_LINE;
     static final String SPREAD_POINT = "fill=\"#8a6a12\" stroke=\"none\"";
     static final String CUT = "stroke=\"" + INK + "\" stroke-width=\"0.9\" stroke-dasharray=\"18 3 3 3\"";
+    static final String ARROW_HEAD = "fill=\"" + INK + "\"";
+    static final String ARROW_SHAFT = "stroke=\"" + INK + "\" stroke-width=\"1\"";
+    static final String LEADER = "stroke=\"#9aa1aa\" stroke-width=\"0.6\"";
     static final String DIMENSION = "stroke=\"#4d5560\" stroke-width=\"0.8\"";
     static final String DIMENSION_FAIL = "stroke=\"" + FAIL_COLOUR + "\" stroke-width=\"2\"";
     static final String BREAK = "fill=\"none\" stroke=\"" + INK + "\" stroke-width=\"1\"";

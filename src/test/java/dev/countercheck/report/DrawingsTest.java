@@ -136,6 +136,57 @@ class DrawingsTest {
                 .isEqualTo("Plan of pile cap " + hostile);
     }
 
+    @Test
+    void everyLabelAndTagOfTheSampleDrawingsStaysOnItsCanvas() {
+        for (var sample : SampleReviews.samples()) {
+            for (ElementReview e : SampleReviews.review(sample).elements()) {
+                if (e.drawing().isEmpty()) {
+                    continue;
+                }
+                DrawingMarks m = DrawingMarks.of(e, e.drawing().get());
+                for (String svg : List.of(PlanDrawing.svg("e", e.drawing().get(), m),
+                        SectionDrawing.svg("e", e.drawing().get(), m))) {
+                    assertInsideCanvas(e.id(), xml(svg));
+                }
+            }
+        }
+    }
+
+    /**
+     * Boxes (tags, label backgrounds, the cap) and texts lie within the view box. Text width is
+     * estimated at 5.5 units a character, about the mean advance of an 11-unit sans-serif font.
+     */
+    private static void assertInsideCanvas(String element, Document svg) {
+        String[] box = svg.getDocumentElement().getAttribute("viewBox").split(" ");
+        double width = Double.parseDouble(box[2]);
+        double height = Double.parseDouble(box[3]);
+        for (Element rect : elements(svg, "rect")) {
+            if (rect.getParentNode().getNodeName().equals("clipPath")) {
+                continue;
+            }
+            assertThat(number(rect, "x")).as(element + " rect x").isBetween(0.0, width);
+            assertThat(number(rect, "x") + number(rect, "width")).as(element + " rect right").isLessThanOrEqualTo(width);
+            assertThat(number(rect, "y")).as(element + " rect y").isBetween(0.0, height);
+            assertThat(number(rect, "y") + number(rect, "height")).as(element + " rect bottom")
+                    .isLessThanOrEqualTo(height);
+        }
+        for (Element text : elements(svg, "text")) {
+            double length = text.getTextContent().length() * 5.5;
+            double x = number(text, "x");
+            double left = switch (text.getAttribute("text-anchor")) {
+                case "middle" -> x - length / 2;
+                case "end" -> x - length;
+                default -> x;
+            };
+            if (text.hasAttribute("transform")) {
+                continue;
+            }
+            assertThat(left).as(element + " text " + text.getTextContent()).isGreaterThanOrEqualTo(0);
+            assertThat(left + length).as(element + " text " + text.getTextContent()).isLessThanOrEqualTo(width);
+            assertThat(number(text, "y")).as(element + " text " + text.getTextContent()).isBetween(8.0, height);
+        }
+    }
+
     private List<Element> pileCircles() {
         return elements(plan, "circle").stream().filter(c -> c.getAttribute("stroke-width").equals("1.3")
                 || (failing(c) && c.getAttribute("fill").equals("#fbfaf6"))).toList();
