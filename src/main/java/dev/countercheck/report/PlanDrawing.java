@@ -205,7 +205,7 @@ final class PlanDrawing {
         }
     }
 
-    /** The column's hatched area, under the piles so that a pile beneath the column still shows. */
+    /** The column's hatched area, under the piles, so that a pile beneath the column shows within its outline. */
     private void columnHatch() {
         String fill = "fill=\"url(#" + Svg.escape(id) + "-hatch)\" stroke=\"none\"";
         columnShape("fill=\"#ffffff\"");

@@ -16,9 +16,9 @@ final class Styles {
 
     static final String CAP = "fill=\"#efece4\" stroke=\"" + INK + "\" stroke-width=\"1.6\"";
     static final String CAP_SECTION = "fill=\"#e4e0d5\" stroke=\"" + INK + "\" stroke-width=\"1.6\"";
-    static final String PILE = "fill=\"#fbfaf6\" fill-opacity=\"0.8\" stroke=\"" + INK + "\" stroke-width=\"1.3\"";
+    static final String PILE = "fill=\"#fbfaf6\" stroke=\"" + INK + "\" stroke-width=\"1.3\"";
     static final String PILE_BELOW = "fill=\"#d8d2c4\" stroke=\"" + INK + "\" stroke-width=\"1.3\"";
-    static final String PILE_FAIL = "fill=\"#fbfaf6\" fill-opacity=\"0.8\" stroke=\"" + FAIL_COLOUR
+    static final String PILE_FAIL = "fill=\"#fbfaf6\" stroke=\"" + FAIL_COLOUR
             + "\" stroke-width=\"3.2\" stroke-dasharray=\"7 3\"";
     static final String COLUMN_EDGE = "fill=\"none\" stroke=\"" + INK + "\" stroke-width=\"1.6\"";
     static final String COLUMN_EDGE_FAIL = "fill=\"none\" stroke=\"" + FAIL_COLOUR
@@ -51,9 +51,11 @@ final class Styles {
     static final String LABEL_BACK = "fill=\"#ffffff\" fill-opacity=\"0.85\" stroke=\"none\"";
     static final String TAG_BOX = "fill=\"#ffffff\" stroke=\"" + FAIL_COLOUR + "\" stroke-width=\"2\"";
 
+    // No text of size 12: the PDF renderer's SVG module (openhtmltopdf 1.1.31) draws text of exactly the
+    // size it registers its fonts at, 12, as a dot.
     static final String TEXT = "font-size=\"11\" fill=\"" + INK + "\"";
     static final String TEXT_SMALL = "font-size=\"9.5\" fill=\"#4d5560\"";
-    static final String TEXT_PILE = "font-size=\"12\" font-weight=\"bold\" fill=\"" + INK + "\"";
+    static final String TEXT_PILE = "font-size=\"12.5\" font-weight=\"bold\" fill=\"" + INK + "\"";
     static final String TEXT_FAIL = "font-size=\"11\" font-weight=\"bold\" fill=\"" + FAIL_COLOUR + "\"";
     static final String TEXT_CUT = "font-size=\"13\" font-weight=\"bold\" fill=\"" + INK + "\"";
 

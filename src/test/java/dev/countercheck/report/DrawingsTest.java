@@ -137,7 +137,7 @@ class DrawingsTest {
     }
 
     @Test
-    void everyLabelAndTagOfTheSampleDrawingsStaysOnItsCanvas() {
+    void everyLabelAndTagOfTheSampleDrawingsStaysOnItsCanvasAndPrints() {
         for (var sample : SampleReviews.samples()) {
             for (ElementReview e : SampleReviews.review(sample).elements()) {
                 if (e.drawing().isEmpty()) {
@@ -178,6 +178,8 @@ class DrawingsTest {
                 case "end" -> x - length;
                 default -> x;
             };
+            assertThat(text.getAttribute("font-size")).as("size 12 prints as a dot in the PDF (see Styles)")
+                    .isNotEqualTo("12");
             if (text.hasAttribute("transform")) {
                 continue;
             }
