@@ -16,6 +16,8 @@ import org.apache.pdfbox.cos.COSString;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
 import org.jsoup.helper.W3CDom;
 
 import java.io.ByteArrayOutputStream;
@@ -42,7 +44,8 @@ import java.util.logging.Logger;
  * The report as a PDF: the HTML page of {@link HtmlReportWriter}, laid out on A4 by its print
  * stylesheet with openhtmltopdf (on PDFBox), the drawings drawn by its SVG module (Batik).
  *
- * <p>Same content: the PDF is made from the very HTML text the report writes. Its one font is
+ * <p>Same content: the PDF is made from the very HTML text the report writes, with an outline
+ * (bookmarks) of its parts added. Its one font is
  * Liberation Sans, which PDFBox ships in its jar, embedded as a subset; it covers the Greek letters
  * and mathematical signs of the calculation traces, which the PDF base-14 fonts do not. Bold text
  * is set in the same regular face.
@@ -82,7 +85,9 @@ public final class PdfReportWriter {
     }
 
     byte[] render(String page, Review review) {
-        org.w3c.dom.Document dom = new W3CDom().fromJsoup(Jsoup.parse(page));
+        Document html = Jsoup.parse(page);
+        addBookmarks(html);
+        org.w3c.dom.Document dom = new W3CDom().fromJsoup(html);
         Path font = null;
         try {
             font = fontFile();
@@ -112,6 +117,23 @@ public final class PdfReportWriter {
             throw new IllegalStateException("could not lay out the PDF report: " + e.getMessage(), e);
         } finally {
             delete(font);
+        }
+    }
+
+    /**
+     * The PDF's outline, read by the renderer from {@code <bookmarks>} in the head: the register,
+     * each element under "Elements", and the assumptions, each named as its heading reads.
+     */
+    static void addBookmarks(Document html) {
+        Element bookmarks = html.head().appendElement("bookmarks");
+        for (Element part : html.select("body > header[id], body > section[id]")) {
+            Element heading = part.selectFirst("h1, h2");
+            Element mark = bookmarks.appendElement("bookmark")
+                    .attr("name", heading == null ? part.id() : heading.text()).attr("href", "#" + part.id());
+            for (Element element : part.select("> section.element[id]")) {
+                mark.appendElement("bookmark").attr("name", element.selectFirst("h3").text())
+                        .attr("href", "#" + element.id());
+            }
         }
     }
 

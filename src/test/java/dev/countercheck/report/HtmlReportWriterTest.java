@@ -39,6 +39,14 @@ class HtmlReportWriterTest {
     }
 
     @Test
+    void everyIdOnThePageIsUnique() {
+        List<String> ids = page.select("[id]").eachAttr("id");
+        assertThat(ids).doesNotHaveDuplicates();
+        assertThat(page.select("[href^=#]").eachAttr("href")).as("every link inside the page has its target")
+                .allMatch(href -> ids.contains(href.substring(1)));
+    }
+
+    @Test
     void coverNamesProjectSubmissionHashesToolDateVerdictAndCounts() {
         Element cover = page.getElementById("cover");
         Map<String, String> facts = new java.util.LinkedHashMap<>();

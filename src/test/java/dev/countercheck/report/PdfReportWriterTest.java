@@ -14,6 +14,8 @@ import org.junit.jupiter.api.Test;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.List;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -62,6 +64,23 @@ class PdfReportWriterTest {
         String flat = text.replaceAll("\\s+", "");
         assertThat(flat).contains("ΣP_i·x_i/z", "1+√(200/45)", "γs");
         assertThat(text).contains("mm²");
+    }
+
+    @Test
+    void hasAnOutlineOfItsParts() throws IOException {
+        try (PDDocument document = Loader.loadPDF(pdf)) {
+            var outline = document.getDocumentCatalog().getDocumentOutline();
+            List<String> top = new ArrayList<>();
+            outline.children().forEach(item -> top.add(item.getTitle()));
+            assertThat(top).containsExactly(HOSTILE, "1 Findings register", "2 Elements", "3 Assumptions and cautions");
+            List<String> elements = new ArrayList<>();
+            outline.children().forEach(item -> {
+                if (item.getTitle().equals("2 Elements")) {
+                    item.children().forEach(child -> elements.add(child.getTitle()));
+                }
+            });
+            assertThat(elements).containsExactly("2.1 PC-D1 pile-cap", "2.2 PF-A2 pad-footing");
+        }
     }
 
     @Test
