@@ -70,12 +70,18 @@ public final class ReviewCommand implements Callable<Integer> {
         Severity threshold;
         String reviewDate;
         List<Path> inputs;
+        boolean batch;
         try {
             threshold = Severity.fromLabel(failOn);
             reviewDate = ReviewDate.resolve(date, Optional.ofNullable(System.getenv("SOURCE_DATE_EPOCH")),
                     Clock.systemUTC());
             inputs = SubmissionFiles.expand(files);
             requireDistinctBasenames(inputs);
+            batch = inputs.size() > 1 || files.stream().anyMatch(Files::isDirectory);
+            if (batch && inputs.stream().anyMatch(p -> SubmissionFiles.basename(p).equals(ReportIndex.NAME))) {
+                throw new UsageException("a submission named " + ReportIndex.NAME + " would write its report where"
+                        + " the index of several submissions goes; rename it or review it on its own");
+            }
         } catch (IllegalArgumentException | UsageException e) {
             err.println("countercheck review: " + e.getMessage());
             return ExitCodes.UNUSABLE;
@@ -98,12 +104,11 @@ public final class ReviewCommand implements Callable<Integer> {
                 Files.createDirectories(outDir);
                 ReportFiles.writeAtomically(json, new JsonResultWriter().write(review));
                 ReportFiles.writeAtomically(html, new HtmlReportWriter().write(review));
-                Optional<Path> pdfFile = pdf ? Optional.of(outDir.resolve(SubmissionFiles.basename(file) + ".pdf"))
-                        : Optional.empty();
-                if (pdfFile.isPresent()) {
-                    ReportFiles.writeAtomically(pdfFile.get(), new PdfReportWriter().write(review));
+                Path pdfFile = outDir.resolve(SubmissionFiles.basename(file) + ".pdf");
+                if (pdf) {
+                    ReportFiles.writeAtomically(pdfFile, new PdfReportWriter().write(review));
                 }
-                index.reviewed(review, json, html, pdfFile);
+                index.reviewed(review, json, html, pdf ? Optional.of(pdfFile) : Optional.empty());
                 out.println(SummaryLine.of(file, review, json, html));
                 boolean found = review.elements().stream().flatMap(e -> e.findings().stream())
                         .anyMatch(f -> f.severity().atLeast(threshold));
@@ -127,12 +132,13 @@ public final class ReviewCommand implements Callable<Integer> {
                 status = ExitCodes.UNUSABLE;
             }
         }
-        if (inputs.size() > 1 || files.stream().anyMatch(Files::isDirectory)) {
+        if (batch) {
+            Path indexFile = outDir.resolve(ReportIndex.NAME + ".html");
             try {
-                ReportFiles.writeAtomically(outDir.resolve("index.html"), index.html());
-                out.println("index of " + inputs.size() + " submissions -> " + outDir.resolve("index.html"));
+                ReportFiles.writeAtomically(indexFile, index.html());
+                out.println("index of " + inputs.size() + " submissions -> " + indexFile);
             } catch (IOException e) {
-                err.println("cannot write " + outDir.resolve("index.html") + ": " + e.getMessage());
+                err.println("cannot write " + indexFile + ": " + e.getMessage());
                 status = ExitCodes.UNUSABLE;
             }
         }

@@ -21,6 +21,9 @@ import java.util.Optional;
  */
 public final class ReportIndex {
 
+    /** The index's file name without extension: {@code index.html}. */
+    public static final String NAME = "index";
+
     private final Review.ToolInfo tool;
     private final String reviewDate;
     private final List<Entry> entries = new ArrayList<>();
