@@ -47,8 +47,9 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     public record Count(String label, int count) {
     }
 
-    public record FindingRow(String id, String elementId, String elementAnchor, String severity, String check,
-                             String checkAnchor, String basis, String message) {
+    /** A finding; {@code checkAnchor} is its check's place in the report, or empty when the check is not listed. */
+    public record FindingRow(String id, String elementId, String elementAnchor, String severity, String checkAnchor,
+                             String basis, String message) {
     }
 
     /**
@@ -162,8 +163,8 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 .map(CheckView::anchor)
                 .findFirst()
                 .orElse("");
-        return new FindingRow(finding.id(), elementId, elementAnchor, finding.severity().label(), finding.check(),
-                checkAnchor, finding.basis(), finding.message());
+        return new FindingRow(finding.id(), elementId, elementAnchor, finding.severity().label(), checkAnchor,
+                finding.basis(), finding.message());
     }
 
     private static CheckView check(CheckResult check, String anchor) {
