@@ -3,7 +3,9 @@ package dev.countercheck.cli;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.report.HtmlReportWriter;
 import dev.countercheck.report.JsonResultWriter;
+import dev.countercheck.report.PdfReportWriter;
 import dev.countercheck.report.ReportFiles;
+import dev.countercheck.report.ReportIndex;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 import dev.countercheck.ruleset.Ruleset;
@@ -27,7 +29,8 @@ import java.util.concurrent.Callable;
 
 /** {@code review FILE...}: reviews each submission and writes its JSON result and HTML report. */
 @Command(name = "review", mixinStandardHelpOptions = true, versionProvider = Version.class,
-        description = "Recompute every check of each submission and write DIR/<name>.json and DIR/<name>.html.",
+        description = "Recompute every check of each submission and write DIR/<name>.json and DIR/<name>.html;"
+                + " for several submissions or a folder, also DIR/index.html.",
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:nothing at or above the --fail-on severity was found",
                 "1:something at or above the --fail-on severity was found",
@@ -54,6 +57,9 @@ public final class ReviewCommand implements Callable<Integer> {
             description = "Review date to state (default: SOURCE_DATE_EPOCH if set, else today).")
     Optional<String> date;
 
+    @Option(names = "--pdf", description = "Also write DIR/<name>.pdf, the report laid out on A4.")
+    boolean pdf;
+
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -64,12 +70,18 @@ public final class ReviewCommand implements Callable<Integer> {
         Severity threshold;
         String reviewDate;
         List<Path> inputs;
+        boolean batch;
         try {
             threshold = Severity.fromLabel(failOn);
             reviewDate = ReviewDate.resolve(date, Optional.ofNullable(System.getenv("SOURCE_DATE_EPOCH")),
                     Clock.systemUTC());
             inputs = SubmissionFiles.expand(files);
             requireDistinctBasenames(inputs);
+            batch = inputs.size() > 1 || files.stream().anyMatch(Files::isDirectory);
+            if (batch && inputs.stream().anyMatch(p -> SubmissionFiles.basename(p).equals(ReportIndex.NAME))) {
+                throw new UsageException("a submission named " + ReportIndex.NAME + " would write its report where"
+                        + " the index of several submissions goes; rename it or review it on its own");
+            }
         } catch (IllegalArgumentException | UsageException e) {
             err.println("countercheck review: " + e.getMessage());
             return ExitCodes.UNUSABLE;
@@ -77,6 +89,7 @@ public final class ReviewCommand implements Callable<Integer> {
         Rulesets rulesets = new Rulesets();
         ProjectReviewer reviewer = new ProjectReviewer(Version.tool());
         int status = ExitCodes.OK;
+        ReportIndex index = new ReportIndex(Version.tool(), reviewDate);
         for (int i = 0; i < inputs.size(); i++) {
             Path file = inputs.get(i);
             if (inputs.size() > 1) {
@@ -91,6 +104,11 @@ public final class ReviewCommand implements Callable<Integer> {
                 Files.createDirectories(outDir);
                 ReportFiles.writeAtomically(json, new JsonResultWriter().write(review));
                 ReportFiles.writeAtomically(html, new HtmlReportWriter().write(review));
+                Path pdfFile = outDir.resolve(SubmissionFiles.basename(file) + ".pdf");
+                if (pdf) {
+                    ReportFiles.writeAtomically(pdfFile, new PdfReportWriter().write(review));
+                }
+                index.reviewed(review, json, html, pdf ? Optional.of(pdfFile) : Optional.empty());
                 out.println(SummaryLine.of(file, review, json, html));
                 boolean found = review.elements().stream().flatMap(e -> e.findings().stream())
                         .anyMatch(f -> f.severity().atLeast(threshold));
@@ -101,13 +119,26 @@ public final class ReviewCommand implements Callable<Integer> {
                 e.errors().forEach(err::println);
                 err.println(file + ": not reviewed (" + e.errors().size() + " input error"
                         + (e.errors().size() == 1 ? "" : "s") + ")");
+                index.notReviewed(file.toString(), "input errors");
                 status = ExitCodes.UNUSABLE;
             } catch (RulesetException e) {
                 e.errors().forEach(err::println);
                 err.println(file + ": not reviewed (the ruleset cannot be used)");
+                index.notReviewed(file.toString(), "the ruleset cannot be used");
                 status = ExitCodes.UNUSABLE;
             } catch (IOException e) {
                 err.println(file + ": cannot write the reports to " + outDir + ": " + e.getMessage());
+                index.notReviewed(file.toString(), "its reports could not be written");
+                status = ExitCodes.UNUSABLE;
+            }
+        }
+        if (batch) {
+            Path indexFile = outDir.resolve(ReportIndex.NAME + ".html");
+            try {
+                ReportFiles.writeAtomically(indexFile, index.html());
+                out.println("index of " + inputs.size() + " submissions -> " + indexFile);
+            } catch (IOException e) {
+                err.println("cannot write " + indexFile + ": " + e.getMessage());
                 status = ExitCodes.UNUSABLE;
             }
         }

@@ -14,14 +14,15 @@ import java.util.Locale;
 import java.util.TimeZone;
 
 /**
- * Renders a finished {@link Review} as one self-contained HTML page: inline CSS, no scripts,
- * no external resources, a print stylesheet. Every value is HTML-escaped by the template's
+ * Renders a finished {@link Review} as one self-contained HTML page: inline CSS, inline SVG
+ * drawings, no scripts, no external resources, a print stylesheet for A4. Every value is HTML-escaped by the template's
  * output format. Numbers are formatted in Java ({@link ReportNumbers}), so the output does not
  * depend on the machine's locale or time zone.
  */
 public final class HtmlReportWriter {
 
     static final String TEMPLATE = "review.ftlh";
+    static final String INDEX_TEMPLATE = "index.ftlh";
 
     private final Configuration freemarker;
 
@@ -42,13 +43,18 @@ public final class HtmlReportWriter {
 
     /** The HTML page for {@code review}. */
     public String write(Review review) {
+        return render(TEMPLATE, HtmlModel.of(review));
+    }
+
+    /** The page of template {@code name} for {@code model}. */
+    String render(String name, Object model) {
         StringWriter out = new StringWriter();
         try {
-            Template template = freemarker.getTemplate(TEMPLATE);
-            template.process(HtmlModel.of(review), out);
+            Template template = freemarker.getTemplate(name);
+            template.process(model, out);
         } catch (IOException | TemplateException e) {
-            // The template ships inside the jar and its model is built here: failing is a bug in this package.
-            throw new IllegalStateException("could not render templates/" + TEMPLATE + ": " + e.getMessage(), e);
+            // The templates ship inside the jar and their models are built here: failing is a bug in this package.
+            throw new IllegalStateException("could not render templates/" + name + ": " + e.getMessage(), e);
         }
         return out.toString();
     }

@@ -31,6 +31,11 @@ public final class ReportFiles {
      * @throws IOException when the folder cannot be written or the move fails
      */
     public static void writeAtomically(Path target, String content) throws IOException {
+        writeAtomically(target, content.getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** As {@link #writeAtomically(Path, String)}, for bytes (a PDF). */
+    public static void writeAtomically(Path target, byte[] content) throws IOException {
         Path absolute = target.toAbsolutePath();
         Path folder = absolute.getParent();
         Files.createDirectories(folder);
@@ -43,9 +48,9 @@ public final class ReportFiles {
         }
     }
 
-    private static void write(Path file, String content) throws IOException {
+    private static void write(Path file, byte[] content) throws IOException {
         try (FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {
-            ByteBuffer bytes = ByteBuffer.wrap(content.getBytes(StandardCharsets.UTF_8));
+            ByteBuffer bytes = ByteBuffer.wrap(content);
             while (bytes.hasRemaining()) {
                 channel.write(bytes);
             }

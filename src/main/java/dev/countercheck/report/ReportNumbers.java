@@ -6,10 +6,9 @@ import java.math.BigDecimal;
 import java.math.RoundingMode;
 
 /**
- * How numbers are rounded for output. The JSON result and the HTML report use the same
- * rounding, so a person reading the report sees exactly the numbers the JSON carries.
- * Plain notation, no exponent, no locale.
+ * How numbers are rounded for output. Plain notation, no exponent, no locale.
  *
+ * <p>The JSON result:
  * <ul>
  *   <li>computed quantities and trace results: four significant figures, as in the trace's
  *       substituted text ({@link Num#f});</li>
@@ -17,10 +16,16 @@ import java.math.RoundingMode;
  *   <li>claimed values: as submitted (the shortest decimal that gives the same double), so the
  *       report never misquotes the designer.</li>
  * </ul>
+ *
+ * <p>The HTML report and the PDF show the same numbers to the precision that suits each quantity
+ * ({@link #display}): never more digits than the JSON, and never fewer than the trace's
+ * substituted values carry, so each step can be followed by hand. Utilisation is shown to two
+ * decimals rounded up, so a failing check never reads 1.00.
  */
 final class ReportNumbers {
 
     private static final int RATIO_DECIMALS = 4;
+    private static final int UTILISATION_DECIMALS = 2;
 
     private ReportNumbers() {
     }
@@ -63,5 +68,45 @@ final class ReportNumbers {
         BigDecimal percent = ratio(difference).movePointRight(2).stripTrailingZeros();
         String sign = percent.signum() > 0 ? "+" : "";
         return sign + percent.toPlainString() + " %";
+    }
+
+    /**
+     * A computed value for a person to read, to four significant figures and at most as many
+     * decimals as suit its unit: whole mm² ({@code 2945.24 mm2 → "2945"}), tenths of mm, kN and kNm
+     * ({@code 42.357 mm → "42.4"}), tenths of a degree; MPa and plain numbers keep four
+     * significant figures ({@code 0.003125 → "0.003125"}).
+     */
+    static String display(double value, String unit) {
+        BigDecimal rounded = quantity(value);
+        int decimals = switch (unit) {
+            case "mm2" -> 0;
+            case "mm", "kN", "kNm", "deg" -> 1;
+            default -> Integer.MAX_VALUE;
+        };
+        if (rounded.scale() > decimals) {
+            rounded = new BigDecimal(value).setScale(decimals, RoundingMode.HALF_EVEN);
+        }
+        rounded = rounded.stripTrailingZeros();
+        return rounded.signum() == 0 ? "0" : rounded.toPlainString();
+    }
+
+    /** A unit as printed: {@code mm2 → mm²}, {@code deg → °}, {@code - → –} (dimensionless). */
+    static String unit(String unit) {
+        return switch (unit) {
+            case "mm2" -> "mm²";
+            case "mm3" -> "mm³";
+            case "deg" -> "°";
+            case "-" -> "–";
+            default -> unit;
+        };
+    }
+
+    /**
+     * A utilisation to two decimals, rounded up so that the text is never below the value:
+     * {@code 1.0004 → "1.01"} (a failing check never reads 1.00), {@code 0.8123 → "0.82"}. Rounded
+     * from the shortest decimal of the double, so that 0.9 stays 0.90.
+     */
+    static String utilisation(double value) {
+        return BigDecimal.valueOf(value).setScale(UTILISATION_DECIMALS, RoundingMode.CEILING).toPlainString();
     }
 }

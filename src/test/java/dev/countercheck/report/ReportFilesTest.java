@@ -29,6 +29,17 @@ class ReportFilesTest {
     }
 
     @Test
+    void writesBytesAsGiven() throws IOException {
+        Path target = folder.resolve("review.pdf");
+        byte[] bytes = {'%', 'P', 'D', 'F', 0, (byte) 0xff, '\n'};
+
+        ReportFiles.writeAtomically(target, bytes);
+
+        assertThat(Files.readAllBytes(target)).isEqualTo(bytes);
+        assertThat(names(folder)).containsExactly("review.pdf");
+    }
+
+    @Test
     void replacesAnExistingFile() throws IOException {
         Path target = folder.resolve("review.json");
         Files.writeString(target, "an older and longer result that must disappear entirely");

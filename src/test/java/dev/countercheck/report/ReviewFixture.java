@@ -31,7 +31,8 @@ import java.util.OptionalDouble;
  * and three findings (critical, major on a check that is not in the list, minor); element
  * {@code PF-A2} (a pad footing, conforms with remarks) with a passing check and a not-applicable
  * check with its reason and no trace, and two findings (minor, note). Trace steps with and without
- * remark. The submission has no revision and no "prepared by"; the summary map leaves out the
+ * remark. PC-D1 carries the drawing of {@link DrawingFixture}; PF-A2 has none. The submission has no
+ * revision and no "prepared by"; the summary map leaves out the
  * verdicts no element has, so the writers must print them as 0.
  */
 final class ReviewFixture {
@@ -93,7 +94,7 @@ final class ReviewFixture {
                         new Finding("PC-D1/tie-x/1", Severity.MINOR, "tie-x",
                                 "Claimed As,req is conservative", "EN 1992-1-1 6.5.4")),
                 List.of("Pile spacing exceeds three diameters: concentrate tie bars over the piles."),
-                Optional.empty());
+                Optional.of(DrawingFixture.drawing("PC-D1")));
     }
 
     private static ElementReview padFooting() {
