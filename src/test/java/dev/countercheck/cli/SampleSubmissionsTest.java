@@ -59,7 +59,8 @@ class SampleSubmissionsTest {
         assertThat(html).exists();
         JsonNode result = JSON.readTree(json.toFile());
         assertResultShape(result);
-        String page = Files.readString(html, StandardCharsets.UTF_8);
+        // Finding ids may carry <wbr/> break hints after their slashes in narrow table cells.
+        String page = Files.readString(html, StandardCharsets.UTF_8).replace("<wbr/>", "");
         for (JsonNode e : result.get("elements")) {
             assertThat(page).contains(e.get("id").asText());
             e.get("findings").forEach(f -> assertThat(page).contains(f.get("id").asText()));

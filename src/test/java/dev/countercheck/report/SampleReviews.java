@@ -38,7 +38,7 @@ final class SampleReviews {
     static Review review(Path sample) {
         try {
             Submission submission = new SubmissionReader().read(sample);
-            var rules = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.REQUIRED_PARAMETERS)
+            var rules = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY)
                     .load(submission.ruleset().orElse("en1992-recommended"));
             return new ProjectReviewer(new Review.ToolInfo("countercheck", "test")).review(submission, rules, DATE);
         } catch (Exception e) {
