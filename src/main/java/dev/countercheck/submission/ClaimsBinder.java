@@ -47,7 +47,7 @@ final class ClaimsBinder {
                 } else {
                     List<String> known = new ArrayList<>(List.of(METHOD));
                     known.addAll(checks.keySet());
-                    values.problems().add(entry.keyLocation(), entryPath, "unknown check '" + entry.key() + "'"
+                    values.problems().add(entry.keyLocation(), entryPath, "unknown check '" + Shown.text(entry.key()) + "'"
                             + Suggestions.hint(entry.key(), known));
                     ok = false;
                 }
@@ -63,7 +63,7 @@ final class ClaimsBinder {
             String quantityPath = Values.join(path, quantity.key());
             Optional<QuantitySpec> q = spec.quantity(quantity.key());
             if (q.isEmpty()) {
-                values.problems().add(quantity.keyLocation(), quantityPath, "unknown quantity '" + quantity.key()
+                values.problems().add(quantity.keyLocation(), quantityPath, "unknown quantity '" + Shown.text(quantity.key())
                         + "' of check '" + spec.id() + "'" + Suggestions.hint(quantity.key(),
                         spec.quantities().stream().map(QuantitySpec::name).toList()));
                 ok = false;

@@ -43,7 +43,7 @@ final class ColumnBinder {
     }
 
     private Optional<StarterBars> starterBars(Fields f) {
-        Optional<Integer> count = f.requiredCount("count");
+        Optional<Integer> count = f.requiredCount("count", Limits.STARTER_BARS, "starter bars");
         Optional<Double> diameter = f.requiredQuantity("diameter", Dimension.LENGTH, Bound.POSITIVE);
         return count.flatMap(n -> diameter.map(d -> new StarterBars(n, d)));
     }

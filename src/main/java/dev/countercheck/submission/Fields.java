@@ -33,7 +33,7 @@ final class Fields {
             for (Entry entry : map.entries()) {
                 if (!known.contains(entry.key())) {
                     values.problems().add(entry.keyLocation(), Values.join(path, entry.key()),
-                            "unknown key '" + entry.key() + "'" + Suggestions.hint(entry.key(), known));
+                            "unknown key '" + Shown.text(entry.key()) + "'" + Suggestions.hint(entry.key(), known));
                 }
             }
             return new Fields(map, path, values);
@@ -93,8 +93,8 @@ final class Fields {
         return require(key).flatMap(n -> values.quantity(n, path(key), dimension, bound));
     }
 
-    Optional<Integer> requiredCount(String key) {
-        return require(key).flatMap(n -> values.count(n, path(key)));
+    Optional<Integer> requiredCount(String key, int max, String what) {
+        return require(key).flatMap(n -> values.count(n, path(key), max, what));
     }
 
     Optional<String> text(String key) {

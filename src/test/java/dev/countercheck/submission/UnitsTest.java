@@ -69,7 +69,7 @@ class UnitsTest {
     @CsvSource(delimiter = '|', value = {
             "1100        | LENGTH | 1100",
             "-3.5        | FORCE  | -3.5",
-            "1.5e3       | STRESS | 1500"
+            "1.5e2       | STRESS | 150"        // 1.5 × 10² MPa
     })
     void aBareNumberIsInTheDefaultUnit(String text, Dimension dimension, double expected) {
         assertThat(read(Kind.NUMBER, text, dimension)).contains(expected);
