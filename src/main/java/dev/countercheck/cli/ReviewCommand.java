@@ -54,6 +54,9 @@ public final class ReviewCommand implements Callable<Integer> {
             description = "Review date to state (default: SOURCE_DATE_EPOCH if set, else today).")
     Optional<String> date;
 
+    @Option(names = "--debug", description = "On an internal error, print where it happened (a stack trace).")
+    boolean debug;
+
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -64,12 +67,14 @@ public final class ReviewCommand implements Callable<Integer> {
         Severity threshold;
         String reviewDate;
         List<Path> inputs;
+        ReportTargets targets;
         try {
             threshold = Severity.fromLabel(failOn);
             reviewDate = ReviewDate.resolve(date, Optional.ofNullable(System.getenv("SOURCE_DATE_EPOCH")),
                     Clock.systemUTC());
             inputs = SubmissionFiles.expand(files);
             requireDistinctBasenames(inputs);
+            targets = ReportTargets.of(outDir, inputs, List.of(".json", ".html"));
         } catch (IllegalArgumentException | UsageException e) {
             err.println("countercheck review: " + e.getMessage());
             return ExitCodes.UNUSABLE;
@@ -86,8 +91,8 @@ public final class ReviewCommand implements Callable<Integer> {
                 Submission submission = new dev.countercheck.submission.SubmissionReader().read(file);
                 Ruleset rules = rulesets.load(ruleset.or(submission::ruleset).orElse(Rulesets.DEFAULT));
                 Review review = reviewer.review(submission, rules, reviewDate);
-                Path json = outDir.resolve(SubmissionFiles.basename(file) + ".json");
-                Path html = outDir.resolve(SubmissionFiles.basename(file) + ".html");
+                Path json = targets.report(file, ".json");
+                Path html = targets.report(file, ".html");
                 Files.createDirectories(outDir);
                 ReportFiles.writeAtomically(json, new JsonResultWriter().write(review));
                 ReportFiles.writeAtomically(html, new HtmlReportWriter().write(review));
@@ -108,6 +113,13 @@ public final class ReviewCommand implements Callable<Integer> {
                 status = ExitCodes.UNUSABLE;
             } catch (IOException e) {
                 err.println(file + ": cannot write the reports to " + outDir + ": " + e.getMessage());
+                status = ExitCodes.UNUSABLE;
+            } catch (RuntimeException e) {
+                err.println(file + ": not reviewed: internal error (" + e.getClass().getSimpleName() + ")."
+                        + " Please report it with the submission" + (debug ? ":" : "; --debug shows where it happened."));
+                if (debug) {
+                    e.printStackTrace(err);
+                }
                 status = ExitCodes.UNUSABLE;
             }
         }
