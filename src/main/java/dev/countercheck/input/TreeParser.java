@@ -44,7 +44,7 @@ import java.util.regex.Pattern;
  *
  * <p>Text is UTF-8, with or without a byte-order mark, or UTF-16 with one. The limits are the
  * parsers' own settings where they have one: Jackson's {@link StreamReadConstraints} for document
- * size, nesting depth, number length and, in JSON, text and key length; SnakeYAML's code-point
+ * size, token count, nesting depth, number length and, in JSON, text and key length; SnakeYAML's code-point
  * limit for the size of a YAML document. SnakeYAML's limits on nesting and on alias expansion act
  * only when it builds objects itself, which Jackson's streaming parser does not: nesting is
  * bounded by Jackson's setting, and aliases are never expanded (the first one is refused, so an
@@ -65,6 +65,11 @@ public final class TreeParser {
     public static final int MAX_KEY_CHARS = 1_000;
     /** The longest number, in characters. */
     public static final int MAX_NUMBER_CHARS = 100;
+    /**
+     * The most tokens (keys, values, starts and ends of mappings and lists) in a document. An
+     * element takes 150 to 250, so a file of the most elements a submission may hold fits.
+     */
+    public static final int MAX_TOKENS = 300_000;
 
     private static final StreamReadConstraints LIMITS = StreamReadConstraints.builder()
             .maxDocumentLength(MAX_DOCUMENT_CHARS)
@@ -72,6 +77,7 @@ public final class TreeParser {
             .maxStringLength(MAX_TEXT_CHARS)
             .maxNameLength(MAX_KEY_CHARS)
             .maxNumberLength(MAX_NUMBER_CHARS)
+            .maxTokenCount(MAX_TOKENS)
             .build();
     private static final JsonFactory JSON = JsonFactory.builder().streamReadConstraints(LIMITS).build();
     /** As {@code new YAMLFactory()}: {@code key:} without a value is null (the builder leaves that off). */
@@ -95,7 +101,10 @@ public final class TreeParser {
     private String text = "";
     /** Where the last token started: the place to report a failure the parser does not locate. */
     private SourceLocation lastToken;
-    /** The path of keys to the last token: the path of a failure the parser reports. */
+    /**
+     * Where reading stands, as a path of keys: the key whose value is being read, or the mapping
+     * or list whose next item is; the path of a failure the parser reports.
+     */
     private String lastPath = "";
 
     public TreeParser(Problems problems) {
@@ -272,6 +281,7 @@ public final class TreeParser {
             if (value.isEmpty()) {
                 return Optional.empty();
             }
+            lastPath = path;
             SourceLocation first = seen.putIfAbsent(key, keyAt);
             if (first != null) {
                 problems.add(keyAt, keyPath, "duplicate key '" + Shown.text(key) + "': it was already given at line "
@@ -291,6 +301,7 @@ public final class TreeParser {
                 return Optional.empty();
             }
             items.add(item.get());
+            lastPath = path;
         }
         return Optional.of(new ListNode(at, List.copyOf(items)));
     }

@@ -117,11 +117,18 @@ final class Values {
         if (unit.isPresent()) {
             return Optional.of(number * unit.get().toDefault());
         }
+        if (symbol.startsWith(",") || symbol.startsWith(".")) {
+            error(scalar, path, "'" + text + "' is not a number: write it without separators, with '.' as the"
+                    + " decimal mark (3400, 3.4)");
+            return Optional.empty();
+        }
         String expected = dimension == Dimension.NUMBER ? dimension.noun() + " without a unit is expected here"
                 : dimension.noun() + " is expected here (" + dimension.unitList() + ")";
+        String hint = Suggestions.nearest(symbol, dimension.units().stream().map(Dimension.Unit::symbol).toList())
+                .map(u -> " (did you mean '" + u + "'?)").orElse("");
         error(scalar, path, Dimension.ofUnit(symbol)
                 .map(other -> "'" + text + "' is " + other.noun() + ", but " + expected)
-                .orElse("unknown unit '" + Shown.text(symbol) + "' in '" + text + "': " + expected));
+                .orElse("unknown unit '" + Shown.text(symbol) + "' in '" + text + "'" + hint + ": " + expected));
         return Optional.empty();
     }
 
@@ -139,9 +146,10 @@ final class Values {
             return true;
         }
         boolean bare = node instanceof ScalarNode scalar && scalar.kind() == Kind.NUMBER;
+        String check = dimension == Dimension.NUMBER ? "check the number"
+                : "check the number and its unit" + (bare ? " (a bare number is in " + dimension.defaultUnit() + ")" : "");
         error(node, path, source(node) + " is too large for " + dimension.noun() + ": no value of a foundation"
-                + " review exceeds " + dimension.limitText() + "; check the number and its unit"
-                + (bare && dimension != Dimension.NUMBER ? " (a bare number is in " + dimension.defaultUnit() + ")" : ""));
+                + " review exceeds " + dimension.limitText() + "; " + check);
         return false;
     }
 

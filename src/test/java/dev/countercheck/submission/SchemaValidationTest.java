@@ -122,19 +122,21 @@ class SchemaValidationTest {
         };
     }
 
-    /** A number as a YAML editor reads it; forms that are no decimal number ({@code .nan}) stay text. */
+    /**
+     * A number as a YAML editor reads it: a decimal number as its double (1e400 is infinite, and
+     * beyond every maximum); other forms ({@code .nan}, {@code 0x384}) stay text.
+     */
     private static JsonNode number(String text) {
         JsonNodeFactory f = JsonNodeFactory.instance;
-        try {
-            return f.numberNode(Long.parseLong(text));
-        } catch (NumberFormatException notWhole) {
+        if (text.matches("[+-]?[0-9]+")) {
             try {
-                double value = Double.parseDouble(text);
-                return Double.isFinite(value) && text.matches("[+-]?[0-9.eE+-]+") ? f.numberNode(value) : f.textNode(text);
-            } catch (NumberFormatException notDecimal) {
-                return f.textNode(text);
+                return f.numberNode(Long.parseLong(text));
+            } catch (NumberFormatException tooLong) {
+                return f.numberNode(Double.parseDouble(text));
             }
         }
+        return text.matches("[+-]?([0-9]+(\\.[0-9]*)?|\\.[0-9]+)([eE][+-]?[0-9]+)?")
+                ? f.numberNode(Double.parseDouble(text)) : f.textNode(text);
     }
 
     private static Stream<Path> submissionsIn(Path folder) {
