@@ -25,7 +25,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.HashSet;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -214,8 +213,7 @@ class SubmissionSchemaTest {
         if (node.has("properties") && node.path("type").asText().equals("object")) {
             found.add(pointer);
         }
-        for (Iterator<Map.Entry<String, JsonNode>> it = node.fields(); it.hasNext(); ) {
-            Map.Entry<String, JsonNode> e = it.next();
+        for (Map.Entry<String, JsonNode> e : node.properties()) {
             boolean inProperties = pointer.endsWith("/properties");
             if (!inProperties && (e.getKey().equals("if") || e.getKey().equals("then")
                     || e.getKey().equals("dependentSchemas"))) {
