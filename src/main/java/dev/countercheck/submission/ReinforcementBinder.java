@@ -44,7 +44,7 @@ final class ReinforcementBinder {
 
     Optional<Reinforcement> read(Fields f, Optional<Plan> plan, Optional<Double> depthMm) {
         Optional<Covers> cover = f.requiredFields("cover", COVER_KEYS).flatMap(this::covers);
-        Optional<List<BarSet>> bottom = f.require("bottom").flatMap(n -> values.nonEmptyList(n, f.path("bottom"),
+        Optional<List<BarSet>> bottom = f.require("bottom", "a list of bar sets").flatMap(n -> values.nonEmptyList(n, f.path("bottom"),
                 Limits.BAR_SETS, "bar sets", "bar set")).flatMap(items -> face(items, f.path("bottom"), plan, cover));
         Optional<List<BarSet>> top = f.has("top")
                 ? f.get("top").flatMap(n -> values.list(n, f.path("top"), Limits.BAR_SETS, "bar sets")).flatMap(items -> face(items, f.path("top"),

@@ -50,7 +50,7 @@ final class SubmissionBinder {
             Optional<String> ruleset = f.fields("basis", BASIS_KEYS).flatMap(b -> b.text("ruleset"));
             MaterialsBinder.Draft materials = f.fields("materials", MaterialsBinder.KEYS)
                     .map(materialsBinder::read).orElse(MaterialsBinder.Draft.NONE);
-            Optional<List<ElementInput>> elements = f.require("elements")
+            Optional<List<ElementInput>> elements = f.require("elements", "a list of the elements to review")
                     .flatMap(n -> values.nonEmptyList(n, "elements", Limits.ELEMENTS, "elements", "element"))
                     .flatMap(items -> elements(items, materials));
             return values.problems().any() ? Optional.empty() : elements.map(e ->

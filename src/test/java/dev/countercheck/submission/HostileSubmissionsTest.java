@@ -1,6 +1,7 @@
 package dev.countercheck.submission;
 
 import dev.countercheck.input.InputError;
+import dev.countercheck.input.Shown;
 import dev.countercheck.input.TreeParser;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -122,6 +123,14 @@ class HostileSubmissionsTest {
         InputError error = onlyError(file);
 
         assertThat(error.toString()).endsWith(":3:10: l1[0]: YAML aliases ('*l0') are not supported: write the value out");
+    }
+
+    @Test
+    void aMessageShowsInputTextWithControlCharactersWrittenOutAndLongTextCut() {
+        assertThat(Shown.text("red\u001B[31m\u202Eevil")).isEqualTo("red\\u001B[31m\\u202Eevil");
+        assertThat(Shown.text("x".repeat(Shown.MAX_CODE_POINTS))).isEqualTo("x".repeat(Shown.MAX_CODE_POINTS));
+        assertThat(Shown.text("x".repeat(Shown.MAX_CODE_POINTS + 1)))
+                .isEqualTo("x".repeat(Shown.MAX_CODE_POINTS) + "… (61 characters)");
     }
 
     private InputError onlyError(Path file) {
