@@ -1,18 +1,23 @@
 package dev.countercheck.cli;
 
 import dev.countercheck.eurocode.Num;
+import dev.countercheck.ruleset.CheckDef;
 import dev.countercheck.ruleset.Parameter;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.ruleset.RulesetException;
+import dev.countercheck.ruleset.TableDef;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
-/** {@code rules}: lists every parameter of the effective ruleset with its clause and the file that set it. */
+/**
+ * {@code rules}: every parameter, table and check of the effective ruleset with its clause and the
+ * file that set it. {@code --format markdown} writes the rule reference the docs include.
+ */
 @Command(name = "rules", mixinStandardHelpOptions = true, versionProvider = Version.class,
-        description = "List every parameter of the effective ruleset, with its clause and origin.")
+        description = "List every parameter, table and rule of the effective ruleset, with its clause and origin.")
 public final class RulesCommand implements Callable<Integer> {
 
     /** Output formats of the listing. */
@@ -39,26 +44,90 @@ public final class RulesCommand implements Callable<Integer> {
             return ExitCodes.UNUSABLE;
         }
         if (format == Format.markdown) {
-            out.println("# Ruleset " + r.id());
-            out.println();
-            out.println(r.title() + ". " + r.standard() + ", version " + r.version() + ".");
-            out.println("Files, most general first: " + String.join(", ", r.files()) + ".");
-            out.println();
-            out.println("| parameter | symbol | value | unit | clause | note | set in |");
-            out.println("|---|---|---|---|---|---|---|");
-            for (Parameter p : r.parameters().values()) {
-                out.println("| `" + p.name() + "` | " + p.symbol() + " | " + Num.f(p.value()) + " | " + p.unit() + " | "
-                        + p.clause() + " | " + p.note() + " | " + p.origin() + " |");
-            }
+            markdown(r, out);
         } else {
-            out.println(r.id() + ": " + r.title() + " (" + r.standard() + ", version " + r.version() + ")");
-            out.println("files: " + String.join(" <- ", r.files()));
-            for (Parameter p : r.parameters().values()) {
-                out.printf("%-34s %-18s %10s %-6s %s  [%s]%n", p.name(), p.symbol(), Num.f(p.value()), p.unit(),
-                        p.clause(), p.origin());
-            }
+            text(r, out);
         }
         out.flush();
         return ExitCodes.OK;
+    }
+
+    private static void text(Ruleset r, PrintWriter out) {
+        out.println(r.id() + ": " + r.title() + " (" + r.standard() + ", version " + r.version() + ")");
+        out.println("files: " + String.join(" <- ", r.files()));
+        out.println();
+        out.println("PARAMETERS");
+        for (Parameter p : r.parameters().values()) {
+            out.printf("%-34s %-18s %10s %-6s %s  [%s]%n", p.name(), p.symbol(), Num.f(p.value()), p.unit(),
+                    p.clause(), p.origin());
+        }
+        out.println();
+        out.println("TABLES");
+        for (TableDef t : r.tables().values()) {
+            out.printf("%-26s %-10s %-4s %s  [%s]%n", t.name(), t.symbol(), t.unit(), t.clause(), t.origin());
+        }
+        for (CheckDef c : r.checks().values()) {
+            out.println();
+            out.println("CHECK " + c.id() + " (scope " + c.scope() + ")  [" + c.origin() + "]");
+            c.appliesWhen().ifPresent(w -> out.println("  applies when " + w));
+            for (CheckDef.DerivedDef d : c.derived()) {
+                out.printf("  %-14s = %s  [%s] %s%n", d.symbol(), d.formula(), d.unit(), d.clause());
+            }
+            for (CheckDef.RequirementDef q : c.requirements()) {
+                out.printf("  requires %s  (%s, %s)%n", q.that(), q.severity(), q.clause());
+            }
+        }
+    }
+
+    private static void markdown(Ruleset r, PrintWriter out) {
+        out.println("# Ruleset " + r.id());
+        out.println();
+        out.println(r.title() + ". " + r.standard() + ", version " + r.version() + ".");
+        out.println("Files, most general first: " + String.join(", ", r.files()) + ".");
+        out.println();
+        out.println("## Parameters");
+        out.println();
+        out.println("| parameter | symbol | value | unit | clause | note | set in |");
+        out.println("|---|---|---|---|---|---|---|");
+        for (Parameter p : r.parameters().values()) {
+            out.println("| `" + p.name() + "` | " + p.symbol() + " | " + Num.f(p.value()) + " | " + p.unit() + " | "
+                    + p.clause() + " | " + p.note() + " | " + p.origin() + " |");
+        }
+        out.println();
+        out.println("## Tables");
+        out.println();
+        for (TableDef t : r.tables().values()) {
+            out.println("### `" + t.name() + "` (" + t.symbol() + ", " + t.unit() + ")");
+            out.println();
+            out.println(t.clause() + ". " + t.note() + (t.interpolate() ? " Rows interpolated linearly." : "")
+                    + " Set in " + t.origin() + ".");
+            out.println();
+            out.println("| row | " + String.join(" | ", t.columns()) + " |");
+            out.println("|---" + "|---".repeat(t.columns().size()) + "|");
+            t.rows().forEach((row, cells) -> out.println("| " + row + " | " + String.join(" | ", cells.stream()
+                    .map(c -> c.map(Num::f).orElse("–")).toList()) + " |"));
+            out.println();
+        }
+        out.println("## Checks");
+        for (CheckDef c : r.checks().values()) {
+            out.println();
+            out.println("### `" + c.id() + "`");
+            out.println();
+            out.println("Scope `" + c.scope() + "`; defined in " + c.origin() + "."
+                    + c.appliesWhen().map(w -> " Applies when `" + w + "`, else not applicable: " + c.notApplicable()
+                    + ".").orElse(""));
+            out.println();
+            out.println("| quantity | formula | unit | clause |");
+            out.println("|---|---|---|---|");
+            for (CheckDef.DerivedDef d : c.derived()) {
+                out.println("| " + d.symbol() + " (`" + d.name() + "`) | `" + d.formula().replace("|", "\\|") + "` | "
+                        + d.unit() + " | " + d.clause() + " |");
+            }
+            out.println();
+            for (CheckDef.RequirementDef q : c.requirements()) {
+                out.println("- requires `" + q.that().replace("|", "\\|") + "` (" + q.severity() + ", " + q.clause()
+                        + ")");
+            }
+        }
     }
 }

@@ -15,7 +15,7 @@ final class Rulesets {
     static final String DEFAULT = "en1992-recommended";
 
     private final RulesetLoader loader = new RulesetLoader(Path.of("rulesets"),
-            ProjectReviewer.REQUIRED_PARAMETERS);
+            ProjectReviewer.RULE_VOCABULARY);
     private final Map<String, Ruleset> loaded = new HashMap<>();
 
     Ruleset load(String reference) throws RulesetException {

@@ -1,5 +1,6 @@
 package dev.countercheck.cli;
 
+import dev.countercheck.ruleset.RulesetException;
 import dev.countercheck.submission.ElementInput;
 import dev.countercheck.submission.IncompleteElement;
 import dev.countercheck.submission.Submission;
@@ -15,7 +16,8 @@ import java.util.concurrent.Callable;
 
 /** {@code validate FILE...}: reads and validates submissions, writes nothing. */
 @Command(name = "validate", mixinStandardHelpOptions = true, versionProvider = Version.class,
-        description = "Read and validate submissions without reviewing them. Exit 0 when all are usable, 2 otherwise.")
+        description = "Read and validate submissions, and the ruleset each names, without reviewing them."
+                + " Exit 0 when all are usable, 2 otherwise.")
 public final class ValidateCommand implements Callable<Integer> {
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "Submission files (YAML or JSON) or folders of them.")
@@ -36,9 +38,11 @@ public final class ValidateCommand implements Callable<Integer> {
             err.println("countercheck validate: " + e.getMessage());
             return ExitCodes.UNUSABLE;
         }
+        Rulesets rulesets = new Rulesets();
         for (Path file : inputs) {
             try {
                 Submission s = new SubmissionReader().read(file);
+                rulesets.load(s.ruleset().orElse(Rulesets.DEFAULT));
                 long incomplete = s.elements().stream().filter(e -> e instanceof IncompleteElement).count();
                 out.println(file + ": valid, " + s.elements().size() + " element" + (s.elements().size() == 1 ? "" : "s")
                         + (incomplete > 0 ? " (" + incomplete + " incomplete)" : ""));
@@ -52,6 +56,10 @@ public final class ValidateCommand implements Callable<Integer> {
                 e.errors().forEach(err::println);
                 err.println(file + ": invalid (" + e.errors().size() + " error" + (e.errors().size() == 1 ? "" : "s")
                         + ")");
+                status = ExitCodes.UNUSABLE;
+            } catch (RulesetException e) {
+                e.errors().forEach(err::println);
+                err.println(file + ": the ruleset it names cannot be used");
                 status = ExitCodes.UNUSABLE;
             }
         }

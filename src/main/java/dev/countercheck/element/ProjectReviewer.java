@@ -8,6 +8,7 @@ import dev.countercheck.review.Finding;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 import dev.countercheck.review.Verdict;
+import dev.countercheck.ruleset.RuleVocabulary;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.submission.ElementInput;
 import dev.countercheck.submission.IncompleteElement;
@@ -28,8 +29,12 @@ public final class ProjectReviewer {
     public static final String GENERAL_CAUTION = "This review assists a competent engineer and does not replace one."
             + " Local codes, the applicable National Annex and licensed engineering practice govern.";
 
-    /** Every ruleset parameter a review reads; the ruleset loader refuses a chain that lacks one. */
-    public static final Set<String> REQUIRED_PARAMETERS = union(PileCapReviewer.PARAMETERS, Set.of("claim_tolerance"));
+    /** Every ruleset parameter a review reads in Java; the ruleset loader refuses a chain that lacks one. */
+    public static final Set<String> REQUIRED_PARAMETERS = union(PileCapReviewer.PARAMETERS,
+            Set.of("claim_tolerance", "cover_deviation"));
+
+    /** What a ruleset's rules may use and define, and the parameters the engine reads. */
+    public static final RuleVocabulary RULE_VOCABULARY = PileCapReviewer.vocabulary(REQUIRED_PARAMETERS);
 
     private final Review.ToolInfo tool;
 

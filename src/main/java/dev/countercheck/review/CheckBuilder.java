@@ -64,15 +64,20 @@ public final class CheckBuilder {
      * demand/capacity. A failure raises a finding of {@code failSeverity} with {@code failMessage}.
      */
     public CheckBuilder require(double demand, double capacity, Severity failSeverity, String failMessage) {
-        double u = capacity > 0 ? demand / capacity : (demand > 0 ? Double.POSITIVE_INFINITY : 0);
-        if (Double.isFinite(u)) {
-            utilisation = OptionalDouble.of(Math.max(u, utilisation.orElse(0)));
-        }
+        utilisation(capacity > 0 ? demand / capacity : (demand > 0 ? Double.POSITIVE_INFINITY : 0));
         if (demand > capacity) {
             fail(failSeverity, failMessage);
         } else if (status != CheckStatus.FAIL) {
             status = CheckStatus.PASS;
             reason = Optional.empty();
+        }
+        return this;
+    }
+
+    /** Records a utilisation computed elsewhere (a rule's own demand/capacity); the largest one stands. */
+    public CheckBuilder utilisation(double value) {
+        if (Double.isFinite(value)) {
+            utilisation = OptionalDouble.of(Math.max(value, utilisation.orElse(0)));
         }
         return this;
     }

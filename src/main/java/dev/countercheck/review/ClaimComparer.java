@@ -1,6 +1,5 @@
 package dev.countercheck.review;
 
-import dev.countercheck.eurocode.Num;
 import dev.countercheck.submission.CheckCatalogue.CheckSpec;
 import dev.countercheck.submission.CheckCatalogue.Kind;
 import dev.countercheck.submission.CheckCatalogue.QuantitySpec;
@@ -48,7 +47,7 @@ public final class ClaimComparer {
         boolean unsafe = c.verdict() == ClaimVerdict.DIFFERS_UNCONSERVATIVE;
         Severity severity = !unsafe ? Severity.MINOR
                 : check.kind() == Kind.STRENGTH ? Severity.CRITICAL : Severity.MAJOR;
-        String percent = Num.f(Math.abs(c.difference()) * 100) + " %";
+        String percent = String.format(java.util.Locale.ROOT, "%.1f %%", Math.abs(c.difference()) * 100);
         String direction = c.claimed() > c.computed() ? "above" : "below";
         String message = "Claimed " + check.id() + "." + q.name() + " = " + CheckBuilder.show(c.claimed(), q.unit())
                 + " is " + percent + " " + direction + " the recomputed " + CheckBuilder.show(c.computed(), q.unit())

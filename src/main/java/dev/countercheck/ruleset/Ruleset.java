@@ -13,9 +13,13 @@ import java.util.Map;
  * @param sha256      hash over the contents of every file of the chain, most general first
  * @param files       the files of the chain, most general first
  * @param parameters  every parameter by name, with the file that set its value
+ * @param tables      every table by name, with the file that set it
+ * @param checks      the checks the ruleset defines, by id template, in file order
+ * @param expressions the evaluator for the rules' expressions, with the tables as functions
  */
 public record Ruleset(String id, String title, String standard, String version, String sha256, List<String> files,
-                      Map<String, Parameter> parameters) {
+                      Map<String, Parameter> parameters, Map<String, TableDef> tables, Map<String, CheckDef> checks,
+                      RuleExpressions expressions) {
 
     /** The parameter {@code name}; every name the engine asks for is validated at load. */
     public Parameter parameter(String name) {

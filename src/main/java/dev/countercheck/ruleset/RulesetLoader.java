@@ -17,12 +17,12 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
 
 /**
  * Reads a ruleset and everything it {@code extends}, validating it completely before any review:
@@ -37,19 +37,19 @@ import java.util.Set;
 public final class RulesetLoader {
 
     private static final List<String> TOP_KEYS = List.of("ruleset", "id", "extends", "title", "standard", "version",
-            "parameters");
+            "parameters", "tables", "checks");
     private static final List<String> PARAMETER_KEYS = List.of("symbol", "value", "unit", "clause", "note");
 
     private final Path localFolder;
-    private final Set<String> required;
+    private final RuleVocabulary vocabulary;
 
     /**
      * @param localFolder where ids are looked up first (normally {@code ./rulesets})
-     * @param required    the parameter names the engine reads; a chain that lacks one is refused
+     * @param vocabulary  what the engine offers the rules and the parameters it reads itself
      */
-    public RulesetLoader(Path localFolder, Set<String> required) {
+    public RulesetLoader(Path localFolder, RuleVocabulary vocabulary) {
         this.localFolder = localFolder;
-        this.required = Set.copyOf(required);
+        this.vocabulary = vocabulary;
     }
 
     /** One file of a chain, parsed. */
@@ -83,6 +83,8 @@ public final class RulesetLoader {
 
     private Ruleset resolve(List<RulesetFile> chain) throws RulesetException {
         Map<String, Parameter> parameters = new LinkedHashMap<>();
+        Map<String, TableDef> tables = new LinkedHashMap<>();
+        Map<String, CheckDef> checks = new LinkedHashMap<>();
         List<InputError> errors = new ArrayList<>();
         for (int i = 0; i < chain.size(); i++) {
             RulesetFile file = chain.get(i);
@@ -98,10 +100,13 @@ public final class RulesetLoader {
                 problems.add(params.get().value().location(), "parameters",
                         "expected a mapping of parameter names to their values");
             }
+            RuleDefinitions definitions = new RuleDefinitions(problems, file.name());
+            file.root().entry("tables").ifPresent(t -> definitions.readTables(t.value(), tables));
+            file.root().entry("checks").ifPresent(c -> definitions.readChecks(c.value(), checks));
             errors.addAll(problems.sorted());
         }
         RulesetFile top = chain.get(chain.size() - 1);
-        List<String> missing = required.stream().filter(n -> !parameters.containsKey(n)).sorted().toList();
+        List<String> missing = vocabulary.requiredParameters().stream().filter(n -> !parameters.containsKey(n)).sorted().toList();
         if (!missing.isEmpty()) {
             errors.add(new InputError(top.root().location(), "parameters", "the ruleset chain does not define "
                     + String.join(", ", missing) + ", which the review needs"));
@@ -109,10 +114,17 @@ public final class RulesetLoader {
         if (!errors.isEmpty()) {
             throw new RulesetException(errors);
         }
+        RuleExpressions expressions = new RuleExpressions(tables);
+        RuleValidator validator = new RuleValidator(vocabulary, parameters, expressions);
+        Map<String, CheckDef> validated = validator.validate(checks);
+        if (!validator.errors().isEmpty()) {
+            throw new RulesetException(validator.errors());
+        }
         MapNode root = top.root();
         return new Ruleset(optionalText(root, "id").orElse(top.name()), optionalText(root, "title").orElse(""),
                 optionalText(root, "standard").orElse(""), optionalText(root, "version").orElse(""), hash(chain),
-                chain.stream().map(RulesetFile::name).toList(), java.util.Collections.unmodifiableMap(parameters));
+                chain.stream().map(RulesetFile::name).toList(), Collections.unmodifiableMap(parameters),
+                Collections.unmodifiableMap(tables), Collections.unmodifiableMap(validated), expressions);
     }
 
     private void checkTop(RulesetFile file) {

@@ -1,6 +1,6 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.SourceLocation;
 
 /**
  * One action case at the top of the element. Compression positive; {@code mx} increases the

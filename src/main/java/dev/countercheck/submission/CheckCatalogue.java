@@ -1,6 +1,6 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.Node;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;

@@ -1,6 +1,7 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.Node;
+import dev.countercheck.input.SourceLocation;
 import dev.countercheck.submission.Column.ColumnShape;
 import dev.countercheck.submission.Column.StarterBars;
 import dev.countercheck.submission.Values.Bound;

@@ -1,6 +1,6 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.SourceLocation;
 import java.util.List;
 
 /**

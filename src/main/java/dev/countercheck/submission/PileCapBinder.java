@@ -1,6 +1,5 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
 import dev.countercheck.submission.ActionCase.Kind;
 import dev.countercheck.submission.PileCap.CastAgainst;
 import dev.countercheck.submission.PileCap.SelfWeight;

@@ -1,6 +1,5 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
 import java.util.List;
 import java.util.Optional;
 

@@ -1,6 +1,6 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.Node;
 import dev.countercheck.submission.Values.Bound;
 
 import java.util.List;

@@ -1,6 +1,7 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.Node;
+import dev.countercheck.input.SourceLocation;
 import dev.countercheck.submission.Reinforcement.BarEnds;
 import dev.countercheck.submission.Reinforcement.BarSet;
 import dev.countercheck.submission.Reinforcement.Covers;

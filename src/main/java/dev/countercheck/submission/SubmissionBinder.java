@@ -1,6 +1,8 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.Node;
+import dev.countercheck.input.Suggestions;
+import dev.countercheck.input.SourceLocation;
 import dev.countercheck.input.Node.MapNode;
 
 import java.util.HashMap;

@@ -1,6 +1,6 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.InputError;
 import java.util.List;
 import java.util.stream.Collectors;
 

@@ -1,6 +1,7 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.TreeParser;
+import dev.countercheck.input.Problems;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.AccessDeniedException;

@@ -1,6 +1,8 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.Node;
+import dev.countercheck.input.Problems;
+import dev.countercheck.input.Suggestions;
 import dev.countercheck.input.Node.ListNode;
 import dev.countercheck.input.Node.MapNode;
 import dev.countercheck.input.Node.ScalarNode;

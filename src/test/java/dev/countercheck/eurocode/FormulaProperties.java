@@ -29,23 +29,6 @@ class FormulaProperties {
         assertThat(high).isGreaterThanOrEqualTo(low);
     }
 
-    /** The design anchorage length never falls below lb,min, whatever the α factors (8.4.4(1), Exp. (8.4)). */
-    @Property(tries = 300)
-    void lbdIsNeverBelowLbMin(@ForAll @DoubleRange(min = 0.7, max = 1.0) double alpha1,
-                              @ForAll @DoubleRange(min = 0.7, max = 1.0) double alpha2,
-                              @ForAll @DoubleRange(min = 0.7, max = 1.0) double alpha3,
-                              @ForAll @DoubleRange(min = 0.7, max = 1.0) double alpha4,
-                              @ForAll @DoubleRange(min = 0.7, max = 1.0) double alpha5,
-                              @ForAll @DoubleRange(min = 0, max = 500) double sigmaSd,
-                              @ForAll @DoubleRange(min = 6, max = 40) double phi) {
-        Step lbRqd = Anchorage.lbRqd(phi, sigmaSd, 2.7);
-        Step lbMin = Anchorage.lbMinTension(lbRqd.value(), phi);
-        Step lbd = Anchorage.lbd(alpha1, alpha2, alpha3, alpha4, alpha5, lbRqd.value(), lbMin.value());
-        assertThat(lbd.value()).isGreaterThanOrEqualTo(lbMin.value());
-        assertThat(lbd.value()).as("never more than the unreduced lb,rqd unless lb,min governs")
-                .isLessThanOrEqualTo(Math.max(lbRqd.value(), lbMin.value()));
-    }
-
     /** z stays within [0.5d, 0.95d] for every K the block can carry, up to ηαcc/(2γc) = 0.28333 (3.1.7(3)). */
     @Property(tries = 300)
     void leverArmStaysBetweenHalfAndNinetyFivePercentOfD(@ForAll @DoubleRange(min = 0, max = 0.2833) @Scale(5) double k,

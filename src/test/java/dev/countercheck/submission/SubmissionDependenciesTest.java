@@ -1,6 +1,5 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
 import com.tngtech.archunit.core.domain.JavaClasses;
 import com.tngtech.archunit.core.importer.ClassFileImporter;
 import com.tngtech.archunit.core.importer.ImportOption;

@@ -1,6 +1,5 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.Combinators;

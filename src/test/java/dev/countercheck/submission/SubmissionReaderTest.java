@@ -1,6 +1,7 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.InputError;
+import dev.countercheck.input.SourceLocation;
 import dev.countercheck.submission.ActionCase.Kind;
 import dev.countercheck.submission.Column.ColumnShape;
 import dev.countercheck.submission.PileCap.CastAgainst;

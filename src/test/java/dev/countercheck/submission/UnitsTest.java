@@ -1,6 +1,7 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.*;
+import dev.countercheck.input.Problems;
+import dev.countercheck.input.InputError;
 import dev.countercheck.input.Node.ScalarNode;
 import dev.countercheck.input.Node.ScalarNode.Kind;
 import dev.countercheck.submission.Values.Bound;

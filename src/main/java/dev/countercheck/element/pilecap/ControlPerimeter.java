@@ -1,5 +1,7 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.eurocode.Punching;
+import dev.countercheck.eurocode.Step;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.Column.ColumnShape;
 import dev.countercheck.submission.PileCap;
@@ -28,11 +30,11 @@ final class ControlPerimeter {
         return Math.hypot(ox, oy);
     }
 
-    /** Full length of the perimeter at distance a, mm. */
-    static double fullLength(Column c, double aMm) {
+    /** The full perimeter at distance a (EN 1992-1-1 6.4.2(1)), as a trace step. */
+    static Step full(Column c, double aMm) {
         return c.shape() == ColumnShape.CIRCULAR
-                ? Math.PI * (c.cxMm() + 2 * aMm)
-                : 2 * (c.cxMm() + c.cyMm()) + 2 * Math.PI * aMm;
+                ? Punching.u1Circular(c.cxMm(), aMm)
+                : Punching.u1Rectangular(c.cxMm(), c.cyMm(), aMm);
     }
 
     /**
@@ -41,7 +43,7 @@ final class ControlPerimeter {
      */
     static double lengthOnCap(PileCap cap, double aMm) {
         Column c = cap.column();
-        double total = fullLength(c, aMm);
+        double total = full(c, aMm).value();
         int inside = 0;
         for (int i = 0; i < SAMPLES; i++) {
             Point p = pointAt(c, aMm, (i + 0.5) / SAMPLES * total);

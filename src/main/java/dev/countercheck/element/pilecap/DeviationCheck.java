@@ -50,8 +50,8 @@ final class DeviationCheck {
                     for (int i = 0; i < r.length; i++) {
                         if (r[i] > worst) {
                             worst = r[i];
-                            where = "pile " + (i + 1) + " in " + u.action().name() + ", with pile " + (moved + 1)
-                                    + " moved " + Num.f(delta.value()) + " mm at " + (45 * dir) + "° from +x";
+                            where = "pile " + (i + 1) + " in " + u.action().name() + " when pile " + (moved + 1)
+                                    + " is " + Num.f(delta.value()) + " mm off position at " + (45 * dir) + "° from +x";
                         }
                     }
                 }
@@ -59,13 +59,17 @@ final class DeviationCheck {
         }
         b.value("max", Step.of("P,max,δ", "max P_i with one pile off position by δ", where, worst, "kN", BASIS));
         double rc = ctx.cap.piles().compressionKn();
-        b.require(worst, rc, Severity.CRITICAL, "With one pile " + Num.f(delta.value()) + " mm off position, "
-                + where + " carries " + Num.f(worst) + " kN, more than its design resistance " + Num.f(rc) + " kN.");
+        b.require(worst, rc, Severity.CRITICAL, capitalised(where) + " carries " + Num.f(worst)
+                + " kN, more than its design resistance " + Num.f(rc) + " kN.");
         double rise = (worst - nominalMax) / nominalMax;
         if (worst <= rc && rise > 0) {
             b.caution("With one pile " + Num.f(delta.value()) + " mm off position the largest reaction rises to "
-                    + Num.f(worst) + " kN (+" + Num.f(rise * 100) + " %, " + where + "); check the as-built positions.");
+                    + Num.f(worst) + " kN (+" + Num.f(rise * 100) + " %: " + where + "); check the as-built positions.");
         }
         return b.build();
+    }
+
+    private static String capitalised(String text) {
+        return Character.toUpperCase(text.charAt(0)) + text.substring(1);
     }
 }

@@ -77,7 +77,10 @@ final class PileCapContext {
         return reactions(cap.piles().positions(), a, withSelfWeight);
     }
 
-    /** Reactions of piles at {@code piles} (which may be moved off position) under action case {@code a}. */
+    /**
+     * Reactions of piles at {@code piles} (which may be moved off position) under action case {@code a};
+     * a group that lies on one line as designed is analysed on that line.
+     */
     Distribution reactions(List<Point> piles, ActionCase a, boolean withSelfWeight) {
         List<Load> loads = new ArrayList<>();
         loads.add(new Load("N", a.nKn(), cap.column().position()));
@@ -85,7 +88,8 @@ final class PileCapContext {
             loads.add(new Load("γG·Wcap", factoredSelfWeightKn(), new Point(0, 0)));
         }
         double h = cap.depthMm() / 1000.0;
-        return RigidCapReactions.solve(piles, loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h);
+        return RigidCapReactions.solve(piles, loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h,
+                RigidCapReactions.lineOf(cap.piles().positions()));
     }
 
     /** The largest column N over the ULS cases (the cap's own weight is not part of it). */

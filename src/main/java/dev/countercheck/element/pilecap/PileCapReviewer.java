@@ -1,7 +1,10 @@
 package dev.countercheck.element.pilecap;
 
 import dev.countercheck.eurocode.OutOfRangeException;
-import dev.countercheck.review.CheckBuilder;
+import dev.countercheck.element.RuleChecks;
+import dev.countercheck.review.Value;
+import dev.countercheck.ruleset.CheckDef;
+import dev.countercheck.ruleset.RuleVocabulary;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
@@ -10,6 +13,8 @@ import dev.countercheck.submission.CheckCatalogue;
 import dev.countercheck.submission.PileCap;
 
 import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -49,20 +54,39 @@ public final class PileCapReviewer {
         this.assembler = assembler;
     }
 
+    /** What the detailing rules of a ruleset may use and define for pile caps. */
+    public static RuleVocabulary vocabulary(Set<String> requiredParameters) {
+        Map<String, Map<String, String>> units = new LinkedHashMap<>();
+        CheckCatalogue.checksOf(PileCap.TYPE).values().stream().filter(c -> !checks().containsKey(c.id()))
+                .forEach(c -> {
+                    Map<String, String> q = new LinkedHashMap<>();
+                    c.quantities().forEach(x -> q.put(x.name(), x.unit()));
+                    units.put(c.id(), q);
+                });
+        return new RuleVocabulary(DetailingScopes.scopes(), DetailingScopes.subjects(), units, requiredParameters);
+    }
+
     public ElementReview review(PileCap cap, Ruleset rules) {
         PileCapContext ctx = new PileCapContext(cap, rules);
-        List<CheckOutcome> outcomes = new ArrayList<>();
         Map<String, Function<PileCapContext, CheckOutcome>> checks = checks();
+        Map<String, CheckOutcome> done = new LinkedHashMap<>();
+        checks.forEach((id, check) -> done.put(id, guarded(id, check, ctx)));
+        Map<Axis, Double> asRequired = new EnumMap<>(Axis.class);
+        for (Axis axis : Axis.values()) {
+            Value v = done.get("tie-" + axis.label()).result().values().get("as_required");
+            asRequired.put(axis, v == null ? 0.0 : v.value());
+        }
+        List<CheckOutcome> outcomes = new ArrayList<>();
         for (String id : CheckCatalogue.checksOf(PileCap.TYPE).keySet()) {
-            Function<PileCapContext, CheckOutcome> check = checks.get(id);
-            outcomes.add(check == null ? notInThisVersion(id) : guarded(id, check, ctx));
+            outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired));
         }
         return assembler.assemble(cap.id(), cap.type(), cap.description(), outcomes, cap.claims(), List.of(),
                 Optional.of(DrawingNotes.of(ctx)));
     }
 
+    /** The checks computed in Java, in catalogue order; the others come from the ruleset. */
     private static Map<String, Function<PileCapContext, CheckOutcome>> checks() {
-        return Map.ofEntries(
+        return orderedEntries(
                 Map.entry("pile-reactions", ReactionsCheck::run),
                 Map.entry("pile-reactions-deviation", DeviationCheck::run),
                 Map.entry("pile-spacing", GeometryChecks::spacing),
@@ -74,8 +98,34 @@ public final class PileCapReviewer {
                 Map.entry("punching-face", PunchingChecks::face),
                 Map.entry("punching-perimeter", PunchingChecks::perimeter),
                 Map.entry("node-column", NodeChecks::column),
-                Map.entry("node-pile", NodeChecks::pile),
-                Map.entry("anchorage-starters", StarterAnchorageCheck::run));
+                Map.entry("node-pile", NodeChecks::pile));
+    }
+
+    @SafeVarargs
+    private static Map<String, Function<PileCapContext, CheckOutcome>> orderedEntries(
+            Map.Entry<String, Function<PileCapContext, CheckOutcome>>... entries) {
+        Map<String, Function<PileCapContext, CheckOutcome>> map = new LinkedHashMap<>();
+        for (var e : entries) {
+            map.put(e.getKey(), e.getValue());
+        }
+        return map;
+    }
+
+    /** A check the ruleset defines, run on the subject its id names. */
+    private static CheckOutcome byRule(String id, PileCapContext ctx, Map<Axis, Double> asRequired) {
+        for (CheckDef def : ctx.rules.checks().values()) {
+            for (String subject : DetailingScopes.subjects().getOrDefault(def.scope(), List.of(""))) {
+                if (def.idFor(subject).equals(id)) {
+                    DetailingScopes.Values v = DetailingScopes.values(ctx, def.scope(), subject, asRequired);
+                    if (v.missing().isPresent()) {
+                        return Checks.builder(id).notChecked(v.missing().get()).build();
+                    }
+                    return RuleChecks.run(PileCap.TYPE, def, subject, ctx.rules,
+                            DetailingScopes.scopes().get(def.scope()), v.values());
+                }
+            }
+        }
+        return Checks.builder(id).notChecked("ruleset " + ctx.rules.id() + " has no rule for this check").build();
     }
 
     /** A formula asked outside its valid range makes the check not-checked, with the reason. */
@@ -85,10 +135,5 @@ public final class PileCapReviewer {
         } catch (OutOfRangeException e) {
             return Checks.builder(id).notChecked(e.getMessage()).build();
         }
-    }
-
-    private static CheckOutcome notInThisVersion(String id) {
-        CheckBuilder b = Checks.builder(id);
-        return b.notChecked("detailing rule not yet applied by this version of countercheck").build();
     }
 }

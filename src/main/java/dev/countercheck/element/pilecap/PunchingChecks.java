@@ -70,12 +70,13 @@ final class PunchingChecks {
             return b.notApplicable("every pile centre lies within 2d = " + Num.f(a)
                     + " mm of the column face: the load goes straight to the piles by struts").build();
         }
-        double full = ControlPerimeter.fullLength(column, a);
+        Step full = ControlPerimeter.full(column, a);
         double onCap = ControlPerimeter.lengthOnCap(ctx.cap, a);
-        Step u1 = Step.of("u1", column.shape() == ColumnShape.CIRCULAR ? "π(D + 2a), a = 2d" : "2(cx + cy) + 2π·a, a = 2d",
-                "a = " + Num.f(a), onCap, "mm", "EN 1992-1-1 6.4.2(1)");
-        if (onCap < full - 1e-6) {
-            u1 = u1.remarked("only the " + Num.f(onCap) + " mm of the " + Num.f(full) + " mm perimeter on the cap counts");
+        Step u1 = new Step("u1", full.formula() + ", a = 2d", full.substituted(), onCap, "mm", full.clause(),
+                full.remark());
+        if (onCap < full.value() - 1e-6) {
+            u1 = u1.remarked("only the " + Num.f(onCap) + " mm of the " + Num.f(full.value())
+                    + " mm perimeter on the cap counts");
         }
         b.value("u1", u1);
         double worst = Double.NEGATIVE_INFINITY;

@@ -6,6 +6,7 @@ import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * Pile reactions under a rigid cap, distributed linearly (common practice):
@@ -45,6 +46,17 @@ final class RigidCapReactions {
     }
 
     static Distribution solve(List<Point> piles, List<Load> loads, double mxKnm, double myKnm) {
+        return solve(piles, loads, mxKnm, myKnm, lineOf(piles));
+    }
+
+    /**
+     * The distribution with the group treated as lying on {@code line} (a unit direction) when one is
+     * given: a group that is collinear as designed stays so when a pile is moved off position, so
+     * that the moment about its line stays unresisted rather than being carried on a lever arm of
+     * the tolerance.
+     */
+    static Distribution solve(List<Point> piles, List<Load> loads, double mxKnm, double myKnm,
+                              Optional<double[]> line) {
         int n = piles.size();
         double xBar = piles.stream().mapToDouble(Point::xMm).average().orElse(0);
         double yBar = piles.stream().mapToDouble(Point::yMm).average().orElse(0);
@@ -56,42 +68,19 @@ final class RigidCapReactions {
             mx += load.forceKn() * (load.at().yMm() - yBar) / 1000.0;
             my += load.forceKn() * (load.at().xMm() - xBar) / 1000.0;
         }
-        double[] dx = new double[n];
-        double[] dy = new double[n];
-        double sxx = 0;
-        double syy = 0;
-        double sxy = 0;
-        for (int i = 0; i < n; i++) {
-            dx[i] = piles.get(i).xMm() - xBar;
-            dy[i] = piles.get(i).yMm() - yBar;
-            sxx += dx[i] * dx[i];
-            syy += dy[i] * dy[i];
-            sxy += dx[i] * dy[i];
-        }
         double[] p = new double[n];
-        double det = sxx * syy - sxy * sxy;
-        double scale = (sxx + syy) * (sxx + syy);
         if (n == 1) {
             p[0] = v;
             return new Distribution(v, mx, my, p, Math.hypot(mx, my));
         }
-        if (det <= 1e-9 * scale) {
-            double ux;
-            double uy;
-            if (sxx >= syy) {
-                double len = Math.hypot(sxx, sxy);
-                ux = sxx / len;
-                uy = sxy / len;
-            } else {
-                double len = Math.hypot(sxy, syy);
-                ux = sxy / len;
-                uy = syy / len;
-            }
+        if (line.isPresent()) {
+            double ux = line.get()[0];
+            double uy = line.get()[1];
             double inLine = (my * ux + mx * uy) * 1000.0;
             double ss = 0;
             double[] s = new double[n];
             for (int i = 0; i < n; i++) {
-                s[i] = dx[i] * ux + dy[i] * uy;
+                s[i] = (piles.get(i).xMm() - xBar) * ux + (piles.get(i).yMm() - yBar) * uy;
                 ss += s[i] * s[i];
             }
             for (int i = 0; i < n; i++) {
@@ -99,12 +88,48 @@ final class RigidCapReactions {
             }
             return new Distribution(v, mx, my, p, Math.abs(mx * ux - my * uy));
         }
-        double a = (my * 1000.0 * syy - mx * 1000.0 * sxy) / det;
-        double b = (mx * 1000.0 * sxx - my * 1000.0 * sxy) / det;
+        Spread g = Spread.of(piles);
+        double det = g.sxx * g.syy - g.sxy * g.sxy;
+        double a = (my * 1000.0 * g.syy - mx * 1000.0 * g.sxy) / det;
+        double b = (mx * 1000.0 * g.sxx - my * 1000.0 * g.sxy) / det;
         for (int i = 0; i < n; i++) {
-            p[i] = v / n + a * dx[i] + b * dy[i];
+            p[i] = v / n + a * (piles.get(i).xMm() - xBar) + b * (piles.get(i).yMm() - yBar);
         }
         return new Distribution(v, mx, my, p, 0.0);
+    }
+
+    /** The unit direction of a group of two or more piles on one line; empty when they span an area. */
+    static Optional<double[]> lineOf(List<Point> piles) {
+        if (piles.size() < 2) {
+            return Optional.empty();
+        }
+        Spread g = Spread.of(piles);
+        if (g.sxx * g.syy - g.sxy * g.sxy > 1e-9 * (g.sxx + g.syy) * (g.sxx + g.syy)) {
+            return Optional.empty();
+        }
+        double len = g.sxx >= g.syy ? Math.hypot(g.sxx, g.sxy) : Math.hypot(g.sxy, g.syy);
+        return Optional.of(g.sxx >= g.syy ? new double[] {g.sxx / len, g.sxy / len}
+                : new double[] {g.sxy / len, g.syy / len});
+    }
+
+    /** Second moments of the pile positions about their centroid: Σdx², Σdy², Σdx·dy (mm²). */
+    private record Spread(double sxx, double syy, double sxy) {
+
+        static Spread of(List<Point> piles) {
+            double xBar = piles.stream().mapToDouble(Point::xMm).average().orElse(0);
+            double yBar = piles.stream().mapToDouble(Point::yMm).average().orElse(0);
+            double sxx = 0;
+            double syy = 0;
+            double sxy = 0;
+            for (Point pile : piles) {
+                double dx = pile.xMm() - xBar;
+                double dy = pile.yMm() - yBar;
+                sxx += dx * dx;
+                syy += dy * dy;
+                sxy += dx * dy;
+            }
+            return new Spread(sxx, syy, sxy);
+        }
     }
 
     /** Trace steps of a distribution: V, Mx*, My* and every P_i. */

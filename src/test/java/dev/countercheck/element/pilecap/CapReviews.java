@@ -20,7 +20,7 @@ final class CapReviews {
 
     static Ruleset ruleset(String id) {
         try {
-            return new RulesetLoader(Path.of("rulesets"), ProjectReviewer.REQUIRED_PARAMETERS).load(id);
+            return new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY).load(id);
         } catch (Exception e) {
             throw new AssertionError("ruleset " + id + " does not load: " + e.getMessage(), e);
         }

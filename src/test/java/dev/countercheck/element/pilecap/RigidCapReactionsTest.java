@@ -62,4 +62,18 @@ class RigidCapReactionsTest {
         Distribution d = RigidCapReactions.solve(piles, List.of(column(3000, 0, 0)), 0, 0);
         assertThat(d.reactionsKn()).containsExactly(new double[] {3000, 0, 0}, within(1e-6));
     }
+
+    @Test
+    void aLineOfPilesAnalysedOnItsDesignedLineIgnoresAnOffLineMove() {
+        // Hand calculation: piles at (0, −1500), (0, 0), (0, 1500); N = 3000 kN at the origin, My = 120 kNm
+        // about the line. On the designed line (y) the middle pile moved 75 mm in x changes the reactions
+        // not at all: P = 1000 kN each. The centroid moves to x̄ = 75/3 = 25 mm, so the moment about the
+        // line left unresisted is 120 + 3000·(0 − 25)/1000 = 45 kNm. (Solved as a free group, the offset
+        // would carry that moment on a 75 mm lever arm: an artefact found by a property test.)
+        List<Point> moved = List.of(new Point(0, -1500), new Point(75, 0), new Point(0, 1500));
+        Distribution d = RigidCapReactions.solve(moved, List.of(column(3000, 0, 0)), 0, 120,
+                java.util.Optional.of(new double[] {0, 1}));
+        assertThat(d.reactionsKn()).containsExactly(new double[] {1000, 1000, 1000}, within(1e-9));
+        assertThat(d.unresistedKnm()).isCloseTo(45, within(1e-9));
+    }
 }

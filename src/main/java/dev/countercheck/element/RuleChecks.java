@@ -1,0 +1,118 @@
+package dev.countercheck.element;
+
+import com.ezylang.evalex.BaseException;
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.review.CheckBuilder;
+import dev.countercheck.review.CheckOutcome;
+import dev.countercheck.review.Severity;
+import dev.countercheck.ruleset.CheckDef;
+import dev.countercheck.ruleset.CheckDef.DerivedDef;
+import dev.countercheck.ruleset.CheckDef.RequirementDef;
+import dev.countercheck.ruleset.RuleExpressions;
+import dev.countercheck.ruleset.Ruleset;
+import dev.countercheck.ruleset.Variable;
+import dev.countercheck.submission.CheckCatalogue;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Runs a ruleset's check on one subject: the derived quantities in order (each a trace step with
+ * the values substituted), the reported quantities, the requirements and the cautions. The result is
+ * an ordinary check outcome, with the same statuses, findings and trace as the Java checks.
+ */
+public final class RuleChecks {
+
+    private static final Pattern NAME = Pattern.compile("(?<![\\w.\"])([A-Za-z_][A-Za-z0-9_]*)(?![\\w\"(])");
+    private static final Pattern PLACEHOLDER = Pattern.compile("\\{([A-Za-z_][A-Za-z0-9_]*)}");
+
+    private RuleChecks() {
+    }
+
+    /**
+     * @param variables the scope's variables for this subject, or empty with the reason they could not be formed
+     */
+    public static CheckOutcome run(String elementType, CheckDef def, String subject, Ruleset rules,
+                                   Map<String, Variable> scope, Map<String, Object> variables) {
+        String id = def.idFor(subject);
+        CheckBuilder b = new CheckBuilder(CheckCatalogue.check(elementType, id));
+        Map<String, Object> values = new HashMap<>(variables);
+        values.put("dir", subject);
+        rules.parameters().forEach((name, p) -> values.put(name, p.value()));
+        RuleExpressions ex = rules.expressions();
+        try {
+            if (def.appliesWhen().isPresent() && !ex.bool(def.appliesWhen().get(), values)) {
+                return b.notApplicable(fill(def.notApplicable(), values)).build();
+            }
+            Map<String, Step> steps = new HashMap<>();
+            for (DerivedDef d : def.derived()) {
+                double v = ex.number(d.formula(), values);
+                values.put(d.name(), v);
+                steps.put(d.name(), b.trace(Step.of(d.symbol(), d.formula(), substitute(d.formula(), values), v, d.unit(),
+                        d.clause() + " (" + def.origin() + ")")));
+            }
+            for (String name : def.values()) {
+                Step step = steps.get(name);
+                if (step == null) {
+                    double v = ((Number) values.get(name)).doubleValue();
+                    step = Step.of(name, scope.get(name).description(), Num.f(v), v, scope.get(name).unit(),
+                            "computed by countercheck");
+                }
+                b.value(name, step);
+            }
+            for (RequirementDef r : def.requirements()) {
+                if (r.utilisation().isPresent()) {
+                    b.utilisation(ex.number(r.utilisation().get(), values));
+                }
+                if (ex.bool(r.that(), values)) {
+                    b.pass();
+                } else {
+                    b.fail(Severity.fromLabel(r.severity()), fill(r.message(), values) + " (" + r.clause() + ")");
+                }
+            }
+            for (CheckDef.CautionDef c : def.cautions()) {
+                if (ex.bool(c.when(), values)) {
+                    b.caution(fill(c.text(), values));
+                }
+            }
+        } catch (BaseException | RuntimeException e) {
+            return b.notChecked("the rule " + def.id() + " of " + def.origin() + " could not be evaluated: "
+                    + e.getMessage()).build();
+        }
+        return b.build();
+    }
+
+    /** The formula with each known number put in for its name. */
+    static String substitute(String formula, Map<String, Object> values) {
+        Matcher m = NAME.matcher(formula);
+        StringBuilder out = new StringBuilder();
+        while (m.find()) {
+            Object v = values.get(m.group(1));
+            String replacement = v instanceof Number n ? Num.f(n.doubleValue())
+                    : v instanceof String s ? "\"" + s + "\"" : v instanceof List<?> l ? l.toString()
+                    : v instanceof Boolean bool ? bool.toString() : m.group(1);
+            m.appendReplacement(out, Matcher.quoteReplacement(replacement));
+        }
+        m.appendTail(out);
+        return out.toString();
+    }
+
+    /** A message with each {name} replaced by its value. */
+    static String fill(String template, Map<String, Object> values) {
+        Matcher m = PLACEHOLDER.matcher(template);
+        StringBuilder out = new StringBuilder();
+        while (m.find()) {
+            Object v = values.get(m.group(1));
+            String text = v instanceof Number n ? Num.f(n.doubleValue()) : String.valueOf(Optional.ofNullable(v)
+                    .orElse("{" + m.group(1) + "}"));
+            m.appendReplacement(out, Matcher.quoteReplacement(text));
+        }
+        m.appendTail(out);
+        return out.toString();
+    }
+}

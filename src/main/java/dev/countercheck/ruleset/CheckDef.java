@@ -1,0 +1,48 @@
+package dev.countercheck.ruleset;
+
+import dev.countercheck.input.SourceLocation;
+
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * A check defined by a ruleset: derived quantities, the quantities it reports and its requirements,
+ * evaluated once per subject of its scope.
+ *
+ * @param id            the check id, with {@code {dir}} standing for the subject (e.g. {@code min-steel-{dir}})
+ * @param scope         which variables it sees and which subjects it runs over
+ * @param appliesWhen   a boolean expression; when false the check is not-applicable with {@code notApplicable}
+ * @param derived       derived quantities in evaluation order (the loader sorts them by dependency)
+ * @param values        the check's reported quantities, each a variable or derived name
+ * @param requirements  what must hold
+ * @param cautions      cautions to show when their condition holds
+ * @param origin        the ruleset file that defined the check
+ */
+public record CheckDef(String id, String scope, Optional<String> appliesWhen, String notApplicable,
+                       List<DerivedDef> derived, List<String> values, List<RequirementDef> requirements,
+                       List<CautionDef> cautions, String origin, SourceLocation location) {
+
+    /** A caution shown with the check when {@code when} is true. */
+    public record CautionDef(String when, String text, SourceLocation location) {
+    }
+
+    /** A named formula over variables, parameters, tables and other derived quantities. */
+    public record DerivedDef(String name, String symbol, String formula, String unit, String clause,
+                             SourceLocation location) {
+    }
+
+    /**
+     * A requirement: {@code that} must be true. When it is not, the check fails with a finding of
+     * {@code severity} and {@code message}, in which {@code {name}} is replaced by the value of name.
+     *
+     * @param utilisation a number expression (demand/capacity) to report, when given
+     */
+    public record RequirementDef(String that, String severity, Optional<String> utilisation, String message,
+                                 String clause, SourceLocation location) {
+    }
+
+    /** The id for one subject: {@code {dir}} replaced. */
+    public String idFor(String subject) {
+        return id.replace("{dir}", subject);
+    }
+}

@@ -1,0 +1,211 @@
+package dev.countercheck.ruleset;
+
+import dev.countercheck.input.Node;
+import dev.countercheck.input.Node.Entry;
+import dev.countercheck.input.Node.ListNode;
+import dev.countercheck.input.Node.MapNode;
+import dev.countercheck.input.Node.ScalarNode;
+import dev.countercheck.input.Problems;
+import dev.countercheck.input.Suggestions;
+import dev.countercheck.ruleset.CheckDef.DerivedDef;
+import dev.countercheck.ruleset.CheckDef.RequirementDef;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/** Reads the {@code tables:} and {@code checks:} blocks of one ruleset file into definitions. */
+final class RuleDefinitions {
+
+    private static final List<String> TABLE_KEYS = List.of("symbol", "unit", "clause", "note", "interpolate",
+            "several", "columns", "rows");
+    private static final List<String> CHECK_KEYS = List.of("scope", "applies_when", "not_applicable", "derived",
+            "values", "requirements", "cautions");
+    private static final List<String> CAUTION_KEYS = List.of("when", "text");
+    private static final List<String> DERIVED_KEYS = List.of("symbol", "formula", "unit", "clause");
+    private static final List<String> REQUIREMENT_KEYS = List.of("that", "severity", "utilisation", "message",
+            "clause");
+
+    private final Problems problems;
+    private final String origin;
+
+    RuleDefinitions(Problems problems, String origin) {
+        this.problems = problems;
+        this.origin = origin;
+    }
+
+    void readTables(Node node, Map<String, TableDef> into) {
+        for (Entry e : mapping(node, "tables").map(MapNode::entries).orElse(List.of())) {
+            String path = "tables." + e.key();
+            Optional<MapNode> map = mapping(e.value(), path);
+            if (map.isEmpty()) {
+                continue;
+            }
+            MapNode t = map.get();
+            unknownKeys(t, path, TABLE_KEYS);
+            List<String> columns = texts(t.entry("columns").map(Entry::value), path + ".columns");
+            Map<String, List<Optional<Double>>> rows = new LinkedHashMap<>();
+            for (Entry row : t.entry("rows").flatMap(r -> mapping(r.value(), path + ".rows")).map(MapNode::entries)
+                    .orElse(List.of())) {
+                List<Optional<Double>> cells = cells(row.value(), path + ".rows." + row.key());
+                if (cells.size() != columns.size()) {
+                    problems.add(row.value().location(), path + ".rows." + row.key(), "row '" + row.key() + "' has "
+                            + cells.size() + " values for " + columns.size() + " columns");
+                }
+                rows.put(row.key(), cells);
+            }
+            boolean interpolate = t.entry("interpolate").map(i -> i.value() instanceof ScalarNode s
+                    && "true".equals(s.text())).orElse(false);
+            if (interpolate) {
+                rows.keySet().stream().filter(k -> !isNumber(k)).forEach(k -> problems.add(t.location(), path,
+                        "an interpolated table needs numbers as row keys, not '" + k + "'"));
+            }
+            String several = text(t, "several").orElse("largest");
+            if (!List.of("largest", "least").contains(several)) {
+                problems.add(t.entry("several").get().value().location(), path + ".several",
+                        "expected 'largest' or 'least'");
+            }
+            if (columns.isEmpty() || rows.isEmpty()) {
+                problems.add(t.location(), path, "a table needs columns and rows");
+            }
+            into.put(e.key(), new TableDef(e.key(), text(t, "symbol").orElse(e.key()), required(t, "unit", path),
+                    required(t, "clause", path), text(t, "note").orElse(""), origin, interpolate,
+                    "least".equals(several) ? TableDef.Several.LEAST : TableDef.Several.LARGEST, columns, rows));
+        }
+    }
+
+    void readChecks(Node node, Map<String, CheckDef> into) {
+        for (Entry e : mapping(node, "checks").map(MapNode::entries).orElse(List.of())) {
+            String path = "checks." + e.key();
+            Optional<MapNode> map = mapping(e.value(), path);
+            if (map.isEmpty()) {
+                continue;
+            }
+            MapNode c = map.get();
+            unknownKeys(c, path, CHECK_KEYS);
+            List<DerivedDef> derived = new ArrayList<>();
+            for (Entry d : c.entry("derived").flatMap(x -> mapping(x.value(), path + ".derived")).map(MapNode::entries)
+                    .orElse(List.of())) {
+                String dPath = path + ".derived." + d.key();
+                mapping(d.value(), dPath).ifPresent(m -> {
+                    unknownKeys(m, dPath, DERIVED_KEYS);
+                    derived.add(new DerivedDef(d.key(), text(m, "symbol").orElse(d.key()), required(m, "formula", dPath),
+                            required(m, "unit", dPath), required(m, "clause", dPath), d.keyLocation()));
+                });
+            }
+            List<RequirementDef> requirements = new ArrayList<>();
+            Optional<Node> reqs = c.entry("requirements").map(Entry::value);
+            if (reqs.isPresent() && reqs.get() instanceof ListNode list) {
+                for (int i = 0; i < list.items().size(); i++) {
+                    String rPath = path + ".requirements[" + i + "]";
+                    mapping(list.items().get(i), rPath).ifPresent(m -> {
+                        unknownKeys(m, rPath, REQUIREMENT_KEYS);
+                        requirements.add(new RequirementDef(required(m, "that", rPath), required(m, "severity", rPath),
+                                text(m, "utilisation"), required(m, "message", rPath), required(m, "clause", rPath),
+                                m.location()));
+                    });
+                }
+            } else if (reqs.isPresent()) {
+                problems.add(reqs.get().location(), path + ".requirements", "expected a list of requirements");
+            }
+            List<CheckDef.CautionDef> cautions = new ArrayList<>();
+            Optional<Node> cautionNodes = c.entry("cautions").map(Entry::value);
+            if (cautionNodes.isPresent() && cautionNodes.get() instanceof ListNode list) {
+                for (int i = 0; i < list.items().size(); i++) {
+                    String cPath = path + ".cautions[" + i + "]";
+                    mapping(list.items().get(i), cPath).ifPresent(m -> {
+                        unknownKeys(m, cPath, CAUTION_KEYS);
+                        cautions.add(new CheckDef.CautionDef(required(m, "when", cPath), required(m, "text", cPath),
+                                m.location()));
+                    });
+                }
+            } else if (cautionNodes.isPresent()) {
+                problems.add(cautionNodes.get().location(), path + ".cautions", "expected a list of cautions");
+            }
+            into.put(e.key(), new CheckDef(e.key(), required(c, "scope", path), text(c, "applies_when"),
+                    text(c, "not_applicable").orElse("the rule's applies_when condition is false"), derived,
+                    texts(c.entry("values").map(Entry::value), path + ".values"), requirements, cautions, origin,
+                    e.keyLocation()));
+        }
+    }
+
+    private Optional<MapNode> mapping(Node node, String path) {
+        if (node instanceof MapNode m) {
+            return Optional.of(m);
+        }
+        problems.add(node.location(), path, "expected a mapping, found " + node.describe());
+        return Optional.empty();
+    }
+
+    private void unknownKeys(MapNode map, String path, List<String> known) {
+        for (Entry e : map.entries()) {
+            if (!known.contains(e.key())) {
+                problems.add(e.keyLocation(), path + "." + e.key(), "unknown key '" + e.key() + "'"
+                        + Suggestions.hint(e.key(), known));
+            }
+        }
+    }
+
+    private static Optional<String> text(MapNode map, String key) {
+        return map.entry(key).map(Entry::value).filter(v -> v instanceof ScalarNode s
+                && s.kind() != ScalarNode.Kind.NULL).map(v -> ((ScalarNode) v).text());
+    }
+
+    private String required(MapNode map, String key, String path) {
+        Optional<String> value = text(map, key);
+        if (value.isEmpty()) {
+            problems.add(map.location(), path, "'" + key + "' is missing"
+                    + ("clause".equals(key) ? ": every rule names the clause it rests on" : ""));
+        }
+        return value.orElse("");
+    }
+
+    private List<String> texts(Optional<Node> node, String path) {
+        List<String> out = new ArrayList<>();
+        if (node.isEmpty()) {
+            return out;
+        }
+        if (!(node.get() instanceof ListNode list)) {
+            problems.add(node.get().location(), path, "expected a list");
+            return out;
+        }
+        for (Node item : list.items()) {
+            if (item instanceof ScalarNode s && s.kind() != ScalarNode.Kind.NULL) {
+                out.add(s.text());
+            } else {
+                problems.add(item.location(), path, "expected a name or a number, found " + item.describe());
+            }
+        }
+        return out;
+    }
+
+    private List<Optional<Double>> cells(Node node, String path) {
+        List<Optional<Double>> out = new ArrayList<>();
+        if (!(node instanceof ListNode list)) {
+            problems.add(node.location(), path, "expected a list of values");
+            return out;
+        }
+        for (Node item : list.items()) {
+            if (item instanceof ScalarNode s && s.kind() == ScalarNode.Kind.NUMBER) {
+                out.add(Optional.of(Double.parseDouble(s.text())));
+            } else if (item instanceof ScalarNode s && (s.kind() == ScalarNode.Kind.NULL || "-".equals(s.text()))) {
+                out.add(Optional.empty());
+            } else {
+                problems.add(item.location(), path, "expected a number, or null where the table has no value");
+                out.add(Optional.empty());
+            }
+        }
+        return out;
+    }
+
+    private static boolean isNumber(String s) {
+        try {
+            Double.parseDouble(s);
+            return true;
+        } catch (NumberFormatException e) {
+            return false;
+        }
+    }
+}

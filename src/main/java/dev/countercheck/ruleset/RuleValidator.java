@@ -1,0 +1,210 @@
+package dev.countercheck.ruleset;
+
+import com.ezylang.evalex.BaseException;
+import dev.countercheck.input.InputError;
+import dev.countercheck.input.SourceLocation;
+import dev.countercheck.ruleset.CheckDef.DerivedDef;
+import dev.countercheck.ruleset.CheckDef.RequirementDef;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Validates the checks of an effective ruleset against what the engine offers: known scope, check
+ * ids and quantities of the catalogue with their units, every name an expression uses, no cycle
+ * among derived quantities, and the type of every expression (found by evaluating it once with the
+ * scope's example values). Returns the checks with their derived quantities in evaluation order.
+ */
+final class RuleValidator {
+
+    private static final Pattern PLACEHOLDER = Pattern.compile("\\{([A-Za-z_][A-Za-z0-9_]*)}");
+    private static final Set<String> SEVERITIES = Set.of("critical", "major", "minor", "note");
+
+    private final RuleVocabulary vocabulary;
+    private final Map<String, Parameter> parameters;
+    private final RuleExpressions expressions;
+    private final List<InputError> errors = new ArrayList<>();
+
+    RuleValidator(RuleVocabulary vocabulary, Map<String, Parameter> parameters, RuleExpressions expressions) {
+        this.vocabulary = vocabulary;
+        this.parameters = parameters;
+        this.expressions = expressions;
+    }
+
+    List<InputError> errors() {
+        return errors;
+    }
+
+    Map<String, CheckDef> validate(Map<String, CheckDef> checks) {
+        Map<String, CheckDef> out = new LinkedHashMap<>();
+        for (CheckDef check : checks.values()) {
+            validate(check).ifPresent(c -> out.put(c.id(), c));
+        }
+        return out;
+    }
+
+    private Optional<CheckDef> validate(CheckDef check) {
+        int before = errors.size();
+        Optional<Map<String, Variable>> scope = vocabulary.scope(check.scope());
+        if (scope.isEmpty()) {
+            error(check.location(), check.id(), "unknown scope '" + check.scope() + "'; the scopes are "
+                    + String.join(", ", new TreeSet<>(vocabulary.scopes().keySet())));
+            return Optional.empty();
+        }
+        List<String> subjects = vocabulary.subjects().getOrDefault(check.scope(), List.of(""));
+        for (String subject : subjects) {
+            if (!vocabulary.checkUnits().containsKey(check.idFor(subject))) {
+                error(check.location(), check.id(), "'" + check.idFor(subject) + "' is not a check a ruleset can define;"
+                        + " they are " + String.join(", ", new TreeSet<>(vocabulary.checkUnits().keySet())));
+                return Optional.empty();
+            }
+        }
+        Map<String, Object> values = new HashMap<>();
+        scope.get().forEach((name, v) -> values.put(name, v.example()));
+        values.put("dir", subjects.get(0));
+        parameters.forEach((name, p) -> values.put(name, p.value()));
+        Map<String, DerivedDef> byName = new LinkedHashMap<>();
+        check.derived().forEach(d -> byName.put(d.name(), d));
+        Set<String> known = new TreeSet<>(values.keySet());
+        known.addAll(byName.keySet());
+        Map<String, Set<String>> uses = new HashMap<>();
+        for (DerivedDef d : check.derived()) {
+            uses.put(d.name(), namesIn(d.formula(), d.location(), check.id() + ".derived." + d.name(), known));
+        }
+        List<DerivedDef> ordered = order(check, byName, uses);
+        for (DerivedDef d : ordered) {
+            typeOf(d.formula(), values, d.location(), check.id() + ".derived." + d.name(), true)
+                    .ifPresent(v -> values.put(d.name(), v));
+        }
+        check.appliesWhen().ifPresent(w -> {
+            namesIn(w, check.location(), check.id() + ".applies_when", known);
+            typeOf(w, values, check.location(), check.id() + ".applies_when", false);
+        });
+        for (String subject : subjects) {
+            Map<String, String> units = vocabulary.checkUnits().get(check.idFor(subject));
+            for (String value : check.values()) {
+                Optional<String> unit = byName.containsKey(value) ? Optional.of(byName.get(value).unit())
+                        : Optional.ofNullable(scope.get().get(value)).map(Variable::unit);
+                if (!units.containsKey(value)) {
+                    error(check.location(), check.id() + ".values", "'" + value + "' is not a quantity of "
+                            + check.idFor(subject) + "; its quantities are " + String.join(", ", units.keySet()));
+                } else if (unit.isEmpty()) {
+                    error(check.location(), check.id() + ".values", "'" + value + "' is neither a derived quantity"
+                            + " of this check nor a variable of scope " + check.scope());
+                } else if (!unit.get().equals(units.get(value))) {
+                    error(check.location(), check.id() + ".values", "'" + value + "' is in " + unit.get() + " but "
+                            + check.idFor(subject) + "." + value + " is reported in " + units.get(value));
+                }
+            }
+        }
+        for (RequirementDef r : check.requirements()) {
+            String path = check.id() + ".requirements";
+            namesIn(r.that(), r.location(), path, known);
+            typeOf(r.that(), values, r.location(), path + ".that", false);
+            r.utilisation().ifPresent(u -> {
+                namesIn(u, r.location(), path, known);
+                typeOf(u, values, r.location(), path + ".utilisation", true);
+            });
+            if (!SEVERITIES.contains(r.severity())) {
+                error(r.location(), path + ".severity", "severity '" + r.severity()
+                        + "' is not one of critical, major, minor, note");
+            }
+            Matcher m = PLACEHOLDER.matcher(r.message());
+            while (m.find()) {
+                if (!known.contains(m.group(1))) {
+                    error(r.location(), path + ".message", "the message names {" + m.group(1) + "}, which is not known"
+                            + " here");
+                }
+            }
+        }
+        for (CheckDef.CautionDef c : check.cautions()) {
+            namesIn(c.when(), c.location(), check.id() + ".cautions", known);
+            typeOf(c.when(), values, c.location(), check.id() + ".cautions.when", false);
+        }
+        if (errors.size() > before) {
+            return Optional.empty();
+        }
+        return Optional.of(new CheckDef(check.id(), check.scope(), check.appliesWhen(), check.notApplicable(),
+                ordered, check.values(), check.requirements(), check.cautions(), check.origin(), check.location()));
+    }
+
+    private Set<String> namesIn(String expression, SourceLocation at, String path, Set<String> known) {
+        try {
+            Set<String> used = expressions.variablesOf(expression);
+            for (String name : used) {
+                if (known.stream().noneMatch(k -> k.equalsIgnoreCase(name))) {
+                    error(at, path, "'" + name + "' in '" + expression + "' is not a variable, parameter, table or"
+                            + " derived quantity known here");
+                }
+            }
+            return used;
+        } catch (BaseException e) {
+            error(at, path, "cannot read '" + expression + "': " + e.getMessage());
+            return Set.of();
+        }
+    }
+
+    /** Derived quantities ordered so that each comes after those it uses; a cycle is an error. */
+    private List<DerivedDef> order(CheckDef check, Map<String, DerivedDef> byName, Map<String, Set<String>> uses) {
+        List<DerivedDef> ordered = new ArrayList<>();
+        Set<String> done = new TreeSet<>(String.CASE_INSENSITIVE_ORDER);
+        Set<String> visiting = new TreeSet<>(String.CASE_INSENSITIVE_ORDER);
+        for (String name : byName.keySet()) {
+            visit(name, byName, uses, done, visiting, ordered, new ArrayList<>(), check);
+        }
+        return ordered;
+    }
+
+    private void visit(String name, Map<String, DerivedDef> byName, Map<String, Set<String>> uses, Set<String> done,
+                       Set<String> visiting, List<DerivedDef> ordered, List<String> path, CheckDef check) {
+        if (done.contains(name)) {
+            return;
+        }
+        path.add(name);
+        if (!visiting.add(name)) {
+            DerivedDef d = byName.get(name);
+            error(d.location(), check.id() + ".derived." + name, "derived quantities form a cycle: "
+                    + String.join(" → ", path));
+            done.add(name);
+            return;
+        }
+        for (String used : uses.getOrDefault(name, Set.of())) {
+            byName.keySet().stream().filter(k -> k.equalsIgnoreCase(used)).findFirst()
+                    .ifPresent(k -> visit(k, byName, uses, done, visiting, ordered, new ArrayList<>(path), check));
+        }
+        visiting.remove(name);
+        if (done.add(name)) {
+            ordered.add(byName.get(name));
+        }
+    }
+
+    private Optional<Object> typeOf(String expression, Map<String, Object> values, SourceLocation at, String path,
+                                    boolean wantNumber) {
+        try {
+            var v = expressions.evaluate(expression, values);
+            if (wantNumber && !v.isNumberValue()) {
+                error(at, path, "'" + expression + "' must give a number");
+            } else if (!wantNumber && !v.isBooleanValue()) {
+                error(at, path, "'" + expression + "' must be a condition (true or false)");
+            } else {
+                return Optional.of(wantNumber ? (Object) v.getNumberValue().doubleValue() : v.getBooleanValue());
+            }
+        } catch (BaseException | RuntimeException e) {
+            error(at, path, "'" + expression + "' cannot be evaluated with the example values of its scope: "
+                    + e.getMessage());
+        }
+        return Optional.empty();
+    }
+
+    private void error(SourceLocation at, String path, String message) {
+        errors.add(new InputError(at, path, message));
+    }
+}

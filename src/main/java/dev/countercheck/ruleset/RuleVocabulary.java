@@ -1,0 +1,30 @@
+package dev.countercheck.ruleset;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+
+/**
+ * What the review engine offers the rules and expects of them, so that a ruleset can be validated
+ * completely at load: the variables of each scope, the subjects a scope expands over ({@code {dir}}
+ * in a check id), the checks the rules may define with their quantities' units, and the parameters
+ * the engine itself reads.
+ *
+ * @param scopes             variables by scope name
+ * @param subjects           for each scope, the values of {@code {dir}} ({@code [""]} for a scope with one subject)
+ * @param checkUnits         check id → quantity → unit, for the checks a ruleset may define
+ * @param requiredParameters parameters the engine reads in Java
+ */
+public record RuleVocabulary(Map<String, Map<String, Variable>> scopes, Map<String, List<String>> subjects,
+                             Map<String, Map<String, String>> checkUnits, Set<String> requiredParameters) {
+
+    /** An empty vocabulary: only parameters are checked (for tests of the parameter layer). */
+    public static RuleVocabulary parametersOnly(Set<String> requiredParameters) {
+        return new RuleVocabulary(Map.of(), Map.of(), Map.of(), requiredParameters);
+    }
+
+    Optional<Map<String, Variable>> scope(String name) {
+        return Optional.ofNullable(scopes.get(name));
+    }
+}

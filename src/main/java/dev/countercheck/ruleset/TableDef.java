@@ -1,0 +1,27 @@
+package dev.countercheck.ruleset;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * A table of the standard or an annex, called from expressions as {@code name(row, column)} (or
+ * {@code name(row)} when it has one column). Rows are keyed by text (exact match) or, for an
+ * interpolated table, by number with linear interpolation between rows; a row key below the first
+ * row takes the first row (the table's least severe entry, as the standard's tables start at
+ * their lowest tabulated value), above the last row there is no value. Columns match exactly. When
+ * a key is a list (several exposure classes) the value is the largest or the least over its items,
+ * as {@code several} says; items the table does not list (XF and XA in Table 4.4N) are passed over,
+ * and the lookup fails only when none is listed. A cell with no value ({@code null}, "–" in the
+ * standard) is an error when looked up.
+ *
+ * @param columns column keys in order: text, or numbers as written
+ * @param rows    row key (as written) → one value per column, empty where the standard has none
+ */
+public record TableDef(String name, String symbol, String unit, String clause, String note, String origin,
+                       boolean interpolate, Several several, List<String> columns,
+                       Map<String, List<Optional<Double>>> rows) {
+
+    /** How a list-valued key combines. */
+    public enum Several { LARGEST, LEAST }
+}

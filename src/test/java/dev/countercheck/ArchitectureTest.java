@@ -1,0 +1,55 @@
+package dev.countercheck;
+
+import com.tngtech.archunit.base.DescribedPredicate;
+import com.tngtech.archunit.core.domain.JavaClass;
+import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.importer.ClassFileImporter;
+import com.tngtech.archunit.core.importer.ImportOption;
+import org.junit.jupiter.api.Test;
+
+import static com.tngtech.archunit.base.DescribedPredicate.not;
+import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAPackage;
+import static com.tngtech.archunit.core.domain.JavaClass.Predicates.simpleName;
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+
+/** The dependency rules of spec/architecture.md, so that they hold as the code grows. */
+class ArchitectureTest {
+
+    private static final JavaClasses CLASSES = new ClassFileImporter()
+            .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
+            .importPackages("dev.countercheck");
+
+    @Test
+    void reviewAndElementsNeverImportReportOrCli() {
+        noClasses().that().resideInAnyPackage("dev.countercheck.review..", "dev.countercheck.element..")
+                .should().dependOnClassesThat().resideInAnyPackage("dev.countercheck.report..", "dev.countercheck.cli..")
+                .check(CLASSES);
+    }
+
+    @Test
+    void nothingImportsTheCommandLine() {
+        noClasses().that().resideOutsideOfPackage("dev.countercheck.cli..")
+                .should().dependOnClassesThat().resideInAPackage("dev.countercheck.cli..")
+                .check(CLASSES);
+    }
+
+    @Test
+    void reportRendersAFinishedReviewAndComputesNothing() {
+        DescribedPredicate<JavaClass> formulas = resideInAPackage("dev.countercheck.eurocode..")
+                .and(not(simpleName("Step").or(simpleName("Num"))));
+        noClasses().that().resideInAPackage("dev.countercheck.report..")
+                .should().dependOnClassesThat().resideInAnyPackage("dev.countercheck.element..",
+                        "dev.countercheck.ruleset..")
+                .orShould().dependOnClassesThat(formulas)
+                .orShould().dependOnClassesThat().haveSimpleName("ClaimComparer")
+                .check(CLASSES);
+    }
+
+    @Test
+    void rulesetsKnowNoSubmissionsReviewsOrReports() {
+        noClasses().that().resideInAPackage("dev.countercheck.ruleset..")
+                .should().dependOnClassesThat().resideInAnyPackage("dev.countercheck.submission..",
+                        "dev.countercheck.review..", "dev.countercheck.element..", "dev.countercheck.report..")
+                .check(CLASSES);
+    }
+}

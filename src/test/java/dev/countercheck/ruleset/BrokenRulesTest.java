@@ -1,0 +1,56 @@
+package dev.countercheck.ruleset;
+
+import dev.countercheck.element.ProjectReviewer;
+import dev.countercheck.input.InputError;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.catchThrowableOfType;
+
+/**
+ * Every kind of broken rule is refused at load, before any review, with its file, line and column.
+ * Each case is a house ruleset over the shipped recommended one that adds one bad check.
+ */
+class BrokenRulesTest {
+
+    private static final String HEAD = """
+            ruleset: 1
+            id: broken
+            extends: en1992-recommended
+            title: Broken
+            checks:
+            """;
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', textBlock = """
+            unknown variable   |  max-steel: {scope: cap, derived: {as_max: {formula: 'as_q * 2', unit: mm2, clause: x}}, values: [as_max], requirements: []}                                  | 6 | 'as_q'
+            unknown table      |  max-steel: {scope: cap, derived: {as_max: {formula: 'no_such_table(1, 2)', unit: mm2, clause: x}}, values: [as_max], requirements: []}                     | 6 | no_such_table
+            type error         |  max-steel: {scope: cap, derived: {}, values: [], requirements: [{that: 'as_x + 1', severity: major, message: m, clause: x}]}                                    | 6 | must be a condition
+            derived cycle      |  max-steel: {scope: cap, derived: {a: {formula: 'b + 1', unit: mm2, clause: x}, b: {formula: 'a + 1', unit: mm2, clause: x}}, values: [], requirements: []}     | 6 | cycle
+            rule without clause|  max-steel: {scope: cap, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: major, message: m}]}                                              | 6 | every rule names the clause
+            unknown check      |  max-stell: {scope: cap, derived: {}, values: [], requirements: []}                                                                                                 | 6 | not a check a ruleset can define
+            unknown scope      |  max-steel: {scope: slab, derived: {}, values: [], requirements: []}                                                                                                | 6 | unknown scope
+            wrong unit         |  max-steel: {scope: cap, derived: {as_max: {formula: 'as_x', unit: mm, clause: x}}, values: [as_max], requirements: []}                                          | 6 | reported in mm2
+            bad severity       |  max-steel: {scope: cap, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: grave, message: m, clause: x}]}                                    | 6 | is not one of critical
+            unknown placeholder|  max-steel: {scope: cap, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: major, message: 'see {nothing}', clause: x}]}                     | 6 | {nothing}
+            """)
+    void aBrokenRuleIsRefusedWithItsLocation(String name, String check, int line, String message, @TempDir Path dir)
+            throws IOException {
+        Files.writeString(dir.resolve("broken.yaml"), HEAD + "  " + check.strip() + "\n");
+        List<InputError> errors = catchThrowableOfType(RulesetException.class,
+                () -> new RulesetLoader(dir, ProjectReviewer.RULE_VOCABULARY).load("broken")).errors();
+        assertThat(errors).as(name).anySatisfy(e -> {
+            assertThat(e.location().file()).endsWith("broken.yaml");
+            assertThat(e.location().line()).isEqualTo(line);
+            assertThat(e.location().column()).isPositive();
+            assertThat(e.message()).contains(message.replace("'", ""));
+        });
+    }
+}

@@ -1,0 +1,136 @@
+package dev.countercheck.ruleset;
+
+import dev.countercheck.input.InputError;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Set;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.catchThrowableOfType;
+
+/** Loading rulesets: the extends chain, origins, and every refusal located in its file. */
+class RulesetLoaderTest {
+
+    private static final String BASE = """
+            ruleset: 1
+            id: base
+            title: Base
+            parameters:
+              gamma_c: {symbol: γc, value: 1.5, unit: "-", clause: "2.4.2.4", note: concrete}
+              gamma_s: {symbol: γs, value: 1.15, unit: "-", clause: "2.4.2.4", note: steel}
+            """;
+
+    private static RulesetLoader loader(Path dir) {
+        return new RulesetLoader(dir, RuleVocabulary.parametersOnly(Set.of("gamma_c", "gamma_s")));
+    }
+
+    private static List<InputError> errors(Path dir, String reference) {
+        return catchThrowableOfType(RulesetException.class, () -> loader(dir).load(reference)).errors();
+    }
+
+    @Test
+    void anOverrideKeepsItsParentsValuesAndNamesItsOwnFile(@TempDir Path dir) throws Exception {
+        Files.writeString(dir.resolve("base.yaml"), BASE);
+        Files.writeString(dir.resolve("annex.yaml"), """
+                ruleset: 1
+                id: annex
+                extends: base
+                title: Annex
+                parameters:
+                  gamma_c: {value: 1.4, clause: "NA 2.4.2.4"}
+                """);
+        Ruleset r = loader(dir).load("annex");
+        assertThat(r.number("gamma_c")).isEqualTo(1.4);
+        assertThat(r.parameter("gamma_c").origin()).endsWith("annex.yaml");
+        assertThat(r.parameter("gamma_c").symbol()).isEqualTo("γc");
+        assertThat(r.parameter("gamma_s").origin()).endsWith("base.yaml");
+        assertThat(r.files()).hasSize(2);
+        assertThat(r.sha256()).matches("[0-9a-f]{64}");
+    }
+
+    @Test
+    void overridingAParameterTheParentLacksIsLocatedWithASuggestion(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("base.yaml"), BASE);
+        Files.writeString(dir.resolve("annex.yaml"), """
+                ruleset: 1
+                id: annex
+                extends: base
+                title: Annex
+                parameters:
+                  gama_c: {value: 1.4, clause: "NA"}
+                """);
+        assertThat(errors(dir, "annex")).singleElement().satisfies(e -> {
+            assertThat(e.location().line()).isEqualTo(6);
+            assertThat(e.location().column()).isEqualTo(3);
+            assertThat(e.message()).contains("did you mean 'gamma_c'");
+        });
+    }
+
+    @Test
+    void anExtendsLoopIsRefused(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("a.yaml"), "ruleset: 1\nid: a\ntitle: A\nextends: b\nparameters: {}\n");
+        Files.writeString(dir.resolve("b.yaml"), "ruleset: 1\nid: b\ntitle: B\nextends: a\nparameters: {}\n");
+        assertThat(errors(dir, "a")).anySatisfy(e -> assertThat(e.message()).contains("loops"));
+    }
+
+    @Test
+    void anExtendsThatDoesNotResolveIsLocatedAtTheReference(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("a.yaml"), "ruleset: 1\nid: a\ntitle: A\nextends: nowhere\nparameters: {}\n");
+        assertThat(errors(dir, "a")).singleElement().satisfies(e -> {
+            assertThat(e.location().line()).isEqualTo(4);
+            assertThat(e.message()).contains("nowhere");
+        });
+    }
+
+    @Test
+    void aChainWithoutAParameterTheReviewNeedsIsRefused(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("thin.yaml"), """
+                ruleset: 1
+                id: thin
+                title: Thin
+                parameters:
+                  gamma_c: {symbol: γc, value: 1.5, unit: "-", clause: "2.4.2.4", note: concrete}
+                """);
+        assertThat(errors(dir, "thin")).singleElement()
+                .satisfies(e -> assertThat(e.message()).contains("gamma_s"));
+    }
+
+    @Test
+    void everyProblemOfAFileIsListed(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("bad.yaml"), """
+                ruleset: 1
+                id: bad
+                title: Bad
+                colour: blue
+                parameters:
+                  gamma_c: {symbol: γc, value: "one and a half", unit: "-", clause: "x", note: y}
+                  gamma_s: {symbol: γs, value: 1.15, unit: "-", note: steel}
+                """);
+        List<InputError> errors = errors(dir, "bad");
+        assertThat(errors).extracting(InputError::message).anySatisfy(m -> assertThat(m).contains("unknown key 'colour'"))
+                .anySatisfy(m -> assertThat(m).contains("expected a number"))
+                .anySatisfy(m -> assertThat(m).contains("has no 'clause'"));
+    }
+
+    @Test
+    void aFileThatIsNotARulesetIsRefused(@TempDir Path dir) throws IOException {
+        Path notes = dir.resolve("notes.yaml");
+        Files.writeString(notes, "shopping: [milk, bread]\n");
+        assertThatThrownBy(() -> loader(dir).load(notes.toString())).isInstanceOf(RulesetException.class);
+    }
+
+    @Test
+    void theShippedRulesetsLoadWithEveryParameterTheReviewNeeds() throws Exception {
+        for (String id : List.of("en1992-recommended", "en1992-uk-na", "house-example")) {
+            Ruleset r = new RulesetLoader(Path.of("rulesets"),
+                    dev.countercheck.element.ProjectReviewer.RULE_VOCABULARY).load(id);
+            assertThat(r.id()).isEqualTo(id);
+        }
+    }
+}
