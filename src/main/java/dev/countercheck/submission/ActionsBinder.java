@@ -1,6 +1,8 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.KeyPath;
 import dev.countercheck.input.Node;
+import dev.countercheck.input.Shown;
 import dev.countercheck.submission.ActionCase.Kind;
 import dev.countercheck.submission.Values.Bound;
 

@@ -1,10 +1,11 @@
 package dev.countercheck.submission;
 
 import dev.countercheck.input.Node;
+import dev.countercheck.input.Node.Entry;
+import dev.countercheck.input.Shown;
 import dev.countercheck.input.Suggestions;
 import dev.countercheck.submission.CheckCatalogue.CheckSpec;
 import dev.countercheck.submission.CheckCatalogue.QuantitySpec;
-import dev.countercheck.input.Node.Entry;
 import dev.countercheck.submission.PileCap.TieMethod;
 import dev.countercheck.submission.Values.Bound;
 

@@ -1,11 +1,12 @@
 package dev.countercheck.submission;
 
 import dev.countercheck.input.Node;
-import dev.countercheck.input.Suggestions;
-import dev.countercheck.input.SourceLocation;
 import dev.countercheck.input.Node.Entry;
 import dev.countercheck.input.Node.MapNode;
 import dev.countercheck.input.Node.ScalarNode;
+import dev.countercheck.input.Shown;
+import dev.countercheck.input.SourceLocation;
+import dev.countercheck.input.Suggestions;
 import dev.countercheck.submission.Values.Bound;
 
 import java.util.List;

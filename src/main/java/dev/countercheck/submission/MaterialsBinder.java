@@ -1,6 +1,7 @@
 package dev.countercheck.submission;
 
 import dev.countercheck.input.Node;
+import dev.countercheck.input.Shown;
 import dev.countercheck.input.Suggestions;
 import dev.countercheck.submission.Values.Bound;
 

@@ -1,9 +1,10 @@
 package dev.countercheck.submission;
 
 import dev.countercheck.input.Node;
-import dev.countercheck.input.Suggestions;
-import dev.countercheck.input.SourceLocation;
 import dev.countercheck.input.Node.MapNode;
+import dev.countercheck.input.Shown;
+import dev.countercheck.input.SourceLocation;
+import dev.countercheck.input.Suggestions;
 
 import java.util.HashMap;
 import java.util.List;

@@ -1,7 +1,8 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.TreeParser;
 import dev.countercheck.input.Problems;
+import dev.countercheck.input.Shown;
+import dev.countercheck.input.TreeParser;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.AccessDeniedException;

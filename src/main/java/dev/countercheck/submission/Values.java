@@ -1,12 +1,14 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.KeyPath;
 import dev.countercheck.input.Node;
-import dev.countercheck.input.Problems;
-import dev.countercheck.input.Suggestions;
 import dev.countercheck.input.Node.ListNode;
 import dev.countercheck.input.Node.MapNode;
 import dev.countercheck.input.Node.ScalarNode;
 import dev.countercheck.input.Node.ScalarNode.Kind;
+import dev.countercheck.input.Problems;
+import dev.countercheck.input.Shown;
+import dev.countercheck.input.Suggestions;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
