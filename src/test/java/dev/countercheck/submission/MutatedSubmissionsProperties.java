@@ -47,6 +47,7 @@ class MutatedSubmissionsProperties {
 
     private static final List<Path> SAMPLES = List.of(
             Path.of("sample-submissions/harbour-lane.yaml"),
+            Path.of("sample-submissions/quayside-annex.yaml"),
             Path.of("src/test/resources/submissions/good/harbour-lane.yaml"),
             Path.of("src/test/resources/submissions/good/one-incomplete.yaml"),
             Path.of("src/test/resources/hand-calcs/two-pile.yaml"),
