@@ -60,16 +60,19 @@ public final class ReviewCommand implements Callable<Integer> {
     @Option(names = "--pdf", description = "Also write DIR/<name>.pdf, the report laid out on A4.")
     boolean pdf;
 
+    @Option(names = "--debug", description = "On an internal error, print where it happened (a stack trace).")
+    boolean debug;
+
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         Severity threshold;
         String reviewDate;
         List<Path> inputs;
+        ReportTargets targets;
         boolean batch;
         try {
             threshold = Severity.fromLabel(failOn);
@@ -82,67 +85,89 @@ public final class ReviewCommand implements Callable<Integer> {
                 throw new UsageException("a submission named " + ReportIndex.NAME + " would write its report where"
                         + " the index of several submissions goes; rename it or review it on its own");
             }
+            targets = ReportTargets.of(outDir, inputs, pdf ? List.of(".json", ".html", ".pdf")
+                    : List.of(".json", ".html"));
         } catch (IllegalArgumentException | UsageException e) {
             err.println("countercheck review: " + e.getMessage());
             return ExitCodes.UNUSABLE;
         }
         Rulesets rulesets = new Rulesets();
         ProjectReviewer reviewer = new ProjectReviewer(Version.tool());
-        int status = ExitCodes.OK;
         ReportIndex index = new ReportIndex(Version.tool(), reviewDate);
+        int status = ExitCodes.OK;
         for (int i = 0; i < inputs.size(); i++) {
             Path file = inputs.get(i);
             if (inputs.size() > 1) {
                 err.println("[" + (i + 1) + "/" + inputs.size() + "] " + file);
             }
-            try {
-                Submission submission = new dev.countercheck.submission.SubmissionReader().read(file);
-                Ruleset rules = rulesets.load(ruleset.or(submission::ruleset).orElse(Rulesets.DEFAULT));
-                Review review = reviewer.review(submission, rules, reviewDate);
-                Path json = outDir.resolve(SubmissionFiles.basename(file) + ".json");
-                Path html = outDir.resolve(SubmissionFiles.basename(file) + ".html");
-                Files.createDirectories(outDir);
-                ReportFiles.writeAtomically(json, new JsonResultWriter().write(review));
-                ReportFiles.writeAtomically(html, new HtmlReportWriter().write(review));
-                Path pdfFile = outDir.resolve(SubmissionFiles.basename(file) + ".pdf");
-                if (pdf) {
-                    ReportFiles.writeAtomically(pdfFile, new PdfReportWriter().write(review));
-                }
-                index.reviewed(review, json, html, pdf ? Optional.of(pdfFile) : Optional.empty());
-                out.println(SummaryLine.of(file, review, json, html));
-                boolean found = review.elements().stream().flatMap(e -> e.findings().stream())
-                        .anyMatch(f -> f.severity().atLeast(threshold));
-                if (found && status == ExitCodes.OK) {
-                    status = ExitCodes.FINDINGS;
-                }
-            } catch (SubmissionException e) {
-                e.errors().forEach(err::println);
-                err.println(file + ": not reviewed (" + e.errors().size() + " input error"
-                        + (e.errors().size() == 1 ? "" : "s") + ")");
-                index.notReviewed(file.toString(), "input errors");
-                status = ExitCodes.UNUSABLE;
-            } catch (RulesetException e) {
-                e.errors().forEach(err::println);
-                err.println(file + ": not reviewed (the ruleset cannot be used)");
-                index.notReviewed(file.toString(), "the ruleset cannot be used");
-                status = ExitCodes.UNUSABLE;
-            } catch (IOException e) {
-                err.println(file + ": cannot write the reports to " + outDir + ": " + e.getMessage());
-                index.notReviewed(file.toString(), "its reports could not be written");
-                status = ExitCodes.UNUSABLE;
-            }
+            status = worse(status, reviewOne(file, rulesets, reviewer, reviewDate, targets, threshold, index));
         }
         if (batch) {
-            Path indexFile = outDir.resolve(ReportIndex.NAME + ".html");
-            try {
-                ReportFiles.writeAtomically(indexFile, index.html());
-                out.println("index of " + inputs.size() + " submissions -> " + indexFile);
-            } catch (IOException e) {
-                err.println("cannot write " + indexFile + ": " + e.getMessage());
-                status = ExitCodes.UNUSABLE;
-            }
+            status = worse(status, writeIndex(index, inputs.size()));
         }
         return status;
+    }
+
+    /** Reviews one submission and writes its reports; the exit status it calls for. */
+    private int reviewOne(Path file, Rulesets rulesets, ProjectReviewer reviewer, String reviewDate,
+                          ReportTargets targets, Severity threshold, ReportIndex index) {
+        PrintWriter err = spec.commandLine().getErr();
+        try {
+            Submission submission = new dev.countercheck.submission.SubmissionReader().read(file);
+            Ruleset rules = rulesets.load(ruleset.or(submission::ruleset).orElse(Rulesets.DEFAULT));
+            Review review = reviewer.review(submission, rules, reviewDate);
+            Path json = targets.report(file, ".json");
+            Path html = targets.report(file, ".html");
+            Files.createDirectories(outDir);
+            ReportFiles.writeAtomically(json, new JsonResultWriter().write(review));
+            ReportFiles.writeAtomically(html, new HtmlReportWriter().write(review));
+            Optional<Path> pdfFile = pdf ? Optional.of(targets.report(file, ".pdf")) : Optional.empty();
+            if (pdfFile.isPresent()) {
+                ReportFiles.writeAtomically(pdfFile.get(), new PdfReportWriter().write(review));
+            }
+            index.reviewed(review, json, html, pdfFile);
+            spec.commandLine().getOut().println(SummaryLine.of(file, review, json, html));
+            boolean found = review.elements().stream().flatMap(e -> e.findings().stream())
+                    .anyMatch(f -> f.severity().atLeast(threshold));
+            return found ? ExitCodes.FINDINGS : ExitCodes.OK;
+        } catch (SubmissionException e) {
+            e.errors().forEach(err::println);
+            err.println(file + ": not reviewed (" + e.errors().size() + " input error"
+                    + (e.errors().size() == 1 ? "" : "s") + ")");
+            index.notReviewed(file.toString(), "input errors");
+        } catch (RulesetException e) {
+            e.errors().forEach(err::println);
+            err.println(file + ": not reviewed (the ruleset cannot be used)");
+            index.notReviewed(file.toString(), "the ruleset cannot be used");
+        } catch (IOException e) {
+            err.println(file + ": cannot write the reports to " + outDir + ": " + e.getMessage());
+            index.notReviewed(file.toString(), "its reports could not be written");
+        } catch (RuntimeException e) {
+            err.println(file + ": not reviewed: internal error (" + e.getClass().getSimpleName() + ")."
+                    + " Please report it with the submission" + (debug ? ":" : "; --debug shows where it happened."));
+            if (debug) {
+                e.printStackTrace(err);
+            }
+            index.notReviewed(file.toString(), "internal error");
+        }
+        return ExitCodes.UNUSABLE;
+    }
+
+    private int writeIndex(ReportIndex index, int submissions) {
+        Path indexFile = outDir.resolve(ReportIndex.NAME + ".html");
+        try {
+            ReportFiles.writeAtomically(indexFile, index.html());
+            spec.commandLine().getOut().println("index of " + submissions + " submissions -> " + indexFile);
+            return ExitCodes.OK;
+        } catch (IOException e) {
+            spec.commandLine().getErr().println("cannot write " + indexFile + ": " + e.getMessage());
+            return ExitCodes.UNUSABLE;
+        }
+    }
+
+    /** The more serious of two exit statuses (unusable input over findings over none). */
+    private static int worse(int a, int b) {
+        return Math.max(a, b);
     }
 
     private static void requireDistinctBasenames(List<Path> inputs) {

@@ -45,9 +45,9 @@ public sealed interface Node permits Node.MapNode, Node.ListNode, Node.ScalarNod
         @Override
         public String describe() {
             return switch (kind) {
-                case TEXT -> "the text '" + text + "'";
-                case NUMBER -> "the number " + text;
-                case BOOLEAN -> "the value " + text;
+                case TEXT -> "the text '" + Shown.text(text) + "'";
+                case NUMBER -> "the number " + Shown.text(text);
+                case BOOLEAN -> "the value " + Shown.text(text);
                 case NULL -> "no value";
             };
         }

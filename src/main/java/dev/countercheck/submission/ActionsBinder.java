@@ -1,6 +1,8 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.KeyPath;
 import dev.countercheck.input.Node;
+import dev.countercheck.input.Shown;
 import dev.countercheck.submission.ActionCase.Kind;
 import dev.countercheck.submission.Values.Bound;
 
@@ -23,7 +25,7 @@ final class ActionsBinder {
 
     /** The action cases, possibly none; names must be unique within the element. */
     Optional<List<ActionCase>> read(Node node, String path) {
-        Optional<List<ActionCase>> cases = values.list(node, path).flatMap(items -> values.each(items, path,
+        Optional<List<ActionCase>> cases = values.list(node, path, Limits.ACTION_CASES, "action cases").flatMap(items -> values.each(items, path,
                 (item, itemPath) -> Fields.of(item, itemPath, values, KEYS).flatMap(this::actionCase)));
         cases.ifPresent(c -> checkNamesUnique(c, path));
         return cases;
@@ -51,7 +53,8 @@ final class ActionsBinder {
             ActionCase c = cases.get(i);
             ActionCase first = seen.putIfAbsent(c.name(), c);
             if (first != null) {
-                values.problems().add(c.location(), path + "[" + i + "].name", "duplicate action case name '" + c.name()
+                values.problems().add(c.location(), Values.join(KeyPath.item(path, i), "name"), "duplicate action case name '"
+                        + Shown.text(c.name())
                         + "': already used at line " + first.location().line());
             }
         }

@@ -1,10 +1,11 @@
 package dev.countercheck.submission;
 
 import dev.countercheck.input.Node;
+import dev.countercheck.input.Node.Entry;
+import dev.countercheck.input.Shown;
 import dev.countercheck.input.Suggestions;
 import dev.countercheck.submission.CheckCatalogue.CheckSpec;
 import dev.countercheck.submission.CheckCatalogue.QuantitySpec;
-import dev.countercheck.input.Node.Entry;
 import dev.countercheck.submission.PileCap.TieMethod;
 import dev.countercheck.submission.Values.Bound;
 
@@ -48,7 +49,7 @@ final class ClaimsBinder {
                 } else {
                     List<String> known = new ArrayList<>(List.of(METHOD));
                     known.addAll(checks.keySet());
-                    values.problems().add(entry.keyLocation(), entryPath, "unknown check '" + entry.key() + "'"
+                    values.problems().add(entry.keyLocation(), entryPath, "unknown check '" + Shown.text(entry.key()) + "'"
                             + Suggestions.hint(entry.key(), known));
                     ok = false;
                 }
@@ -64,7 +65,7 @@ final class ClaimsBinder {
             String quantityPath = Values.join(path, quantity.key());
             Optional<QuantitySpec> q = spec.quantity(quantity.key());
             if (q.isEmpty()) {
-                values.problems().add(quantity.keyLocation(), quantityPath, "unknown quantity '" + quantity.key()
+                values.problems().add(quantity.keyLocation(), quantityPath, "unknown quantity '" + Shown.text(quantity.key())
                         + "' of check '" + spec.id() + "'" + Suggestions.hint(quantity.key(),
                         spec.quantities().stream().map(QuantitySpec::name).toList()));
                 ok = false;

@@ -23,7 +23,7 @@ final class ColumnBinder {
 
     Optional<Column> read(Fields f, Optional<Plan> plan) {
         Optional<ColumnShape> shape = f.requiredChoice("shape", Values.options(ColumnShape.values()));
-        Optional<Node> sizeNode = f.require("size");
+        Optional<Node> sizeNode = f.require("size", "[cx, cy] in mm, or [D] for a circular column");
         Optional<List<Double>> size = shape.flatMap(s -> sizeNode.flatMap(n -> s == ColumnShape.CIRCULAR
                 ? values.lengths(n, f.path("size"), 1, 1, Bound.POSITIVE, "a circular column's size is [D]")
                 : values.lengths(n, f.path("size"), 2, 2, Bound.POSITIVE, "a rectangular column's size is [cx, cy]")));
@@ -44,7 +44,7 @@ final class ColumnBinder {
     }
 
     private Optional<StarterBars> starterBars(Fields f) {
-        Optional<Integer> count = f.requiredCount("count");
+        Optional<Integer> count = f.requiredCount("count", Limits.STARTER_BARS, "starter bars");
         Optional<Double> diameter = f.requiredQuantity("diameter", Dimension.LENGTH, Bound.POSITIVE);
         return count.flatMap(n -> diameter.map(d -> new StarterBars(n, d)));
     }

@@ -7,30 +7,63 @@ import java.util.stream.Collectors;
 
 /**
  * The kinds of quantity a submission holds, each with its default unit (the unit of a bare
- * number) and the units accepted in text such as {@code "1.1 m"}. Unit symbols are case-sensitive
- * ({@code MN} is a force, {@code mm} a length).
+ * number), the units accepted in text such as {@code "1.1 m"}, and the magnitude no value of its
+ * kind exceeds in the review of a foundation: a larger value is a slip (a unit, a decimal point,
+ * a key held down), refused rather than reviewed. The limits are generous, at least ten times the
+ * largest values of real pile caps and pad footings (common practice):
+ * <ul>
+ *   <li>length 100 m: caps and footings span metres, a few tens of metres at the very most;
+ *   <li>force 10⁶ kN (1000 MN): the heaviest building columns carry some 10⁵ kN;
+ *   <li>moment 10⁷ kNm: the largest force at a lever arm of 10 m;
+ *   <li>stress 1000 MPa: reinforcing steel yields at 400 to 600 MPa, concrete crushes far lower;
+ *   <li>area 10⁷ mm² (10 m²): the steel area of any cross-section of a cap stays far below;
+ *   <li>angle 180°;
+ *   <li>plain number 100: the factors a submission states (β, ratios) lie near 1.
+ * </ul>
+ * Unit symbols are case-sensitive ({@code MN} is a force, {@code mm} a length).
  */
 enum Dimension {
-    LENGTH("a length", new Unit("mm", 1), new Unit("cm", 10), new Unit("m", 1000)),
-    FORCE("a force", new Unit("kN", 1), new Unit("N", 1e-3), new Unit("MN", 1e3)),
-    MOMENT("a moment", new Unit("kNm", 1), new Unit("kN·m", 1), new Unit("MNm", 1e3), new Unit("Nmm", 1e-6)),
-    STRESS("a stress", new Unit("MPa", 1), new Unit("N/mm2", 1), new Unit("N/mm²", 1), new Unit("kPa", 1e-3),
-            new Unit("GPa", 1e3)),
-    AREA("an area", new Unit("mm2", 1), new Unit("mm²", 1), new Unit("cm2", 100), new Unit("m2", 1e6)),
-    ANGLE("an angle", new Unit("deg", 1), new Unit("°", 1)),
+    LENGTH("a length", 1e5, "100 m (100000 mm)", new Unit("mm", 1), new Unit("cm", 10), new Unit("m", 1000)),
+    FORCE("a force", 1e6, "1000000 kN (1000 MN)", new Unit("kN", 1), new Unit("N", 1e-3), new Unit("MN", 1e3)),
+    MOMENT("a moment", 1e7, "10000000 kNm", new Unit("kNm", 1), new Unit("kN·m", 1), new Unit("MNm", 1e3),
+            new Unit("Nmm", 1e-6)),
+    STRESS("a stress", 1e3, "1000 MPa", new Unit("MPa", 1), new Unit("N/mm2", 1), new Unit("N/mm²", 1),
+            new Unit("kPa", 1e-3), new Unit("GPa", 1e3)),
+    AREA("an area", 1e7, "10000000 mm2 (10 m2)", new Unit("mm2", 1), new Unit("mm²", 1), new Unit("cm2", 100),
+            new Unit("m2", 1e6)),
+    ANGLE("an angle", 180, "180°", new Unit("deg", 1), new Unit("°", 1)),
     /** A pure number (β, a ratio): no unit may be written. */
-    NUMBER("a plain number", new Unit("-", 1));
+    NUMBER("a plain number", 100, "100", new Unit("-", 1));
 
     /** A unit symbol and the factor that converts a value in it to the default unit. */
     record Unit(String symbol, double toDefault) {
     }
 
     private final String noun;
+    private final double limit;
+    private final String limitText;
     private final List<Unit> units;
 
-    Dimension(String noun, Unit... units) {
+    Dimension(String noun, double limit, String limitText, Unit... units) {
         this.noun = noun;
+        this.limit = limit;
+        this.limitText = limitText;
         this.units = List.of(units);
+    }
+
+    /** The largest magnitude a value of this kind may have, in the default unit. */
+    double limit() {
+        return limit;
+    }
+
+    /** The limit for a message: "100 m (100000 mm)". */
+    String limitText() {
+        return limitText;
+    }
+
+    /** The units accepted, the default first. */
+    List<Unit> units() {
+        return units;
     }
 
     /** "a length", "a force", ... */

@@ -1,11 +1,12 @@
 package dev.countercheck.submission;
 
 import dev.countercheck.input.Node;
-import dev.countercheck.input.Suggestions;
-import dev.countercheck.input.SourceLocation;
 import dev.countercheck.input.Node.Entry;
 import dev.countercheck.input.Node.MapNode;
 import dev.countercheck.input.Node.ScalarNode;
+import dev.countercheck.input.Shown;
+import dev.countercheck.input.SourceLocation;
+import dev.countercheck.input.Suggestions;
 import dev.countercheck.submission.Values.Bound;
 
 import java.util.List;
@@ -35,7 +36,7 @@ final class Fields {
             for (Entry entry : map.entries()) {
                 if (!known.contains(entry.key())) {
                     values.problems().add(entry.keyLocation(), Values.join(path, entry.key()),
-                            "unknown key '" + entry.key() + "'" + Suggestions.hint(entry.key(), known));
+                            "unknown key '" + Shown.text(entry.key()) + "'" + Suggestions.hint(entry.key(), known));
                 }
             }
             return new Fields(map, path, values);
@@ -75,8 +76,14 @@ final class Fields {
 
     /** The value of a required key; a missing key is reported at this mapping. */
     Optional<Node> require(String key) {
+        return require(key, "");
+    }
+
+    /** As {@link #require(String)}; the report of a missing key says what it takes ("a length in mm"). */
+    Optional<Node> require(String key, String expected) {
         if (!has(key)) {
-            values.problems().add(map.location(), path(key), "missing required key '" + key + "'");
+            values.problems().add(map.location(), path(key), "missing required key '" + key + "'"
+                    + (expected.isEmpty() ? "" : ": give " + expected));
             return Optional.empty();
         }
         return get(key);
@@ -92,11 +99,12 @@ final class Fields {
     }
 
     Optional<Double> requiredQuantity(String key, Dimension dimension, Bound bound) {
-        return require(key).flatMap(n -> values.quantity(n, path(key), dimension, bound));
+        String unit = dimension == Dimension.NUMBER ? "" : " in " + dimension.defaultUnit();
+        return require(key, dimension.noun() + unit).flatMap(n -> values.quantity(n, path(key), dimension, bound));
     }
 
-    Optional<Integer> requiredCount(String key) {
-        return require(key).flatMap(n -> values.count(n, path(key)));
+    Optional<Integer> requiredCount(String key, int max, String what) {
+        return require(key, "a whole number from 1 to " + max).flatMap(n -> values.count(n, path(key), max, what));
     }
 
     Optional<String> text(String key) {
@@ -104,7 +112,7 @@ final class Fields {
     }
 
     Optional<String> requiredText(String key) {
-        return require(key).flatMap(n -> values.text(n, path(key)));
+        return require(key, "a text").flatMap(n -> values.text(n, path(key)));
     }
 
     /** The value of an optional choice; {@code fallback} when the key is absent. */
@@ -113,7 +121,8 @@ final class Fields {
     }
 
     <E> Optional<E> requiredChoice(String key, Map<String, E> options) {
-        return require(key).flatMap(n -> values.choice(n, path(key), key, options));
+        return require(key, "one of " + String.join(", ", options.keySet()))
+                .flatMap(n -> values.choice(n, path(key), key, options));
     }
 
     /** The fields of the mapping under {@code key}, when the key is present. */
@@ -122,6 +131,6 @@ final class Fields {
     }
 
     Optional<Fields> requiredFields(String key, List<String> known) {
-        return require(key).flatMap(n -> of(n, path(key), values, known));
+        return require(key, "a mapping of " + String.join(", ", known)).flatMap(n -> of(n, path(key), values, known));
     }
 }

@@ -1,6 +1,7 @@
 package dev.countercheck.submission;
 
 import dev.countercheck.input.Node;
+import dev.countercheck.input.Shown;
 import dev.countercheck.input.Suggestions;
 import dev.countercheck.submission.Values.Bound;
 
@@ -139,7 +140,7 @@ final class MaterialsBinder {
         String hint = Suggestions.nearest(written, CLASSES.keySet())
                 .filter(c -> c.equalsIgnoreCase(written)).map(c -> "; did you mean '" + c + "'?").orElse("");
         values.problems().add(f.get("concrete").orElseThrow().location(), f.path("concrete"),
-                "concrete class '" + written + "' is not in EN 1992-1-1 Table 3.1 (C12/15 to C90/105)"
+                "concrete class '" + Shown.text(written) + "' is not in EN 1992-1-1 Table 3.1 (C12/15 to C90/105)"
                         + " nor one of the BS 8500 classes C28/35, C32/40" + hint);
         return Optional.empty();
     }
@@ -154,7 +155,8 @@ final class MaterialsBinder {
     }
 
     private Optional<List<String>> exposure(Node node, String path) {
-        return values.nonEmptyList(node, path, "exposure class (e.g. XC2)").flatMap(items -> values.each(items, path,
+        return values.nonEmptyList(node, path, EXPOSURE.size(), "exposure classes",
+                "exposure class (e.g. XC2)").flatMap(items -> values.each(items, path,
                 (item, itemPath) -> values.choice(item, itemPath, "exposure class", EXPOSURE)));
     }
 

@@ -23,8 +23,9 @@ final class PileGroupBinder {
 
     Optional<PileGroup> read(Fields f, Optional<Plan> plan, Optional<Double> depthMm) {
         Optional<Double> diameter = f.requiredQuantity("diameter", Dimension.LENGTH, Bound.POSITIVE);
-        Optional<List<Node>> nodes = f.require("positions")
-                .flatMap(n -> values.nonEmptyList(n, f.path("positions"), "pile position [x, y]"));
+        Optional<List<Node>> nodes = f.require("positions", "a list of pile centres [x, y] in mm")
+                .flatMap(n -> values.nonEmptyList(n, f.path("positions"), Limits.PILES, "pile positions",
+                        "pile position [x, y]"));
         Optional<List<Point>> positions = nodes.flatMap(items -> values.each(items, f.path("positions"),
                 values::point));
         Optional<Fields> capacity = f.requiredFields("capacity", CAPACITY_KEYS);

@@ -45,10 +45,10 @@ final class ReinforcementBinder {
 
     Optional<Reinforcement> read(Fields f, Optional<Plan> plan, Optional<Double> depthMm) {
         Optional<Covers> cover = f.requiredFields("cover", COVER_KEYS).flatMap(this::covers);
-        Optional<List<BarSet>> bottom = f.require("bottom").flatMap(n -> values.nonEmptyList(n, f.path("bottom"),
-                "bar set")).flatMap(items -> face(items, f.path("bottom"), plan, cover));
+        Optional<List<BarSet>> bottom = f.require("bottom", "a list of bar sets").flatMap(n -> values.nonEmptyList(n, f.path("bottom"),
+                Limits.BAR_SETS, "bar sets", "bar set")).flatMap(items -> face(items, f.path("bottom"), plan, cover));
         Optional<List<BarSet>> top = f.has("top")
-                ? f.get("top").flatMap(n -> values.list(n, f.path("top"))).flatMap(items -> face(items, f.path("top"),
+                ? f.get("top").flatMap(n -> values.list(n, f.path("top"), Limits.BAR_SETS, "bar sets")).flatMap(items -> face(items, f.path("top"),
                 plan, cover))
                 : Optional.of(List.of());
         Optional<Optional<SideBars>> sides = f.has("sides")
@@ -96,7 +96,7 @@ final class ReinforcementBinder {
 
     private Optional<Written> barSet(Fields f) {
         Optional<Direction> direction = f.requiredChoice("direction", DIRECTIONS);
-        Optional<Integer> count = f.requiredCount("count");
+        Optional<Integer> count = f.requiredCount("count", Limits.BARS_IN_A_SET, "bars in one set");
         Optional<Double> diameter = f.requiredQuantity("diameter", Dimension.LENGTH, Bound.POSITIVE);
         Optional<Optional<Integer>> layer = f.has("layer")
                 ? f.get("layer").flatMap(n -> layer(n, f.path("layer"))).map(Optional::of)

@@ -1,9 +1,10 @@
 package dev.countercheck.submission;
 
 import dev.countercheck.input.Node;
-import dev.countercheck.input.Suggestions;
-import dev.countercheck.input.SourceLocation;
 import dev.countercheck.input.Node.MapNode;
+import dev.countercheck.input.Shown;
+import dev.countercheck.input.SourceLocation;
+import dev.countercheck.input.Suggestions;
 
 import java.util.HashMap;
 import java.util.List;
@@ -13,8 +14,8 @@ import java.util.regex.Pattern;
 
 /**
  * Binds the tree of a whole file: the format version, project, basis and default materials, then
- * each element by its type. Element ids are unique and made of letters, digits, '.', '_' and '-'
- * (they become part of finding ids such as {@code PC-C4/anchorage-x/1}).
+ * each element by its type. Element ids are unique, at most 64 characters, made of letters, digits,
+ * '.', '_' and '-' (they become part of finding ids such as {@code PC-C4/anchorage-x/1}).
  */
 final class SubmissionBinder {
 
@@ -25,7 +26,8 @@ final class SubmissionBinder {
     private static final List<String> PROJECT_KEYS = List.of("title", "reference", "revision", "prepared_by", "date");
     private static final List<String> BASIS_KEYS = List.of("ruleset");
     private static final List<String> SUPPORTED_TYPES = List.of(PileCap.TYPE);
-    private static final Pattern ID = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]*");
+    private static final int ID_MAX_CHARS = 64;
+    private static final Pattern ID = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]{0," + (ID_MAX_CHARS - 1) + "}");
 
     private final Values values;
     private final MaterialsBinder materialsBinder;
@@ -51,8 +53,8 @@ final class SubmissionBinder {
             Optional<String> ruleset = f.fields("basis", BASIS_KEYS).flatMap(b -> b.text("ruleset"));
             MaterialsBinder.Draft materials = f.fields("materials", MaterialsBinder.KEYS)
                     .map(materialsBinder::read).orElse(MaterialsBinder.Draft.NONE);
-            Optional<List<ElementInput>> elements = f.require("elements")
-                    .flatMap(n -> values.nonEmptyList(n, "elements", "element"))
+            Optional<List<ElementInput>> elements = f.require("elements", "a list of the elements to review")
+                    .flatMap(n -> values.nonEmptyList(n, "elements", Limits.ELEMENTS, "elements", "element"))
                     .flatMap(items -> elements(items, materials));
             return values.problems().any() ? Optional.empty() : elements.map(e ->
                     new Submission(values.problems().file(), sha256, project, ruleset, e));
@@ -96,13 +98,13 @@ final class SubmissionBinder {
     private Optional<String> id(Node node, String path, Map<String, SourceLocation> ids) {
         return values.text(node, path).filter(id -> {
             if (!ID.matcher(id).matches()) {
-                values.error(node, path, "element id '" + id + "' may hold only letters, digits, '.', '_' and '-'"
-                        + " and must start with a letter or digit");
+                values.error(node, path, "element id '" + Shown.text(id) + "' may hold only letters, digits, '.', '_' and '-',"
+                        + " must start with a letter or digit and be at most " + ID_MAX_CHARS + " characters long");
                 return false;
             }
             SourceLocation first = ids.putIfAbsent(id, node.location());
             if (first != null) {
-                values.error(node, path, "duplicate element id '" + id + "': already used at line " + first.line());
+                values.error(node, path, "duplicate element id '" + Shown.text(id) + "': already used at line " + first.line());
             }
             return first == null;
         });
@@ -111,7 +113,7 @@ final class SubmissionBinder {
     private Optional<String> type(Node node, String path) {
         return values.text(node, path).filter(type -> {
             if (!SUPPORTED_TYPES.contains(type)) {
-                values.error(node, path, "unknown element type '" + type + "'"
+                values.error(node, path, "unknown element type '" + Shown.text(type) + "'"
                         + Suggestions.nearest(type, SUPPORTED_TYPES).map(t -> "; did you mean '" + t + "'?").orElse("")
                         + "; supported types: " + String.join(", ", SUPPORTED_TYPES));
             }

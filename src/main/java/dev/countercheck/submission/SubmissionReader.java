@@ -1,8 +1,10 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.TreeParser;
 import dev.countercheck.input.Problems;
+import dev.countercheck.input.Shown;
+import dev.countercheck.input.TreeParser;
 import java.io.IOException;
+import java.io.InputStream;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
@@ -25,6 +27,9 @@ import java.util.Optional;
  */
 public final class SubmissionReader {
 
+    /** The most bytes read: four per character (the most UTF-8 takes) of the largest document parsed. */
+    static final int MAX_BYTES = 4 * TreeParser.MAX_DOCUMENT_CHARS;
+
     /**
      * Reads and validates {@code file}.
      *
@@ -36,9 +41,14 @@ public final class SubmissionReader {
         Problems problems = new Problems(name);
         byte[] bytes;
         try {
-            bytes = Files.readAllBytes(file);
+            bytes = readBounded(file);
         } catch (IOException e) {
             problems.add(problems.at(1, 1), "", cannotRead(file, e));
+            throw new SubmissionException(problems.sorted());
+        }
+        if (bytes.length > MAX_BYTES) {
+            problems.add(problems.at(1, 1), "", "the file is larger than " + MAX_BYTES / 1_000_000
+                    + " MB, far more than any submission: it is not read");
             throw new SubmissionException(problems.sorted());
         }
         Optional<Submission> submission = new TreeParser(problems).parse(bytes, name)
@@ -49,6 +59,20 @@ public final class SubmissionReader {
         return submission.orElseThrow();
     }
 
+    /**
+     * At most {@link #MAX_BYTES} + 1 bytes of a regular file. The parsers' own limits (see
+     * {@link TreeParser}) refuse a document of more than {@link TreeParser#MAX_DOCUMENT_CHARS}
+     * characters; this bound only keeps a huge file, or a device that never ends, out of memory.
+     */
+    private static byte[] readBounded(Path file) throws IOException {
+        if (Files.exists(file) && !Files.isRegularFile(file) && !Files.isDirectory(file)) {
+            throw new IOException("not a regular file");
+        }
+        try (InputStream in = Files.newInputStream(file)) {
+            return in.readNBytes(MAX_BYTES + 1);
+        }
+    }
+
     private static String cannotRead(Path file, IOException e) {
         if (e instanceof NoSuchFileException) {
             return "no such file";
@@ -56,8 +80,11 @@ public final class SubmissionReader {
         if (e instanceof AccessDeniedException) {
             return "the file cannot be read: permission denied";
         }
-        return Files.isDirectory(file) ? "this is a folder, not a submission file"
-                : "the file cannot be read (" + e.getMessage() + ")";
+        if (Files.isDirectory(file)) {
+            return "this is a folder, not a submission file";
+        }
+        return Files.isRegularFile(file) ? "the file cannot be read (" + Shown.text(String.valueOf(e.getMessage())) + ")"
+                : "this is not a regular file (a device, a pipe or a socket): a submission is a file";
     }
 
     /** Lower-case hex SHA-256 of {@code bytes}. */

@@ -1,12 +1,14 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.KeyPath;
 import dev.countercheck.input.Node;
-import dev.countercheck.input.Problems;
-import dev.countercheck.input.Suggestions;
 import dev.countercheck.input.Node.ListNode;
 import dev.countercheck.input.Node.MapNode;
 import dev.countercheck.input.Node.ScalarNode;
 import dev.countercheck.input.Node.ScalarNode.Kind;
+import dev.countercheck.input.Problems;
+import dev.countercheck.input.Shown;
+import dev.countercheck.input.Suggestions;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
@@ -78,7 +80,8 @@ final class Values {
                     default -> expectedQuantity(node, path, dimension);
                 }
                 : expectedQuantity(node, path, dimension);
-        return value.filter(v -> finite(node, path, v)).filter(v -> within(node, path, v, bound));
+        return value.filter(v -> finite(node, path, v)).filter(v -> plausible(node, path, v, dimension))
+                .filter(v -> within(node, path, v, bound));
     }
 
     private Optional<Double> expectedQuantity(Node node, String path, Dimension dimension) {
@@ -93,14 +96,14 @@ final class Values {
             return Optional.of(Double.parseDouble(scalar.text()));
         }
         error(scalar, path, NOT_FINITE.matcher(scalar.text()).matches()
-                ? "'" + scalar.text() + "' is not a finite number"
-                : "'" + scalar.text() + "' is not a decimal number");
+                ? "'" + Shown.text(scalar.text()) + "' is not a finite number"
+                : "'" + Shown.text(scalar.text()) + "' is not a decimal number");
         return Optional.empty();
     }
 
     private Optional<Double> numberWithUnit(ScalarNode scalar, String path, Dimension dimension) {
-        String text = scalar.text();
-        Matcher m = NUMBER_AND_UNIT.matcher(text);
+        String text = Shown.text(scalar.text());
+        Matcher m = NUMBER_AND_UNIT.matcher(scalar.text());
         if (!m.matches()) {
             error(scalar, path, NOT_FINITE.matcher(text).matches()
                     ? "'" + text + "' is not a finite number"
@@ -118,11 +121,18 @@ final class Values {
         if (unit.isPresent()) {
             return Optional.of(number * unit.get().toDefault());
         }
+        if (symbol.startsWith(",") || symbol.startsWith(".")) {
+            error(scalar, path, "'" + text + "' is not a number: write it without separators, with '.' as the"
+                    + " decimal mark (3400, 3.4)");
+            return Optional.empty();
+        }
         String expected = dimension == Dimension.NUMBER ? dimension.noun() + " without a unit is expected here"
                 : dimension.noun() + " is expected here (" + dimension.unitList() + ")";
+        String hint = Suggestions.nearest(symbol, dimension.units().stream().map(Dimension.Unit::symbol).toList())
+                .map(u -> " (did you mean '" + u + "'?)").orElse("");
         error(scalar, path, Dimension.ofUnit(symbol)
                 .map(other -> "'" + text + "' is " + other.noun() + ", but " + expected)
-                .orElse("unknown unit '" + symbol + "' in '" + text + "': " + expected));
+                .orElse("unknown unit '" + Shown.text(symbol) + "' in '" + text + "'" + hint + ": " + expected));
         return Optional.empty();
     }
 
@@ -131,6 +141,19 @@ final class Values {
             return true;
         }
         error(node, path, "the value is too large to be a finite number");
+        return false;
+    }
+
+    /** Within the magnitude no submission exceeds: a larger value is a slip of unit or of keyboard. */
+    private boolean plausible(Node node, String path, double value, Dimension dimension) {
+        if (Math.abs(value) <= dimension.limit()) {
+            return true;
+        }
+        boolean bare = node instanceof ScalarNode scalar && scalar.kind() == Kind.NUMBER;
+        String check = dimension == Dimension.NUMBER ? "check the number"
+                : "check the number and its unit" + (bare ? " (a bare number is in " + dimension.defaultUnit() + ")" : "");
+        error(node, path, source(node) + " is too large for " + dimension.noun() + ": no value of a foundation"
+                + " review exceeds " + dimension.limitText() + "; " + check);
         return false;
     }
 
@@ -155,9 +178,14 @@ final class Values {
         return Optional.empty();
     }
 
-    /** A whole number greater than zero (a count of bars or piles). */
-    Optional<Integer> count(Node node, String path) {
-        return wholeNumber(node, path).filter(n -> within(node, path, n, Bound.POSITIVE));
+    /** A whole number from 1 to {@code max} (a count of bars). */
+    Optional<Integer> count(Node node, String path, int max, String what) {
+        return wholeNumber(node, path).filter(n -> within(node, path, n, Bound.POSITIVE)).filter(n -> {
+            if (n > max) {
+                error(node, path, n + " " + what + " is more than the " + max + " a submission may give");
+            }
+            return n <= max;
+        });
     }
 
     /** Non-blank text; numbers and booleans are taken as written ({@code revision: 2}). */
@@ -178,7 +206,7 @@ final class Values {
         return text(node, path).flatMap(text -> {
             E value = options.get(text);
             if (value == null) {
-                error(node, path, "unknown " + what + " '" + text + "'" + Suggestions.hint(text, options.keySet()));
+                error(node, path, "unknown " + what + " '" + Shown.text(text) + "'" + Suggestions.hint(text, options.keySet()));
             }
             return Optional.ofNullable(value);
         });
@@ -192,11 +220,22 @@ final class Values {
         return Optional.empty();
     }
 
-    /** A non-empty list. */
-    Optional<List<Node>> nonEmptyList(Node node, String path, String what) {
+    /** A list of at most {@code maxItems} items; {@code what} names them in the plural ("pile positions"). */
+    Optional<List<Node>> list(Node node, String path, int maxItems, String what) {
         return list(node, path).filter(items -> {
+            if (items.size() > maxItems) {
+                error(node, path, "the list holds " + items.size() + " " + what + ", more than the " + maxItems
+                        + " a submission may give");
+            }
+            return items.size() <= maxItems;
+        });
+    }
+
+    /** A list of 1 to {@code maxItems} items. */
+    Optional<List<Node>> nonEmptyList(Node node, String path, int maxItems, String what, String one) {
+        return list(node, path, maxItems, what).filter(items -> {
             if (items.isEmpty()) {
-                error(node, path, "the list is empty: give at least one " + what);
+                error(node, path, "the list is empty: give at least one " + one);
             }
             return !items.isEmpty();
         });
@@ -226,7 +265,7 @@ final class Values {
     <T> Optional<List<T>> each(List<Node> items, String path, BiFunction<Node, String, Optional<T>> reader) {
         List<Optional<T>> read = new ArrayList<>();
         for (int i = 0; i < items.size(); i++) {
-            read.add(reader.apply(items.get(i), path + "[" + i + "]"));
+            read.add(reader.apply(items.get(i), KeyPath.item(path, i)));
         }
         return read.stream().allMatch(Optional::isPresent)
                 ? Optional.of(read.stream().map(Optional::get).toList())
@@ -248,12 +287,12 @@ final class Values {
 
     /** The node as the user wrote it, for messages. */
     static String source(Node node) {
-        return node instanceof ScalarNode scalar ? scalar.text() : node.describe();
+        return node instanceof ScalarNode scalar ? Shown.text(scalar.text()) : node.describe();
     }
 
     /** {@code path.key}, or {@code key} at the top of the file. */
     static String join(String path, String key) {
-        return path.isEmpty() ? key : path + "." + key;
+        return KeyPath.join(path, key);
     }
 
     /**

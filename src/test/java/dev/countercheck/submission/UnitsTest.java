@@ -70,7 +70,7 @@ class UnitsTest {
     @CsvSource(delimiter = '|', value = {
             "1100        | LENGTH | 1100",
             "-3.5        | FORCE  | -3.5",
-            "1.5e3       | STRESS | 1500"
+            "1.5e2       | STRESS | 150"        // 1.5 × 10² MPa
     })
     void aBareNumberIsInTheDefaultUnit(String text, Dimension dimension, double expected) {
         assertThat(read(Kind.NUMBER, text, dimension)).contains(expected);
@@ -91,6 +91,43 @@ class UnitsTest {
     void reportsAWrongOrUnknownUnit(String text, Dimension dimension, String message) {
         assertThat(read(Kind.TEXT, text, dimension)).isEmpty();
         assertThat(problems.sorted()).singleElement().extracting(InputError::message).isEqualTo(message);
+    }
+
+    /**
+     * Each kind's limit of plausibility, on both sides, bare and with a unit. Source of the
+     * limits: the table in {@link Dimension}'s Javadoc (common practice, at least ten times the
+     * largest values of real caps and footings); the unit arithmetic is in the comments.
+     */
+    @ParameterizedTest(name = "{0} as {1}: accepted {2}")
+    @CsvSource(delimiter = '|', value = {
+            "100000      | LENGTH | true",     // 100 m = 100 000 mm, the limit itself
+            "-100000     | LENGTH | true",     // a position may be negative; the limit is on the magnitude
+            "100000.5    | LENGTH | false",
+            "100.1 m     | LENGTH | false",    // 100.1 × 1000 = 100 100 mm
+            "50000000    | LENGTH | false",    // a 50 km cap
+            "1000000     | FORCE  | true",     // 10⁶ kN
+            "1000.1 MN   | FORCE  | false",    // 1000.1 × 10³ = 1 000 100 kN
+            "1e9         | FORCE  | false",    // a 10⁹ kN load
+            "1e7         | MOMENT | true",
+            "-1.1e7      | MOMENT | false",
+            "1000        | STRESS | true",
+            "1.1 GPa     | STRESS | false",    // 1.1 × 10³ = 1100 MPa
+            "1e7         | AREA   | true",
+            "10.1 m2     | AREA   | false",    // 10.1 × 10⁶ = 1.01 × 10⁷ mm²
+            "180         | ANGLE  | true",
+            "181 deg     | ANGLE  | false",
+            "100         | NUMBER | true",
+            "101         | NUMBER | false"
+    })
+    void aValueBeyondThePlausibleLimitOfItsKindIsRefused(String text, Dimension dimension, boolean accepted) {
+        Kind kind = text.matches("[-+0-9.e]+") ? Kind.NUMBER : Kind.TEXT;
+
+        assertThat(read(kind, text, dimension).isPresent()).isEqualTo(accepted);
+        if (!accepted) {
+            assertThat(problems.sorted()).singleElement().extracting(InputError::message).asString()
+                    .startsWith(text + " is too large for " + dimension.noun())
+                    .contains("no value of a foundation review exceeds " + dimension.limitText());
+        }
     }
 
     @Test

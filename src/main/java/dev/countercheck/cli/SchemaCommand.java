@@ -1,0 +1,44 @@
+package dev.countercheck.cli;
+
+import picocli.CommandLine.Command;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.concurrent.Callable;
+
+/**
+ * {@code schema}: prints the JSON Schema of the submission format, the file published as
+ * {@code schema/submission.schema.json}, for editors that complete and check a submission as it
+ * is typed.
+ */
+@Command(name = "schema", mixinStandardHelpOptions = true, versionProvider = Version.class,
+        description = {"Print the JSON Schema of the submission format: countercheck schema > submission.schema.json",
+                "Editors that read '# yaml-language-server: $schema=<path>' on a file's first line then complete"
+                        + " and check submissions as they are typed."})
+public final class SchemaCommand implements Callable<Integer> {
+
+    static final String RESOURCE = "/schema/submission.schema.json";
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        spec.commandLine().getOut().print(text());
+        spec.commandLine().getOut().flush();
+        return ExitCodes.OK;
+    }
+
+    static String text() {
+        try (InputStream in = SchemaCommand.class.getResourceAsStream(RESOURCE)) {
+            if (in == null) {
+                throw new IllegalStateException("the build did not package " + RESOURCE);
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
