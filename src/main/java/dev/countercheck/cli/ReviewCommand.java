@@ -114,7 +114,8 @@ public final class ReviewCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         try {
             Submission submission = new dev.countercheck.submission.SubmissionReader().read(file);
-            Ruleset rules = rulesets.load(ruleset.or(submission::ruleset).orElse(Rulesets.DEFAULT));
+            Ruleset rules = ruleset.isPresent() ? rulesets.load(ruleset.get())
+                    : rulesets.load(submission.ruleset().orElse(Rulesets.DEFAULT), submission.rulesetAt());
             Review review = reviewer.review(submission, rules, reviewDate);
             Path json = targets.report(file, ".json");
             Path html = targets.report(file, ".html");

@@ -42,7 +42,7 @@ public final class ValidateCommand implements Callable<Integer> {
         for (Path file : inputs) {
             try {
                 Submission s = new SubmissionReader().read(file);
-                rulesets.load(s.ruleset().orElse(Rulesets.DEFAULT));
+                rulesets.load(s.ruleset().orElse(Rulesets.DEFAULT), s.rulesetAt());
                 long incomplete = s.elements().stream().filter(e -> e instanceof IncompleteElement).count();
                 out.println(file + ": valid, " + s.elements().size() + " element" + (s.elements().size() == 1 ? "" : "s")
                         + (incomplete > 0 ? " (" + incomplete + " incomplete)" : ""));

@@ -40,6 +40,9 @@ public final class RulesetLoader {
             "parameters", "tables", "checks");
     private static final List<String> PARAMETER_KEYS = List.of("symbol", "value", "unit", "clause", "note");
 
+    /** A ruleset is a short text file; anything larger is refused before it is read. */
+    private static final long MAX_FILE_BYTES = 1024 * 1024;
+
     private final Path localFolder;
     private final RuleVocabulary vocabulary;
 
@@ -57,9 +60,17 @@ public final class RulesetLoader {
     }
 
     public Ruleset load(String reference) throws RulesetException {
+        return load(reference, Optional.empty());
+    }
+
+    /**
+     * @param referencedAt where the reference was written (a submission's {@code basis.ruleset}), so that an
+     *                     error about it points there; empty for a reference given on the command line
+     */
+    public Ruleset load(String reference, Optional<SourceLocation> referencedAt) throws RulesetException {
         List<RulesetFile> chain = new ArrayList<>();
         List<InputError> errors = new ArrayList<>();
-        Optional<RulesetFile> current = open(reference, Optional.empty(), errors);
+        Optional<RulesetFile> current = open(reference, referencedAt, errors);
         while (current.isPresent()) {
             RulesetFile file = current.get();
             if (chain.stream().anyMatch(f -> f.name().equals(file.name()))) {
@@ -229,6 +240,10 @@ public final class RulesetLoader {
                 Path p = Path.of(reference);
                 if (!Files.isRegularFile(p)) {
                     return notFound("no ruleset file " + reference, referencedAt, errors);
+                }
+                if (Files.size(p) > MAX_FILE_BYTES) {
+                    return notFound(reference + " is larger than " + MAX_FILE_BYTES / 1024
+                            + " KiB: not a ruleset", referencedAt, errors);
                 }
                 bytes = Files.readAllBytes(p);
                 name = reference;

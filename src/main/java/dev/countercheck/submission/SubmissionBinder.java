@@ -50,14 +50,16 @@ final class SubmissionBinder {
                 }
             });
             Project project = f.fields("project", PROJECT_KEYS).map(this::project).orElse(Project.empty());
-            Optional<String> ruleset = f.fields("basis", BASIS_KEYS).flatMap(b -> b.text("ruleset"));
+            Optional<Fields> basis = f.fields("basis", BASIS_KEYS);
+            Optional<String> ruleset = basis.flatMap(b -> b.text("ruleset"));
+            Optional<SourceLocation> rulesetAt = basis.flatMap(b -> b.get("ruleset")).map(Node::location);
             MaterialsBinder.Draft materials = f.fields("materials", MaterialsBinder.KEYS)
                     .map(materialsBinder::read).orElse(MaterialsBinder.Draft.NONE);
             Optional<List<ElementInput>> elements = f.require("elements", "a list of the elements to review")
                     .flatMap(n -> values.nonEmptyList(n, "elements", Limits.ELEMENTS, "elements", "element"))
                     .flatMap(items -> elements(items, materials));
             return values.problems().any() ? Optional.empty() : elements.map(e ->
-                    new Submission(values.problems().file(), sha256, project, ruleset, e));
+                    new Submission(values.problems().file(), sha256, project, ruleset, rulesetAt, e));
         });
     }
 

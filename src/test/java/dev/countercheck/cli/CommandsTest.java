@@ -107,6 +107,7 @@ class CommandsTest {
         Files.writeString(file, run("example").out().replace("ruleset: en1992-recommended", "ruleset: en1992-mars"));
         SampleSubmissionsTest.Run r = run("validate", file.toString());
         assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
-        assertThat(r.err()).contains("en1992-mars").contains("cannot be used");
+        assertThat(r.err()).contains("en1992-mars").contains("cannot be used")
+                .containsPattern("starter\\.yaml:\\d+:\\d+: "); // located at basis.ruleset in the submission
     }
 }

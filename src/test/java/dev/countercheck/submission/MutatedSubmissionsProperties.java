@@ -196,15 +196,8 @@ class MutatedSubmissionsProperties {
         }
     }
 
-    /**
-     * Every node below the root, or only the numbers. Not the ruleset reference: an unknown
-     * ruleset is refused by the ruleset loader, whose message names the reference but not yet its
-     * place in the submission (reported to its owner), so it would fail "every message located".
-     */
+    /** Every node below the root, or only the numbers. */
     private static void pointers(JsonNode node, String pointer, boolean numbersOnly, List<String> found) {
-        if (pointer.startsWith("/basis")) {
-            return;
-        }
         if (!pointer.isEmpty() && (!numbersOnly || node.isNumber())) {
             found.add(pointer);
         }
