@@ -26,13 +26,23 @@ public record Reinforcement(Covers cover, List<BarSet> bottom, List<BarSet> top,
     public enum BarEnds { STRAIGHT, BENT, HOOKED }
 
     /**
+     * Laps of a bar set, when the submission declares them.
+     *
+     * @param percentLapped share of the bars lapped within one lap length of a section (ρ1 of 8.7.3(1)), %
+     * @param lengthMm      the lap length provided, mm
+     */
+    public record Lap(double percentLapped, double lengthMm) {
+    }
+
+    /**
      * A set of equal bars running in one direction.
      *
      * @param layer  1 = nearest the face, 2 = next
      * @param legMm  the vertical leg of bent or hooked ends, when the submission gives it
+     * @param lap    the laps of the set, when the submission declares them
      */
     public record BarSet(Direction direction, int count, double diameterMm, int layer, BarEnds ends,
-                         Optional<Double> legMm) {
+                         Optional<Double> legMm, Optional<Lap> lap) {
         public double areaMm2() {
             return count * Math.PI * diameterMm * diameterMm / 4.0;
         }

@@ -27,14 +27,16 @@ final class ReinforcementBinder {
 
     static final List<String> KEYS = List.of("cover", "bottom", "top", "sides");
     private static final List<String> COVER_KEYS = List.of("bottom", "top", "side");
-    private static final List<String> BAR_KEYS = List.of("direction", "count", "diameter", "layer", "ends", "leg");
+    private static final List<String> BAR_KEYS = List.of("direction", "count", "diameter", "layer", "ends", "leg",
+            "lap");
+    private static final List<String> LAP_KEYS = List.of("percent", "length");
     private static final List<String> SIDE_KEYS = List.of("diameter", "spacing");
     private static final Map<String, Direction> DIRECTIONS = Values.options(Direction.values());
     private static final Map<String, BarEnds> ENDS = Values.options(BarEnds.values());
 
     /** A bar set as written, before its layer is settled. */
     private record Written(Fields fields, Direction direction, int count, double diameterMm, Optional<Integer> layer,
-                           BarEnds ends, Optional<Double> legMm) {
+                           BarEnds ends, Optional<Double> legMm, Optional<Reinforcement.Lap> lap) {
     }
 
     private final Values values;
@@ -85,7 +87,7 @@ final class ReinforcementBinder {
         List<BarSet> sets = new ArrayList<>();
         for (Written w : written.get()) {
             sets.add(new BarSet(w.direction(), w.count(), w.diameterMm(),
-                    w.layer().orElse(order.indexOf(w.direction()) + 1), w.ends(), w.legMm()));
+                    w.layer().orElse(order.indexOf(w.direction()) + 1), w.ends(), w.legMm(), w.lap()));
         }
         boolean layersOk = checkLayers(written.get(), sets);
         if (layersOk && plan.isPresent() && cover.isPresent()) {
@@ -108,11 +110,22 @@ final class ReinforcementBinder {
                     "a leg is given but the bars have straight ends: state 'ends: bent' or 'ends: hooked'");
             return Optional.empty();
         }
+        Optional<Optional<Reinforcement.Lap>> lap = f.has("lap")
+                ? f.fields("lap", LAP_KEYS).flatMap(this::lap).map(Optional::of)
+                : Optional.of(Optional.empty());
         if (direction.isEmpty() || count.isEmpty() || diameter.isEmpty() || layer.isEmpty() || ends.isEmpty()
-                || (f.has("leg") && leg.isEmpty())) {
+                || (f.has("leg") && leg.isEmpty()) || lap.isEmpty()) {
             return Optional.empty();
         }
-        return Optional.of(new Written(f, direction.get(), count.get(), diameter.get(), layer.get(), ends.get(), leg));
+        return Optional.of(new Written(f, direction.get(), count.get(), diameter.get(), layer.get(), ends.get(), leg,
+                lap.get()));
+    }
+
+    /** {@code lap: {percent, length}}: the share of bars lapped at one section (0 < % ≤ 100) and the lap length. */
+    private Optional<Reinforcement.Lap> lap(Fields f) {
+        Optional<Double> percent = f.requiredQuantity("percent", Dimension.NUMBER, Bound.POSITIVE);
+        Optional<Double> length = f.requiredQuantity("length", Dimension.LENGTH, Bound.POSITIVE);
+        return percent.flatMap(pc -> length.map(l -> new Reinforcement.Lap(pc, l)));
     }
 
     private Optional<Integer> layer(Node node, String path) {

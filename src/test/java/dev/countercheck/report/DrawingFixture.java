@@ -51,9 +51,9 @@ final class DrawingFixture {
                 new Point(750, 750), new Point(-750, 750)), 1550, 0, 75, Optional.of(75.0));
         Column column = new Column(ColumnShape.RECTANGULAR, 500, 500, new Point(0, 0), Optional.empty());
         Reinforcement reinforcement = new Reinforcement(new Covers(75, 50, 75),
-                List.of(new BarSet(Direction.X, 10, 20, 1, BarEnds.BENT, Optional.empty()),
-                        new BarSet(Direction.Y, 10, 20, 2, BarEnds.BENT, Optional.empty())),
-                List.of(new BarSet(Direction.X, 4, 12, 1, BarEnds.STRAIGHT, Optional.empty())),
+                List.of(new BarSet(Direction.X, 10, 20, 1, BarEnds.BENT, Optional.empty(), Optional.empty()),
+                        new BarSet(Direction.Y, 10, 20, 2, BarEnds.BENT, Optional.empty(), Optional.empty())),
+                List.of(new BarSet(Direction.X, 4, 12, 1, BarEnds.STRAIGHT, Optional.empty(), Optional.empty())),
                 Optional.empty());
         return new PileCap(id, "Four-pile cap (invented)", new SourceLocation("fixture.yaml", 1, 1), materials,
                 PLAN_MM, PLAN_MM, 1000, PileCap.CastAgainst.BLINDING, PileCap.SelfWeight.ADD, piles, column,

@@ -102,11 +102,11 @@ class SubmissionReaderTest {
         Reinforcement r = cap.reinforcement().orElseThrow();
         assertThat(r.cover()).isEqualTo(new Reinforcement.Covers(100, 50, 75));
         assertThat(r.bottom()).containsExactly(
-                new BarSet(Direction.X, 18, 25, 1, BarEnds.BENT, Optional.of(900.0)),
-                new BarSet(Direction.Y, 24, 20, 2, BarEnds.HOOKED, Optional.empty()));
+                new BarSet(Direction.X, 18, 25, 1, BarEnds.BENT, Optional.of(900.0), Optional.empty()),
+                new BarSet(Direction.Y, 24, 20, 2, BarEnds.HOOKED, Optional.empty(), Optional.empty()));
         assertThat(r.top()).containsExactly(
-                new BarSet(Direction.X, 12, 16, 1, BarEnds.STRAIGHT, Optional.empty()),
-                new BarSet(Direction.Y, 18, 16, 2, BarEnds.STRAIGHT, Optional.empty()));
+                new BarSet(Direction.X, 12, 16, 1, BarEnds.STRAIGHT, Optional.empty(), Optional.empty()),
+                new BarSet(Direction.Y, 18, 16, 2, BarEnds.STRAIGHT, Optional.empty(), Optional.empty()));
         assertThat(r.sides()).contains(new Reinforcement.SideBars(12, 200));
 
         assertThat(cap.tieMethod()).isEqualTo(TieMethod.TRUSS);

@@ -77,6 +77,7 @@ class SubmissionSchemaTest {
         m.put("/$defs/reinforcement/properties/cover", new KeyList(ReinforcementBinder.class, "COVER_KEYS"));
         m.put("/$defs/reinforcement/properties/sides", new KeyList(ReinforcementBinder.class, "SIDE_KEYS"));
         m.put("/$defs/bar-set", new KeyList(ReinforcementBinder.class, "BAR_KEYS"));
+        m.put("/$defs/bar-set/properties/lap", new KeyList(ReinforcementBinder.class, "LAP_KEYS"));
         return m;
     }
 

@@ -83,6 +83,9 @@ final class DetailingScopes {
         bars.put("available_from_pile_centre", Variable.number("mm",
                 "length along the bar from the outermost pile centre to the bar end (shorter side)", 600));
         bars.put("sigma_qp", Variable.number("MPa", "quasi-permanent steel stress (0 without a QP case)", 250));
+        bars.put("has_lap", Variable.bool("the submission declares laps for these bars"));
+        bars.put("lap_percent", Variable.number("-", "share of the bars lapped at one section, % (0 without laps)", 50));
+        bars.put("lap_length", Variable.number("mm", "lap length provided (0 without laps)", 1200));
         Map<String, Variable> starters = new LinkedHashMap<>(cap);
         starters.put("phi", Variable.number("mm", "starter bar diameter", 25));
         starters.put("count", Variable.number("-", "number of starter bars", 8));
@@ -183,6 +186,10 @@ final class DetailingScopes {
         double near = cap.piles().positions().stream().mapToDouble(axis::along).min().orElse(0);
         v.put("available_from_pile_centre", Math.min(end - far, end + near));
         v.put("sigma_qp", sigmaQp(ctx, sets, asRequired));
+        Optional<Reinforcement.Lap> lap = sets.stream().map(BarSet::lap).flatMap(Optional::stream).findFirst();
+        v.put("has_lap", lap.isPresent());
+        v.put("lap_percent", lap.map(Reinforcement.Lap::percentLapped).orElse(0.0));
+        v.put("lap_length", lap.map(Reinforcement.Lap::lengthMm).orElse(0.0));
         return v;
     }
 

@@ -98,8 +98,8 @@ class PileCapProperties {
                 Optional.of(new Column.StarterBars(8, 25)));
         ActionCase uls = new ActionCase("ULS", ActionCase.Kind.ULS, l.n, l.mx, l.my, 0, 0, HERE);
         Reinforcement r = new Reinforcement(new Reinforcement.Covers(75, 50, 75),
-                List.of(new BarSet(Direction.X, l.barsX, l.barPhi, 1, BarEnds.BENT, Optional.empty()),
-                        new BarSet(Direction.Y, l.barsY, l.barPhi, 2, BarEnds.BENT, Optional.empty())),
+                List.of(new BarSet(Direction.X, l.barsX, l.barPhi, 1, BarEnds.BENT, Optional.empty(), Optional.empty()),
+                        new BarSet(Direction.Y, l.barsY, l.barPhi, 2, BarEnds.BENT, Optional.empty(), Optional.empty())),
                 List.of(), Optional.empty());
         return new PileCap("P", "generated", HERE, materials, lx, ly, l.depth, PileCap.CastAgainst.BLINDING,
                 PileCap.SelfWeight.ADD, group, column, List.of(uls), Optional.empty(), Optional.of(r),
@@ -122,7 +122,7 @@ class PileCapProperties {
                 a.myKnm(), -a.mxKnm(), -a.hyKn(), a.hxKn(), a.location())).toList();
         Reinforcement r = c.reinforcement().orElseThrow();
         List<BarSet> bottom = r.bottom().stream().map(b -> new BarSet(b.direction() == Direction.X ? Direction.Y
-                : Direction.X, b.count(), b.diameterMm(), b.layer(), b.ends(), b.legMm())).toList();
+                : Direction.X, b.count(), b.diameterMm(), b.layer(), b.ends(), b.legMm(), b.lap())).toList();
         return new PileCap(c.id(), c.description(), c.location(), c.materials(), c.planYMm(), c.planXMm(),
                 c.depthMm(), c.castAgainst(), c.selfWeight(), group, column, actions, c.punchingBeta(),
                 Optional.of(new Reinforcement(r.cover(), bottom, r.top(), r.sides())), c.tieMethod(), c.claims());
