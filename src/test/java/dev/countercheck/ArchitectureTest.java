@@ -20,6 +20,24 @@ class ArchitectureTest {
             .importPackages("dev.countercheck");
 
     @Test
+    void theFormulaLibraryDependsOnNoOtherPackageOfTheProject() {
+        noClasses().that().resideInAPackage("dev.countercheck.eurocode")
+                .should().dependOnClassesThat(DescribedPredicate.describe("are in another project package",
+                        c -> c.getPackageName().startsWith("dev.countercheck")
+                                && !c.getPackageName().equals("dev.countercheck.eurocode")))
+                .check(CLASSES);
+    }
+
+    @Test
+    void submissionsKnowNoReviewersRulesetsReportsOrCommands() {
+        noClasses().that().resideInAPackage("dev.countercheck.submission..")
+                .should().dependOnClassesThat().resideInAnyPackage("dev.countercheck.review..",
+                        "dev.countercheck.ruleset..", "dev.countercheck.report..", "dev.countercheck.element..",
+                        "dev.countercheck.cli..")
+                .check(CLASSES);
+    }
+
+    @Test
     void reviewAndElementsNeverImportReportOrCli() {
         noClasses().that().resideInAnyPackage("dev.countercheck.review..", "dev.countercheck.element..")
                 .should().dependOnClassesThat().resideInAnyPackage("dev.countercheck.report..", "dev.countercheck.cli..")

@@ -2,10 +2,6 @@ package dev.countercheck.cli;
 
 import picocli.CommandLine.Command;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.concurrent.Callable;
 
 /** {@code example}: prints a commented starter submission. */
@@ -26,10 +22,6 @@ public final class ExampleCommand implements Callable<Integer> {
     }
 
     static String text() {
-        try (InputStream in = ExampleCommand.class.getResourceAsStream(RESOURCE)) {
-            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
+        return BundledText.read(RESOURCE);
     }
 }

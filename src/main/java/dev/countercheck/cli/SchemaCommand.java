@@ -2,10 +2,6 @@ package dev.countercheck.cli;
 
 import picocli.CommandLine.Command;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.concurrent.Callable;
 
 /**
@@ -32,13 +28,6 @@ public final class SchemaCommand implements Callable<Integer> {
     }
 
     static String text() {
-        try (InputStream in = SchemaCommand.class.getResourceAsStream(RESOURCE)) {
-            if (in == null) {
-                throw new IllegalStateException("the build did not package " + RESOURCE);
-            }
-            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
+        return BundledText.read(RESOURCE);
     }
 }

@@ -59,7 +59,7 @@ final class RuleDefinitions {
             boolean interpolate = t.entry("interpolate").map(i -> i.value() instanceof ScalarNode s
                     && "true".equals(s.text())).orElse(false);
             if (interpolate) {
-                rows.keySet().stream().filter(k -> !isNumber(k)).forEach(k -> problems.add(t.location(), path,
+                rows.keySet().stream().filter(k -> !TableDef.isNumber(k)).forEach(k -> problems.add(t.location(), path,
                         "an interpolated table needs numbers as row keys, not '" + k + "'"));
             }
             String several = text(t, "several").orElse("largest");
@@ -200,12 +200,4 @@ final class RuleDefinitions {
         return out;
     }
 
-    private static boolean isNumber(String s) {
-        try {
-            Double.parseDouble(s);
-            return true;
-        } catch (NumberFormatException e) {
-            return false;
-        }
-    }
 }

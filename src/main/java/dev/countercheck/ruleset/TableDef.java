@@ -24,4 +24,14 @@ public record TableDef(String name, String symbol, String unit, String clause, S
 
     /** How a list-valued key combines. */
     public enum Several { LARGEST, LEAST }
+
+    /** True when a row or column key as written is a number ("0.3", "160"). */
+    static boolean isNumber(String key) {
+        try {
+            Double.parseDouble(key);
+            return true;
+        } catch (NumberFormatException e) {
+            return false;
+        }
+    }
 }

@@ -104,7 +104,7 @@ final class TableFunction extends AbstractFunction {
     private int columnIndex(String column) {
         for (int i = 0; i < table.columns().size(); i++) {
             String c = table.columns().get(i);
-            if (c.equals(column) || (isNumber(c) && isNumber(column)
+            if (c.equals(column) || (TableDef.isNumber(c) && TableDef.isNumber(column)
                     && Double.parseDouble(c) == Double.parseDouble(column))) {
                 return i;
             }
@@ -117,14 +117,6 @@ final class TableFunction extends AbstractFunction {
                 + ") gives no value for " + row + ", " + column));
     }
 
-    private static boolean isNumber(String s) {
-        try {
-            Double.parseDouble(s);
-            return true;
-        } catch (NumberFormatException e) {
-            return false;
-        }
-    }
 
     private static String text(EvaluationValue v) {
         return v.isNumberValue() ? v.getNumberValue().stripTrailingZeros().toPlainString() : v.getStringValue();
