@@ -110,4 +110,19 @@ class CommandsTest {
         assertThat(r.err()).contains("en1992-mars").contains("cannot be used")
                 .containsPattern("starter\\.yaml:\\d+:\\d+: "); // located at basis.ruleset in the submission
     }
+
+    @Test
+    void aFolderReviewWritesEveryReportTheIndexAndWithPdfThePdfs(@TempDir Path out) {
+        SampleSubmissionsTest.Run r = run("review", "sample-submissions", "--out", out.toString(), "--date",
+                "2026-12-01", "--pdf");
+        // harbour-lane has critical findings (its comment says so): exit 1.
+        assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.FINDINGS);
+        assertThat(r.err()).contains("[1/2]").contains("[2/2]");
+        for (String base : new String[] {"harbour-lane", "quayside-annex"}) {
+            assertThat(out.resolve(base + ".json")).isNotEmptyFile();
+            assertThat(out.resolve(base + ".html")).isNotEmptyFile();
+            assertThat(out.resolve(base + ".pdf")).isNotEmptyFile();
+        }
+        assertThat(out.resolve("index.html")).content().contains("harbour-lane.html").contains("quayside-annex.html");
+    }
 }
