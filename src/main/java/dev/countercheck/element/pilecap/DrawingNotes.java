@@ -33,7 +33,7 @@ final class DrawingNotes {
                     }
                 }
                 if (Double.isFinite(nearest)) {
-                    double av = Math.max(0, nearest - 0.3 * ctx.cap.piles().diameterMm());
+                    double av = Math.max(0, ShearCheck.shearSpan(ctx, 0, nearest).value());
                     sections.add(new SectionLine(axis.label(), face + sign * av, "shear-" + axis.label()));
                 }
             }

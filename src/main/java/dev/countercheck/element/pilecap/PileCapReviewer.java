@@ -33,8 +33,8 @@ public final class PileCapReviewer {
                     + " to carry no moment.",
             "Ties: strut-and-tie model with one node under the column centre and lever arm z = (z/d)·d; the tie"
                     + " force uses the full pile reactions, including the cap's own weight (conservative).",
-            "One-way shear: the critical section lies 0.2φ inside the face of the nearest pile beyond the"
-                    + " column face (common practice); each pile's reaction is reduced by its own β = av/2d"
+            "One-way shear: the critical section lies a share of the pile diameter (ruleset, common practice"
+                    + " 0.2φ) inside the face of the nearest pile beyond the column face; each pile's reaction is reduced by its own β = av/2d"
                     + " with av ≥ 0.5d (EN 1992-1-1 6.2.2(6)); the full cap width resists.",
             "Punching at the column face uses the full column perimeter (an internal column) and β as stated,"
                     + " else 1.0. At the basic control perimeter only the part of u1 on the cap counts; the"
@@ -46,7 +46,8 @@ public final class PileCapReviewer {
     public static final Set<String> PARAMETERS = Set.of("gamma_c", "gamma_s", "gamma_g", "alpha_cc",
             "alpha_cc_shear", "alpha_ct", "c_rdc_factor", "v_min_coefficient", "punching_vrd_max_factor", "node_k1",
             "node_k2", "node_k3", "k_prime", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
-            "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min");
+            "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
+            "shear_section_inside_pile");
 
     private final ElementAssembler assembler;
 

@@ -87,6 +87,19 @@ final class ShearCheck {
         return b.build();
     }
 
+    /**
+     * The distance av from the column face to the critical section, taken a share of the pile diameter
+     * inside the face of pile {@code pile} (ruleset parameter, common practice 0.2φ), before the 0.5d floor.
+     */
+    static Step shearSpan(PileCapContext ctx, int pile, double faceToCentreMm) {
+        double phi = ctx.cap.piles().diameterMm();
+        double inside = ctx.rules.number("shear_section_inside_pile");
+        double offset = (0.5 - inside) * phi;
+        return Step.of("av,raw,P" + pile, "(face to pile centre) − (0.5 − i)·φ",
+                Num.f(faceToCentreMm) + " − (0.5 − " + Num.f(inside) + ")·" + Num.f(phi), faceToCentreMm - offset,
+                "mm", ctx.clauseOf("shear_section_inside_pile"));
+    }
+
     /** The side {@code sign} (+1 beyond the +face, −1 beyond the −face) of case {@code u}, or null when empty. */
     private static Side side(PileCapContext ctx, Axis axis, int sign, double dMm, UlsCase u) {
         double face = axis.along(ctx.cap.column().position()) + sign * axis.columnHalf(ctx.cap.column());
@@ -103,9 +116,7 @@ final class ShearCheck {
             if (distance <= 0) {
                 continue;
             }
-            Step raw = Step.of("av,raw,P" + (i + 1), "(face to pile centre) − 0.3φ",
-                    Num.f(distance) + " − 0.3·" + Num.f(phi), distance - 0.3 * phi, "mm",
-                    "critical section 0.2φ inside the pile face (common practice)");
+            Step raw = shearSpan(ctx, i + 1, distance);
             Step av = Shear.avFloored(raw.value(), dMm);
             Step beta = Shear.betaShortSpan(av.value(), dMm);
             steps.add(raw);
