@@ -21,4 +21,11 @@ final class BundledText {
             throw new UncheckedIOException(e);
         }
     }
+
+    /** Prints {@code resource} to the command's output; the exit status of a command that only prints. */
+    static int print(picocli.CommandLine.Model.CommandSpec spec, String resource) {
+        spec.commandLine().getOut().print(read(resource));
+        spec.commandLine().getOut().flush();
+        return ExitCodes.OK;
+    }
 }

@@ -22,12 +22,6 @@ public final class SchemaCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        spec.commandLine().getOut().print(text());
-        spec.commandLine().getOut().flush();
-        return ExitCodes.OK;
-    }
-
-    static String text() {
-        return BundledText.read(RESOURCE);
+        return BundledText.print(spec, RESOURCE);
     }
 }

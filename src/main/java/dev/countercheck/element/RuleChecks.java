@@ -15,9 +15,7 @@ import dev.countercheck.ruleset.Variable;
 import dev.countercheck.submission.CheckCatalogue;
 
 import java.util.HashMap;
-import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -87,32 +85,26 @@ public final class RuleChecks {
         return b.build();
     }
 
-    /** The formula with each known number put in for its name. */
+    /** The formula with each known value put in for its name (names of no value stay as written). */
     static String substitute(String formula, Map<String, Object> values) {
-        Matcher m = NAME.matcher(formula);
-        StringBuilder out = new StringBuilder();
-        while (m.find()) {
-            Object v = values.get(m.group(1));
-            String replacement = v instanceof Number n ? Num.f(n.doubleValue())
-                    : v instanceof String s ? "\"" + s + "\"" : v instanceof List<?> l ? l.toString()
-                    : v instanceof Boolean bool ? bool.toString() : m.group(1);
-            m.appendReplacement(out, Matcher.quoteReplacement(replacement));
-        }
-        m.appendTail(out);
-        return out.toString();
+        return NAME.matcher(formula).replaceAll(m -> Matcher.quoteReplacement(
+                show(values.get(m.group(1)), m.group(1), true)));
     }
 
     /** A message with each {name} replaced by its value. */
     static String fill(String template, Map<String, Object> values) {
-        Matcher m = PLACEHOLDER.matcher(template);
-        StringBuilder out = new StringBuilder();
-        while (m.find()) {
-            Object v = values.get(m.group(1));
-            String text = v instanceof Number n ? Num.f(n.doubleValue()) : String.valueOf(Optional.ofNullable(v)
-                    .orElse("{" + m.group(1) + "}"));
-            m.appendReplacement(out, Matcher.quoteReplacement(text));
+        return PLACEHOLDER.matcher(template).replaceAll(m -> Matcher.quoteReplacement(
+                show(values.get(m.group(1)), "{" + m.group(1) + "}", false)));
+    }
+
+    /** A value as a trace or a message shows it: numbers to four figures, text quoted in formulas. */
+    private static String show(Object value, String absent, boolean quoteText) {
+        if (value == null) {
+            return absent;
         }
-        m.appendTail(out);
-        return out.toString();
+        if (value instanceof Number n) {
+            return Num.f(n.doubleValue());
+        }
+        return value instanceof String text && quoteText ? "\"" + text + "\"" : String.valueOf(value);
     }
 }

@@ -19,11 +19,6 @@ import java.util.Set;
 public record RuleVocabulary(Map<String, Map<String, Variable>> scopes, Map<String, List<String>> subjects,
                              Map<String, Map<String, String>> checkUnits, Set<String> requiredParameters) {
 
-    /** An empty vocabulary: only parameters are checked (for tests of the parameter layer). */
-    public static RuleVocabulary parametersOnly(Set<String> requiredParameters) {
-        return new RuleVocabulary(Map.of(), Map.of(), Map.of(), requiredParameters);
-    }
-
     Optional<Map<String, Variable>> scope(String name) {
         return Optional.ofNullable(scopes.get(name));
     }

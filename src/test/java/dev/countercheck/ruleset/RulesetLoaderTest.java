@@ -8,6 +8,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 
 import static org.assertj.core.api.Assertions.assertThat;
@@ -27,7 +28,7 @@ class RulesetLoaderTest {
             """;
 
     private static RulesetLoader loader(Path dir) {
-        return new RulesetLoader(dir, RuleVocabulary.parametersOnly(Set.of("gamma_c", "gamma_s")));
+        return new RulesetLoader(dir, new RuleVocabulary(Map.of(), Map.of(), Map.of(), Set.of("gamma_c", "gamma_s")));
     }
 
     private static List<InputError> errors(Path dir, String reference) {

@@ -37,7 +37,10 @@ final class DetailingScopes {
     private DetailingScopes() {
     }
 
-    static Map<String, Map<String, Variable>> scopes() {
+    /** The variables of each scope, with units, descriptions and example values. */
+    static final Map<String, Map<String, Variable>> SCOPES = scopes();
+
+    private static Map<String, Map<String, Variable>> scopes() {
         Map<String, Variable> cap = new LinkedHashMap<>();
         cap.put("h", Variable.number("mm", "overall depth h", 1200));
         cap.put("plan_x", Variable.number("mm", "plan length along x", 2700));

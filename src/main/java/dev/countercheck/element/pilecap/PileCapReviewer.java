@@ -14,6 +14,7 @@ import dev.countercheck.submission.PileCap;
 
 import java.util.ArrayList;
 import java.util.EnumMap;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -64,7 +65,7 @@ public final class PileCapReviewer {
                     c.quantities().forEach(x -> q.put(x.name(), x.unit()));
                     units.put(c.id(), q);
                 });
-        return new RuleVocabulary(DetailingScopes.scopes(), DetailingScopes.subjects(), units, requiredParameters);
+        return new RuleVocabulary(DetailingScopes.SCOPES, DetailingScopes.subjects(), units, requiredParameters);
     }
 
     public ElementReview review(PileCap cap, Ruleset rules) {
@@ -77,9 +78,10 @@ public final class PileCapReviewer {
             Value v = done.get("tie-" + axis.label()).result().values().get("as_required");
             asRequired.put(axis, v == null ? 0.0 : v.value());
         }
+        Map<String, DetailingScopes.Values> variables = new HashMap<>();
         List<CheckOutcome> outcomes = new ArrayList<>();
         for (String id : CheckCatalogue.checksOf(PileCap.TYPE).keySet()) {
-            outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired));
+            outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired, variables));
         }
         return assembler.assemble(cap.id(), cap.type(), cap.description(), outcomes, cap.claims(), List.of(),
                 Optional.of(DrawingNotes.of(ctx)));
@@ -112,17 +114,23 @@ public final class PileCapReviewer {
         return map;
     }
 
-    /** A check the ruleset defines, run on the subject its id names. */
-    private static CheckOutcome byRule(String id, PileCapContext ctx, Map<Axis, Double> asRequired) {
+    /**
+     * A check the ruleset defines, run on the subject its id names.
+     *
+     * @param variables the scope variables formed so far for this cap, by scope and subject (formed once each)
+     */
+    private static CheckOutcome byRule(String id, PileCapContext ctx, Map<Axis, Double> asRequired,
+                                       Map<String, DetailingScopes.Values> variables) {
         for (CheckDef def : ctx.rules.checks().values()) {
             for (String subject : DetailingScopes.subjects().getOrDefault(def.scope(), List.of(""))) {
                 if (def.idFor(subject).equals(id)) {
-                    DetailingScopes.Values v = DetailingScopes.values(ctx, def.scope(), subject, asRequired);
+                    DetailingScopes.Values v = variables.computeIfAbsent(def.scope() + "/" + subject,
+                            k -> DetailingScopes.values(ctx, def.scope(), subject, asRequired));
                     if (v.missing().isPresent()) {
                         return Checks.builder(id).notChecked(v.missing().get()).build();
                     }
                     return RuleChecks.run(PileCap.TYPE, def, subject, ctx.rules,
-                            DetailingScopes.scopes().get(def.scope()), v.values());
+                            DetailingScopes.SCOPES.get(def.scope()), v.values());
                 }
             }
         }
