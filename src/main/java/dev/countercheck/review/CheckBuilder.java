@@ -11,6 +11,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalInt;
+import java.util.stream.IntStream;
 import java.util.OptionalDouble;
 
 /**
@@ -52,10 +54,12 @@ public final class CheckBuilder {
             throw new IllegalArgumentException(spec.id() + "." + name + " is in " + q.unit() + ", step "
                     + step.symbol() + " is in " + step.unit());
         }
-        if (trace.stream().noneMatch(s -> s == step)) {
-            trace(step);
-        }
-        values.put(name, new Value(step.value(), q.unit()));
+        int index = IntStream.range(0, trace.size()).filter(i -> trace.get(i) == step).findFirst()
+                .orElseGet(() -> {
+                    trace(step);
+                    return trace.size() - 1;
+                });
+        values.put(name, new Value(step.value(), q.unit(), OptionalInt.of(index)));
         return step;
     }
 
