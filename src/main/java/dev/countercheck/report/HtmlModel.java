@@ -5,6 +5,7 @@ import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.CheckStatus;
 import dev.countercheck.review.ClaimComparison;
 import dev.countercheck.review.Drawing;
+import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
 import dev.countercheck.review.Review;
@@ -148,10 +149,16 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 element.verdict().label(), checks, findings, element.cautions().size(), drawings);
     }
 
+    /** The element's drawing as its kind renders it; the report never asks which kind it is. */
     private static DrawingView drawing(String anchor, ElementReview element, Drawing drawing) {
-        DrawingMarks marks = DrawingMarks.of(element, drawing);
-        return new DrawingView(PlanDrawing.svg(anchor, drawing, marks), SectionDrawing.svg(anchor, drawing, marks),
-                DrawingLegend.rows(anchor, drawing, !marks.all().isEmpty()), DrawingLegend.marks(marks));
+        return drawing.accept(new Drawing.Visitor<>() {
+            @Override
+            public DrawingView pileCap(PileCapDrawing cap) {
+                DrawingMarks marks = DrawingMarks.of(element, cap);
+                return new DrawingView(PlanDrawing.svg(anchor, cap, marks), SectionDrawing.svg(anchor, cap, marks),
+                        DrawingLegend.rows(anchor, cap, !marks.all().isEmpty()), DrawingLegend.marks(marks));
+            }
+        });
     }
 
     private static FindingRow findingRow(Finding finding, String elementId, String elementAnchor,

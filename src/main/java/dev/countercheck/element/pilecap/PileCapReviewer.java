@@ -77,7 +77,7 @@ final class PileCapReviewer {
             outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired, variables));
         }
         return assembler.assemble(cap.id(), CATALOGUE, cap.description(), outcomes, cap.claims(), List.of(),
-                Optional.of(DrawingNotes.of(ctx)));
+                Optional.of(DrawingNotes.of(ctx, outcomes)));
     }
 
     /** The checks computed in Java, in catalogue order; the others come from the ruleset. */
