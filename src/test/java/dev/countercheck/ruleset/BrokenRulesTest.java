@@ -3,6 +3,7 @@ package dev.countercheck.ruleset;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.input.InputError;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -39,6 +40,8 @@ class BrokenRulesTest {
             unknown scope      |  max-steel: {applies_to: [pile-cap], scope: slab, derived: {}, values: [], requirements: []}                                                                                                | 6 | unknown scope
             wrong unit         |  max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'as_x', unit: mm, clause: x}}, values: [as_max], requirements: []}                                          | 6 | reported in mm2
             bad severity       |  max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: grave, message: m, clause: x}]}                                    | 6 | is not one of critical
+            unknown type       |  max-steel: {applies_to: [pile-kap], scope: section, derived: {}, values: [], requirements: []}                                                                                             | 6 | unknown element type
+            no type            |  max-steel: {scope: section, derived: {}, values: [], requirements: []}                                                                                                                   | 6 | is missing: every check names the element types it applies to
             unknown placeholder|  max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: major, message: 'see {nothing}', clause: x}]}                     | 6 | {nothing}
             """)
     void aBrokenRuleIsRefusedWithItsLocation(String name, String check, int line, String message, @TempDir Path dir)
@@ -52,5 +55,26 @@ class BrokenRulesTest {
             assertThat(e.location().column()).isPositive();
             assertThat(e.message()).contains(message.replace("'", ""));
         });
+    }
+
+    @Test
+    void twoChecksCannotDefineTheSameCheckOfOneElementType(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("broken.yaml"), HEAD
+                + "  min-steel-x: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: []}\n");
+        List<InputError> errors = catchThrowableOfType(RulesetException.class,
+                () -> new RulesetLoader(dir, ProjectReviewer.RULE_VOCABULARY).load("broken")).errors();
+        assertThat(errors).anySatisfy(e -> assertThat(e.message())
+                .contains("'min-steel-x' of pile-cap is already defined by the check min-steel-{dir}"));
+    }
+
+    @Test
+    void rulesAreFoundByElementTypeAndCheckId() throws RulesetException {
+        Ruleset rules = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY).load("en1992-recommended");
+        assertThat(rules.rule("pile-cap", "anchorage-y")).hasValueSatisfying(r -> {
+            assertThat(r.def().id()).isEqualTo("anchorage-{dir}");
+            assertThat(r.subject()).isEqualTo("y");
+        });
+        assertThat(rules.rule("pile-cap", "tie-x")).as("computed in Java, not by a rule").isEmpty();
+        assertThat(rules.rule("pad-footing", "anchorage-x")).as("no such element type").isEmpty();
     }
 }
