@@ -20,7 +20,7 @@ import java.util.Optional;
 final class RuleDefinitions {
 
     private static final List<String> TABLE_KEYS = List.of("symbol", "unit", "clause", "note", "interpolate",
-            "several", "columns", "rows");
+            "several", "columns", "rows", "beyond");
     private static final List<String> CHECK_KEYS = List.of("applies_to", "scope", "applies_when", "not_applicable", "derived",
             "values", "requirements", "cautions");
     private static final List<String> CAUTION_KEYS = List.of("when", "text");
@@ -72,8 +72,19 @@ final class RuleDefinitions {
             }
             into.put(e.key(), new TableDef(e.key(), text(t, "symbol").orElse(e.key()), required(t, "unit", path),
                     required(t, "clause", path), text(t, "note").orElse(""), origin, interpolate,
-                    "least".equals(several) ? TableDef.Several.LEAST : TableDef.Several.LARGEST, columns, rows));
+                    "least".equals(several) ? TableDef.Several.LEAST : TableDef.Several.LARGEST, columns, rows,
+                    beyond(t, path)));
         }
+    }
+
+    /** The optional {@code beyond} value of a table: a number. */
+    private Optional<Double> beyond(MapNode t, String path) {
+        Optional<String> value = text(t, "beyond");
+        if (value.isPresent() && !TableDef.isNumber(value.get())) {
+            problems.add(t.entry("beyond").get().value().location(), path + ".beyond", "expected a number");
+            return Optional.empty();
+        }
+        return value.map(Double::parseDouble);
     }
 
     void readChecks(Node node, Map<String, CheckDef> into) {

@@ -24,8 +24,14 @@ final class TieCheck {
     private TieCheck() {
     }
 
-    /** The governing side of one case: the sum Σ P_i·l_i (kN·mm) and its terms for the trace. */
-    private record Side(double sumKnMm, String terms, String caseName) {
+    /** The governing side of one case: the sum Σ P_i·l_i (kN·mm), its terms for the trace, the case and its N. */
+    private record Side(double sumKnMm, String terms, String caseName, double nKn) {
+    }
+
+    /** N (kN) of the ULS case that governs this direction's tie (crack control scales σs by it). */
+    static double governingAxialForce(PileCapContext ctx, Axis axis) {
+        boolean bending = ctx.cap.tieMethod() == TieMethod.BENDING;
+        return governing(ctx, axis, bending ? axis.columnHalf(ctx.cap.column()) : 0.0).nKn;
     }
 
     static CheckOutcome run(PileCapContext ctx, Axis axis) {
@@ -83,7 +89,8 @@ final class TieCheck {
     private static Side governing(PileCapContext ctx, Axis axis, double offset) {
         double centre = axis.along(ctx.cap.column().position());
         List<Point> piles = ctx.cap.piles().positions();
-        Side best = new Side(0, "no pile beyond the column", ctx.uls.get(0).action().name());
+        Side best = new Side(0, "no pile beyond the column", ctx.uls.get(0).action().name(),
+                ctx.uls.get(0).action().nKn());
         for (UlsCase u : ctx.uls) {
             double[] p = u.withSelfWeight().reactionsKn();
             for (int sign : new int[] {1, -1}) {
@@ -97,7 +104,7 @@ final class TieCheck {
                     }
                 }
                 if (sum > best.sumKnMm) {
-                    best = new Side(sum, String.join(" + ", terms), u.action().name());
+                    best = new Side(sum, String.join(" + ", terms), u.action().name(), u.action().nKn());
                 }
             }
         }
