@@ -30,8 +30,14 @@ import static org.assertj.core.api.Assertions.withinPercentage;
  * <li>shear-y: av = 443.75 (floored), β = 0.25, VEd = 625 kN; ρl = 0.0027656, k = 1.4747,
  *     vRd,c = 0.35820 MPa; VRd,c = 0.35820·2400·887.5 = 762.96 kN.</li>
  * <li>punching-face: u0 = 4·500 = 2000 mm; vRd,max·u0·d = 0.4·0.528·20·2000·900 = 7603.2 kN; VEd = 5000 kN.</li>
- * <li>punching-perimeter: each pile centre is √(500² + 500²) = 707 mm from the column corner, inside
- *     2d = 1800 mm: not applicable.</li>
+ * <li>punching-perimeter (perimeters at a = 18, 36, ... 1800 mm, steps of d/50): each pile head's nearest
+ *     point is √(500² + 500²) − 250 = 457.1 mm from the column corner. ρl = √(0.0026898·0.0027656) =
+ *     0.0027273; k = 1 + √(200/900) = 1.4714; vRd,c = 0.12·1.4714·(100·0.0027273·30)^(1/3) = 0.35580 MPa
+ *     &gt; vmin = 0.34216. At a = 486: u = 2000 + 2π·486 = 5053.6 mm; each head's lens inside the corner
+ *     arc (circles r = 250 and R = 486, centres 707.1 apart) is 3729.9 mm², share 3729.9/(π·250²) =
+ *     0.018996; VEd,red = 5000 − 4·1250·0.018996 = 4905.0 kN; vRd = 0.35580·1800/486 = 1.3178 MPa;
+ *     VRd = 1.3178·5053.6·900 = 5993.5 kN, ratio 0.8184. At a = 468 (share 0.0043934) the ratio is
+ *     4978.0/6084.8 = 0.8181, at a = 504 4803.6/5908.8 = 0.8129: a = 486 governs.</li>
  * <li>node-column: (5000·1000 − 1963.5·434.78)/250 000 = 16.585 MPa ≤ 1.0·0.88·20 = 17.6 MPa.</li>
  * <li>node-pile: 1250·1000/(π·250²) = 6.366 MPa ≤ 0.75·0.88·20 = 13.2 MPa (CTT);
  *     strut angle atan(900/1060.7) = 40.31°.</li>
@@ -73,10 +79,14 @@ class FourPileCapHandCalculationTest {
     }
 
     @Test
-    void punchingAtTheFaceAndNoPerimeterCheckWhenAllPilesAreWithinTwoD() {
+    void punchingAtTheFaceAndAtTheGoverningPerimeterWithinTwoD() {
         assertThat(value(CAP, "punching-face", "u0")).isCloseTo(2000, withinPercentage(0.01)); // hand calculation
         assertThat(value(CAP, "punching-face", "vrd_max")).isCloseTo(7603.2, withinPercentage(0.05)); // hand calc
-        assertThat(check(CAP, "punching-perimeter").status()).isEqualTo(CheckStatus.NOT_APPLICABLE);
+        assertThat(value(CAP, "punching-perimeter", "a")).isCloseTo(486, withinPercentage(0.01)); // hand calculation
+        assertThat(value(CAP, "punching-perimeter", "u")).isCloseTo(5053.6, withinPercentage(0.05)); // hand calc
+        assertThat(value(CAP, "punching-perimeter", "ved")).isCloseTo(4905.0, withinPercentage(0.05)); // hand calc
+        assertThat(value(CAP, "punching-perimeter", "vrd")).isCloseTo(5993.5, withinPercentage(0.05)); // hand calc
+        assertThat(check(CAP, "punching-perimeter").status()).isEqualTo(CheckStatus.PASS);
     }
 
     @Test

@@ -145,8 +145,8 @@ class PileCapProperties {
             assertThat(t.status()).as(c.id()).isEqualTo(c.status());
             for (Map.Entry<String, Value> v : c.values().entrySet()) {
                 double expected = v.getValue().value();
-                // The perimeter on the cap is found by walking 4000 points, which turn with the cap
-                // only approximately: allow 0.5 % there, 1e-6 elsewhere.
+                // The pile-head shares inside a control perimeter are integrated by strips, which turn
+                // with the cap only to rounding: allow 0.5 % there, 1e-6 elsewhere.
                 double tolerance = c.id().equals("punching-perimeter") ? 0.005 : 1e-6;
                 assertThat(t.values().get(v.getKey()).value()).as(c.id() + "." + v.getKey())
                         .isCloseTo(expected, within(tolerance * Math.max(1, Math.abs(expected))));
