@@ -58,7 +58,7 @@ final class DrawingFixture {
                 Optional.empty());
         return new PileCap(id, "Four-pile cap (invented)", new SourceLocation("fixture.yaml", 1, 1), materials,
                 PLAN_MM, PLAN_MM, 1000, PileCap.CastAgainst.BLINDING, PileCap.SelfWeight.ADD, piles, column,
-                List.of(), Optional.empty(), Optional.of(reinforcement), PileCap.TieMethod.TRUSS, List.of());
+                List.of(), Optional.of(reinforcement), PileCap.TieMethod.TRUSS, List.of());
     }
 
     static PileCapDrawing drawing(String id) {

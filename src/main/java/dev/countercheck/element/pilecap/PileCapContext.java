@@ -107,10 +107,6 @@ final class PileCapContext {
         return uls.stream().mapToDouble(u -> u.action().nKn()).max().orElse(0);
     }
 
-    boolean anyMoment() {
-        return uls.stream().anyMatch(u -> u.action().mxKnm() != 0 || u.action().myKnm() != 0
-                || u.action().hxKn() != 0 || u.action().hyKn() != 0);
-    }
 
     String clauseOf(String parameter) {
         return rules.parameter(parameter).clause();

@@ -38,8 +38,9 @@ final class PileCapReviewer {
             "One-way shear: the critical section lies a share of the pile diameter (ruleset, common practice"
                     + " 0.2φ) inside the face of the nearest pile beyond the column face; each pile's reaction is reduced by its own β = av/2d"
                     + " with av ≥ 0.5d (EN 1992-1-1 6.2.2(6)); the full cap width resists.",
-            "Punching at the column face uses the full column perimeter (an internal column) and β as stated,"
-                    + " else 1.0. Control perimeters are searched from d/50 to 2d from the column face (step from"
+            "Punching at the column face uses the full column perimeter (an internal column); β comes from the"
+                    + " column moments Mx, My (EN 1992-1-1 Exp. (6.39), (6.42)), with u and W of the full perimeter"
+                    + " even where a free edge cuts it. Control perimeters are searched from d/50 to 2d from the column face (step from"
                     + " the ruleset); only the part of a perimeter on the cap counts; a pile relieves the load by"
                     + " the share of its head area inside the perimeter; the reactions there are those of the"
                     + " column actions alone.",

@@ -18,6 +18,9 @@ import java.util.List;
 /** {@code punching-face} (6.4.5(3)) and {@code punching-perimeter} (6.4.4). */
 final class PunchingChecks {
 
+    /** A reduced load below this share of N is the rounding residue of piles wholly inside the perimeter. */
+    private static final double LOAD_RESIDUE = 1e-9;
+
     private PunchingChecks() {
     }
 
@@ -28,16 +31,27 @@ final class PunchingChecks {
         }
         Step d = b.trace(ctx.section.get().dMean());
         Column c = ctx.cap.column();
-        Step beta = b.trace(ctx.cap.punchingBeta()
-                .map(v -> Step.of("β", "stated by the submission", Num.f(v), v, "-", "EN 1992-1-1 6.4.3(3)"))
-                .orElse(Step.of("β", "no moment transfer assumed", "1.0", 1.0, "-", "EN 1992-1-1 6.4.3(3)")));
-        if (ctx.cap.punchingBeta().isEmpty() && ctx.anyMoment()) {
-            b.caution("Moments act on the column but no punching β was given: β = 1.0 was used at the column face,"
-                    + " which understates vEd (EN 1992-1-1 6.4.3(3)).");
+        Step beta = null;
+        double worst = Double.NEGATIVE_INFINITY;
+        String worstCase = "";
+        for (UlsCase u : ctx.uls) {
+            double n = u.action().nKn();
+            if (n <= 0) {
+                continue;
+            }
+            Step caseBeta = beta(c, 2 * d.value(), n, u.action().mxKnm(), u.action().myKnm());
+            if (caseBeta.value() * n > worst) {
+                worst = caseBeta.value() * n;
+                beta = caseBeta;
+                worstCase = u.action().name();
+            }
         }
-        double nMax = ctx.maxColumnN();
-        Step ved = b.value("ved", Step.of("VEd", "β·N,max", Num.f(beta.value()) + "·" + Num.f(nMax),
-                beta.value() * nMax, "kN", "EN 1992-1-1 6.4.3(3)"));
+        if (beta == null) {
+            return b.notApplicable("no ULS case presses the column onto the cap").build();
+        }
+        b.value("beta", beta);
+        Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
+                + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
         Step u0 = b.value("u0", c.shape() == ColumnShape.CIRCULAR
                 ? Punching.u0Circular(c.cxMm()) : Punching.u0Rectangular(c.cxMm(), c.cyMm()));
         Step nu = b.trace(Shear.nu(ctx.fck.value()));
@@ -50,11 +64,33 @@ final class PunchingChecks {
         return b.build();
     }
 
+    /**
+     * β for the column's moments at the perimeter at distance a (EN 1992-1-1 6.4.3(3), Exp. (6.39) with
+     * W of Exp. (6.41) and k of Table 6.1, summed over both axes; 6.4.4(2), Exp. (6.51) within 2d); a
+     * circular column by Exp. (6.42) with the resultant eccentricity. At the face a = 2d (u1, W1).
+     *
+     * @param vEdKn VEd (VEd,red at a perimeter within 2d), kN, &gt; 0
+     */
+    static Step beta(Column c, double aMm, double vEdKn, double mxKnm, double myKnm) {
+        if (c.shape() == ColumnShape.CIRCULAR) {
+            return Punching.betaCircular(Math.hypot(mxKnm, myKnm) * 1000 / vEdKn, c.cxMm(), aMm);
+        }
+        Step u = Punching.u1Rectangular(c.cxMm(), c.cyMm(), aMm);
+        // My turns about y: the eccentricity lies along x, c1 = cx; Mx: along y, c1 = cy.
+        Step alongX = Punching.betaEccentric(Punching.kEccentricity(c.cxMm(), c.cyMm()).value(), myKnm, vEdKn,
+                u.value(), Punching.w1Rectangular(c.cxMm(), c.cyMm(), aMm).value());
+        Step alongY = Punching.betaEccentric(Punching.kEccentricity(c.cyMm(), c.cxMm()).value(), mxKnm, vEdKn,
+                u.value(), Punching.w1Rectangular(c.cyMm(), c.cxMm(), aMm).value());
+        return Step.of("β", "1 + kx·(|My|/VEd)·(u/Wx) + ky·(|Mx|/VEd)·(u/Wy)", alongX.substituted() + " + "
+                + alongY.substituted().substring(4), alongX.value() + alongY.value() - 1, "-",
+                "EN 1992-1-1 6.4.3(3), Exp. (6.39), (6.41), Table 6.1; 6.4.4(2), Exp. (6.51)");
+    }
+
     /** One control perimeter at distance a: its length on the cap, the reduced load and the resistance. */
-    private record Perimeter(double aMm, double uMm, double[] shares, double vEdRedKn, String caseName,
+    private record Perimeter(double aMm, double uMm, double[] shares, double vEdRedKn, Step beta, String caseName,
                              double vRdMpa, double vRdKn) {
         double utilisation() {
-            return vEdRedKn / vRdKn;
+            return beta.value() * vEdRedKn / vRdKn;
         }
     }
 
@@ -106,13 +142,16 @@ final class PunchingChecks {
                 relief.add("P" + (i + 1) + "·" + Num.f(g.shares[i]));
             }
         }
-        Step ved = b.value("ved", Step.of("VEd,red", "N − Σ P_i·(share of the pile head inside u)",
+        Step reduced = b.trace(Step.of("VEd,red", "N − Σ P_i·(share of the pile head inside u)",
                 g.caseName + (relief.isEmpty() ? ", no pile inside" : ", inside: " + String.join(" + ", relief)),
                 g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2)"));
+        Step beta = b.trace(g.beta);
+        Step ved = b.value("ved", Step.of("β·VEd,red", "β·VEd,red", Num.f(beta.value()) + "·"
+                + Num.f(reduced.value()), beta.value() * reduced.value(), "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.51)"));
         Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), g.aMm));
         Step vrd = b.value("vrd", Step.of("VRd", "vRd·u·d", Num.f(vRd.value()) + "·" + Num.f(g.uMm) + "·"
                 + Num.f(d.value()) + "/1000", g.vRdKn, "kN", "EN 1992-1-1 6.4.4(2)"));
-        b.require(ved.value(), vrd.value(), Severity.CRITICAL, "VEd,red = " + Num.f(ved.value()) + " kN at the"
+        b.require(ved.value(), vrd.value(), Severity.CRITICAL, "β·VEd,red = " + Num.f(ved.value()) + " kN at the"
                 + " control perimeter a = " + Num.f(g.aMm) + " mm from the column face exceeds VRd = "
                 + Num.f(vrd.value()) + " kN.");
         return b.build();
@@ -127,19 +166,22 @@ final class PunchingChecks {
         for (int i = 0; i < piles.size(); i++) {
             shares[i] = ControlPerimeter.headShareInside(column, a, piles.get(i), ctx.cap.piles().diameterMm());
         }
-        double worst = Double.NEGATIVE_INFINITY;
-        String worstCase = "";
+        Perimeter worst = new Perimeter(a, u, shares, 0, Step.of("β", "no load", "1", 1, "-", ""), "", vRd.value(),
+                vRd.value() * u * d / 1000);
         for (UlsCase c : ctx.uls) {
             double[] p = c.columnOnly().reactionsKn();
             double v = c.action().nKn();
             for (int i = 0; i < p.length; i++) {
                 v -= p[i] * shares[i];
             }
-            if (v > worst) {
-                worst = v;
-                worstCase = c.action().name();
+            if (v > LOAD_RESIDUE * c.action().nKn()) {
+                Perimeter here = new Perimeter(a, u, shares, v, beta(column, a, v, c.action().mxKnm(),
+                        c.action().myKnm()), c.action().name(), vRd.value(), vRd.value() * u * d / 1000);
+                if (here.utilisation() > worst.utilisation()) {
+                    worst = here;
+                }
             }
         }
-        return new Perimeter(a, u, shares, worst, worstCase, vRd.value(), vRd.value() * u * d / 1000);
+        return worst;
     }
 }

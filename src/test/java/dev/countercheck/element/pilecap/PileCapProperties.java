@@ -102,7 +102,7 @@ class PileCapProperties {
                         new BarSet(Direction.Y, l.barsY, l.barPhi, 2, BarEnds.BENT, Optional.empty(), Optional.empty())),
                 List.of(), Optional.empty());
         return new PileCap("P", "generated", HERE, materials, lx, ly, l.depth, PileCap.CastAgainst.BLINDING,
-                PileCap.SelfWeight.ADD, group, column, List.of(uls), Optional.empty(), Optional.of(r),
+                PileCap.SelfWeight.ADD, group, column, List.of(uls), Optional.of(r),
                 PileCap.TieMethod.TRUSS, List.of());
     }
 
@@ -124,7 +124,7 @@ class PileCapProperties {
         List<BarSet> bottom = r.bottom().stream().map(b -> new BarSet(b.direction() == Direction.X ? Direction.Y
                 : Direction.X, b.count(), b.diameterMm(), b.layer(), b.ends(), b.legMm(), b.lap())).toList();
         return new PileCap(c.id(), c.description(), c.location(), c.materials(), c.planYMm(), c.planXMm(),
-                c.depthMm(), c.castAgainst(), c.selfWeight(), group, column, actions, c.punchingBeta(),
+                c.depthMm(), c.castAgainst(), c.selfWeight(), group, column, actions,
                 Optional.of(new Reinforcement(r.cover(), bottom, r.top(), r.sides())), c.tieMethod(), c.claims());
     }
 
