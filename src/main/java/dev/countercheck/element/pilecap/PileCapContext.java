@@ -107,7 +107,6 @@ final class PileCapContext {
         return uls.stream().mapToDouble(u -> u.action().nKn()).max().orElse(0);
     }
 
-
     String clauseOf(String parameter) {
         return rules.parameter(parameter).clause();
     }

@@ -54,7 +54,9 @@ final class TieCheck {
                     side.terms + " (" + side.caseName + ")", side.sumKnMm / 1000, "kNm", "EN 1992-1-1 6.1"));
             double width = axis.capWidth(ctx.cap);
             Step k = b.trace(Bending.kFactor(moment.value(), width, d.value(), ctx.fck.value()));
-            Step kPrime = b.trace(ctx.rules.parameter("k_prime").asStep());
+            Step kPrime = b.trace(Bending.kPrime(ctx.rules.number("alpha_cc"), ctx.rules.number("gamma_c"),
+                    b.trace(ctx.rules.parameter("stress_block_lambda").asStep()).value(),
+                    b.trace(ctx.rules.parameter("xi_limit").asStep()).value()));
             if (k.value() > kPrime.value()) {
                 b.fail(Severity.CRITICAL, "K = " + Num.f(k.value()) + " exceeds K' = " + Num.f(kPrime.value())
                         + ": the section needs compression steel or more depth.");
