@@ -31,7 +31,7 @@ final class TieCheck {
     /** N (kN) of the ULS case that governs this direction's tie (crack control scales σs by it). */
     static double governingAxialForce(PileCapContext ctx, Axis axis) {
         boolean bending = ctx.cap.tieMethod() == TieMethod.BENDING;
-        return governing(ctx, axis, bending ? axis.columnHalf(ctx.cap.column()) : 0.0).nKn;
+        return governing(ctx, axis, bending ? ctx.columnHalf(axis) : 0.0).nKn;
     }
 
     static CheckOutcome run(PileCapContext ctx, Axis axis) {
@@ -43,11 +43,12 @@ final class TieCheck {
         Step d = b.trace(section.d(axis.bars()));
         b.trace(ctx.fyd);
         boolean bending = ctx.cap.tieMethod() == TieMethod.BENDING;
-        double offset = bending ? axis.columnHalf(ctx.cap.column()) : 0.0;
+        double offset = bending ? ctx.columnHalf(axis) : 0.0;
         Side side = governing(ctx, axis, offset);
         Step force;
         Step required;
         if (bending) {
+            ctx.equivalentSquare().ifPresent(b::trace);
             b.caution("Ties of " + ctx.cap.id() + " were designed by the bending method (as declared): moments at the"
                     + " column face, rectangular stress block (EN 1992-1-1 3.1.7(3)).");
             Step moment = b.value("moment", Step.of("M", "Σ P_i·(distance beyond the column face)",

@@ -60,5 +60,9 @@ class TwoAndThreePileCapHandCalculationTest {
         assertThat(value(cap, "tie-y", "force")).isCloseTo(1177.4, withinPercentage(0.05)); // hand calculation
         assertThat(value(cap, "tie-y", "as_required")).isCloseTo(2707.9, withinPercentage(0.05)); // hand calculation
         assertThat(value(cap, "punching-face", "u0")).isCloseTo(Math.PI * 450, withinPercentage(0.01)); // π·D
+        // One-way shear takes the circular column as a square of side 0.8·450 = 360 mm (common practice):
+        // the −y face at −195 − 180 = −375, the piles at −585: 210 − 0.3·450 = 75 < 0.5·795, so av = 397.5 mm.
+        assertThat(check(cap, "shear-y").trace()).anyMatch(t -> t.symbol().equals("c,eq") && t.value() == 360);
+        assertThat(value(cap, "shear-y", "av")).isCloseTo(397.5, withinPercentage(0.01)); // hand calculation
     }
 }
