@@ -32,8 +32,8 @@ import java.util.concurrent.Callable;
         description = "Recompute every check of each submission and write DIR/<name>.json and DIR/<name>.html;"
                 + " for several submissions or a folder, also DIR/index.html.",
         exitCodeListHeading = "%nExit status:%n",
-        exitCodeList = {"0:nothing at or above the --fail-on severity was found",
-                "1:something at or above the --fail-on severity was found",
+        exitCodeList = {"0:nothing at or above the --fail-on severity was found and every element was reviewed",
+                "1:something at or above the --fail-on severity was found, or an element is incomplete",
                 "2:unusable input or wrong usage"})
 public final class ReviewCommand implements Callable<Integer> {
 
@@ -128,9 +128,7 @@ public final class ReviewCommand implements Callable<Integer> {
             }
             index.reviewed(review, json, html, pdfFile);
             spec.commandLine().getOut().println(SummaryLine.of(file, review, json, html));
-            boolean found = review.elements().stream().flatMap(e -> e.findings().stream())
-                    .anyMatch(f -> f.severity().atLeast(threshold));
-            return found ? ExitCodes.FINDINGS : ExitCodes.OK;
+            return review.passesGate(threshold) ? ExitCodes.OK : ExitCodes.FINDINGS;
         } catch (SubmissionException e) {
             e.errors().forEach(err::println);
             err.println(file + ": not reviewed (" + e.errors().size() + " input error"

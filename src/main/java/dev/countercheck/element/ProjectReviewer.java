@@ -5,8 +5,10 @@ import dev.countercheck.review.ClaimComparer;
 import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
+import dev.countercheck.review.FindingKind;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
+import dev.countercheck.review.SeverityPolicy;
 import dev.countercheck.review.Verdict;
 import dev.countercheck.ruleset.RuleVocabulary;
 import dev.countercheck.ruleset.Ruleset;
@@ -16,11 +18,13 @@ import dev.countercheck.submission.PileCap;
 import dev.countercheck.submission.Submission;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.stream.Collectors;
 
 /** Reviews a whole submission: each element by the reviewer of its type, then the summary. */
 public final class ProjectReviewer {
@@ -34,7 +38,8 @@ public final class ProjectReviewer {
             Set.of("claim_tolerance", "cover_deviation"));
 
     /** What a ruleset's rules may use and define, and the parameters the engine reads. */
-    public static final RuleVocabulary RULE_VOCABULARY = PileCapReviewer.vocabulary(REQUIRED_PARAMETERS);
+    public static final RuleVocabulary RULE_VOCABULARY = PileCapReviewer.vocabulary(REQUIRED_PARAMETERS,
+            Arrays.stream(FindingKind.values()).map(FindingKind::key).collect(Collectors.toUnmodifiableSet()));
 
     private final Review.ToolInfo tool;
 
@@ -43,14 +48,15 @@ public final class ProjectReviewer {
     }
 
     public Review review(Submission submission, Ruleset rules, String reviewDate) {
-        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance")));
+        SeverityPolicy severities = new SeverityPolicy(rules::severity);
+        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance")), severities);
         PileCapReviewer pileCaps = new PileCapReviewer(assembler);
         List<ElementReview> elements = new ArrayList<>();
         for (ElementInput e : submission.elements()) {
             if (e instanceof PileCap cap) {
                 elements.add(pileCaps.review(cap, rules));
             } else if (e instanceof IncompleteElement inc) {
-                elements.add(incomplete(inc));
+                elements.add(incomplete(inc, severities));
             }
         }
         List<String> assumptions = new ArrayList<>();
@@ -68,8 +74,9 @@ public final class ProjectReviewer {
                 List.copyOf(assumptions));
     }
 
-    private static ElementReview incomplete(IncompleteElement e) {
-        Finding f = new Finding(e.id() + "/input/1", Severity.MINOR, "input",
+    /** An element that could not be reviewed: a finding of its own kind (major as recommended), never a pass. */
+    private static ElementReview incomplete(IncompleteElement e, SeverityPolicy severities) {
+        Finding f = new Finding(e.id() + "/input/" + FindingKind.NOT_REVIEWED.key(), severities.of(FindingKind.NOT_REVIEWED), "input",
                 "The element could not be reviewed; missing: " + String.join(", ", e.missing()) + ".",
                 "submission format");
         return new ElementReview(e.id(), e.type(), e.description(), Verdict.INCOMPLETE, List.of(), List.of(f),

@@ -15,9 +15,10 @@ import java.util.Set;
  * @param subjects           for each scope, the values of {@code {dir}} ({@code [""]} for a scope with one subject)
  * @param checkUnits         check id → quantity → unit, for the checks a ruleset may define
  * @param requiredParameters parameters the engine reads in Java
+ * @param findingKinds       the kinds of finding the engine raises, each of which the ruleset gives a severity
  */
 public record RuleVocabulary(Map<String, Map<String, Variable>> scopes, Map<String, List<String>> subjects,
-                             Map<String, Map<String, String>> checkUnits, Set<String> requiredParameters) {
+                             Map<String, Map<String, String>> checkUnits, Set<String> requiredParameters, Set<String> findingKinds) {
 
     Optional<Map<String, Variable>> scope(String name) {
         return Optional.ofNullable(scopes.get(name));

@@ -15,11 +15,12 @@ import java.util.Map;
  * @param parameters  every parameter by name, with the file that set its value
  * @param tables      every table by name, with the file that set it
  * @param checks      the checks the ruleset defines, by id template, in file order
+ * @param severities  the severity of each kind of finding the engine raises, by kind
  * @param expressions the evaluator for the rules' expressions, with the tables as functions
  */
 public record Ruleset(String id, String title, String standard, String version, String sha256, List<String> files,
                       Map<String, Parameter> parameters, Map<String, TableDef> tables, Map<String, CheckDef> checks,
-                      RuleExpressions expressions) {
+                      Map<String, SeverityDef> severities, RuleExpressions expressions) {
 
     /** The parameter {@code name}; every name the engine asks for is validated at load. */
     public Parameter parameter(String name) {
@@ -29,6 +30,16 @@ public record Ruleset(String id, String title, String standard, String version, 
                     + "' (the loader should have refused it)");
         }
         return p;
+    }
+
+    /** The severity label of findings of {@code kind}; every kind the engine raises is validated at load. */
+    public String severity(String kind) {
+        SeverityDef s = severities.get(kind);
+        if (s == null) {
+            throw new IllegalStateException("ruleset " + id + " gives no severity to '" + kind
+                    + "' (the loader should have refused it)");
+        }
+        return s.severity();
     }
 
     public double number(String name) {

@@ -92,7 +92,7 @@ class HtmlReportWriterTest {
         assertThat(pileCap.select("table.legend tr")).isNotEmpty();
         assertThat(pileCap.select("table.marks tbody tr").eachText())
                 .as("shear-x fails in the fixture: its sections carry tag F1")
-                .containsExactly("F1 shear-x One-way shear, sections parallel to y shear sections across x PC-D1/shear-x/1");
+                .containsExactly("F1 shear-x One-way shear, sections parallel to y shear sections across x PC-D1/shear-x/capacity");
         Element footing = page.selectFirst("section.element[aria-label=PF-A2]");
         assertThat(footing.select("svg.drawing")).as("the pad footing of the fixture has no drawing").isEmpty();
         for (ElementReview e : review.elements()) {

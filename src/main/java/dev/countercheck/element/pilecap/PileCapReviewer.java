@@ -57,7 +57,7 @@ public final class PileCapReviewer {
     }
 
     /** What the detailing rules of a ruleset may use and define for pile caps. */
-    public static RuleVocabulary vocabulary(Set<String> requiredParameters) {
+    public static RuleVocabulary vocabulary(Set<String> requiredParameters, Set<String> findingKinds) {
         Map<String, Map<String, String>> units = new LinkedHashMap<>();
         CheckCatalogue.checksOf(PileCap.TYPE).values().stream().filter(c -> !checks().containsKey(c.id()))
                 .forEach(c -> {
@@ -65,7 +65,8 @@ public final class PileCapReviewer {
                     c.quantities().forEach(x -> q.put(x.name(), x.unit()));
                     units.put(c.id(), q);
                 });
-        return new RuleVocabulary(DetailingScopes.SCOPES, DetailingScopes.subjects(), units, requiredParameters);
+        return new RuleVocabulary(DetailingScopes.SCOPES, DetailingScopes.subjects(), units, requiredParameters,
+                findingKinds);
     }
 
     public ElementReview review(PileCap cap, Ruleset rules) {
