@@ -33,6 +33,12 @@ public final class ProjectReviewer {
     public static final String GENERAL_CAUTION = "This review assists a competent engineer and does not replace one."
             + " Local codes, the applicable National Annex and licensed engineering practice govern.";
 
+    /** What the tool does not review at all, stated in every report beside the checks it did not do. */
+    public static final String OUT_OF_SCOPE = "This tool reviews pile caps only. It does not review other foundation"
+            + " elements (pad and strip footings, ground beams, rafts), the piles themselves (their design resistances"
+            + " are taken as submitted), the ground (bearing, settlement, pile group effects), or the columns and walls"
+            + " above; nothing about them is checked here.";
+
     /** Every ruleset parameter a review reads in Java; the ruleset loader refuses a chain that lacks one. */
     public static final Set<String> REQUIRED_PARAMETERS = union(PileCapReviewer.PARAMETERS,
             Set.of("claim_tolerance", "cover_deviation"));

@@ -1,6 +1,8 @@
 package dev.countercheck.report;
 
 import dev.countercheck.eurocode.Step;
+import dev.countercheck.responses.Response;
+import dev.countercheck.responses.ResponseStatus;
 import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.CheckStatus;
 import dev.countercheck.review.ClaimComparison;
@@ -11,6 +13,9 @@ import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 import dev.countercheck.review.Value;
 import dev.countercheck.review.Verdict;
+import dev.countercheck.revision.FindingChange;
+import dev.countercheck.revision.RevisionComparison;
+import dev.countercheck.round.ReviewRound;
 
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -33,10 +38,11 @@ import java.util.stream.IntStream;
  *
  * @param pageHeading the running head of printed pages, already a quoted CSS string
  * @param cautions    the elements' cautions, for the closing section, elements without any left out
+ * @param round       the sign-off, the comparison with the previous revision, and what was not checked
  */
 public record HtmlModel(Header header, String pageHeading, List<Count> verdictCounts, List<Count> severityCounts,
                         List<String> assumptions, List<FindingRow> register, List<ElementView> elements,
-                        List<ElementCautions> cautions) {
+                        List<ElementCautions> cautions, RoundView round) {
 
     public record Header(String title, String reference, String revision, String preparedBy, String submissionDate,
                          String file, String sha256, String rulesetId, String rulesetTitle, String rulesetSha256,
@@ -47,9 +53,40 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     public record Count(String label, int count) {
     }
 
-    /** A finding; {@code checkAnchor} is its check's place in the report, or empty when the check is not listed. */
+    /**
+     * A finding; {@code checkAnchor} is its check's place in the report, or empty when the check is not listed.
+     *
+     * @param response       the designer's response read from the sheet, or empty
+     * @param responseStatus agreed, disputed or will-revise, or empty
+     * @param change         new, still-open or changed against the previous revision, or empty without one
+     */
     public record FindingRow(String id, String elementId, String elementAnchor, String severity, String checkAnchor,
-                             String basis, String message) {
+                             String basis, String message, String response, String responseStatus, String change) {
+    }
+
+    /**
+     * What the round adds to page one and to the closing sections.
+     *
+     * @param previous     the previous revision's label, or empty when there was no comparison
+     * @param changeCounts closed, still-open, changed, new
+     * @param closed       the findings of the previous revision that are closed now
+     * @param orphans      responses whose finding this review no longer raises
+     * @param notChecked   every check not performed or not applicable, with its reason
+     * @param outOfScope   what the tool does not review at all, in words (empty: not stated)
+     */
+    public record RoundView(String checker, String reviewRef, String previous, List<Count> changeCounts,
+                            List<ClosedRow> closed, List<OrphanRow> orphans, List<NotCheckedRow> notChecked,
+                            String outOfScope) {
+    }
+
+    public record ClosedRow(String id, String elementId, String severity, String message) {
+    }
+
+    public record OrphanRow(String id, String where, String response, String status) {
+    }
+
+    public record NotCheckedRow(String elementId, String elementAnchor, String checkId, String checkAnchor,
+                                String status, String reason) {
     }
 
     /**
@@ -100,9 +137,9 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     public record ElementCautions(String elementId, String anchor, List<String> cautions) {
     }
 
-    static HtmlModel of(Review review) {
+    static HtmlModel of(Review review, ReviewRound round) {
         List<ElementView> elements = IntStream.range(0, review.elements().size())
-                .mapToObj(i -> element(review.elements().get(i), i + 1))
+                .mapToObj(i -> element(review.elements().get(i), i + 1, round))
                 .toList();
         List<FindingRow> register = elements.stream().flatMap(e -> e.findings().stream()).toList();
         List<ElementCautions> cautions = IntStream.range(0, review.elements().size())
@@ -111,7 +148,29 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                         review.elements().get(i).cautions()))
                 .toList();
         return new HtmlModel(header(review), PageHeading.css(review), verdictCounts(review.summary()),
-                severityCounts(review.summary()), review.assumptions(), register, elements, cautions);
+                severityCounts(review.summary()), review.assumptions(), register, elements, cautions,
+                roundView(round, elements));
+    }
+
+    private static RoundView roundView(ReviewRound round, List<ElementView> elements) {
+        List<Count> counts = round.revision().map(r -> r.counts().entrySet().stream()
+                .map(c -> new Count(c.getKey().label(), c.getValue())).toList()).orElse(List.of());
+        List<ClosedRow> closed = round.revision().map(r -> r.entries().stream()
+                .filter(e -> e.change() == FindingChange.CLOSED)
+                .map(e -> new ClosedRow(e.id(), e.latest().element(), e.latest().severity(), e.latest().message()))
+                .toList()).orElse(List.of());
+        List<OrphanRow> orphans = round.responses().orphans().stream()
+                .map(r -> new OrphanRow(r.findingId(), r.where(), r.text(),
+                        r.status().map(ResponseStatus::label).orElse("")))
+                .toList();
+        List<NotCheckedRow> notChecked = elements.stream().flatMap(e -> e.checks().stream()
+                .filter(c -> c.status().equals(CheckStatus.NOT_CHECKED.label())
+                        || c.status().equals(CheckStatus.NOT_APPLICABLE.label()))
+                .map(c -> new NotCheckedRow(e.id(), e.anchor(), c.id(), c.anchor(), c.status(), c.reason())))
+                .toList();
+        return new RoundView(round.signOff().checker().orElse(""), round.signOff().reviewRef().orElse(""),
+                round.revision().map(RevisionComparison::previous).orElse(""), counts, closed, orphans, notChecked,
+                round.outOfScope());
     }
 
     private static Header header(Review review) {
@@ -136,13 +195,13 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 .toList();
     }
 
-    private static ElementView element(ElementReview element, int position) {
+    private static ElementView element(ElementReview element, int position, ReviewRound round) {
         String anchor = "e" + position;
         List<CheckView> checks = IntStream.range(0, element.checks().size())
                 .mapToObj(i -> check(element.checks().get(i), anchor + "-c" + (i + 1)))
                 .toList();
         List<FindingRow> findings = element.findings().stream()
-                .map(f -> findingRow(f, element.id(), anchor, checks))
+                .map(f -> findingRow(f, element.id(), anchor, checks, round))
                 .toList();
         List<DrawingView> drawings = element.drawing().map(d -> List.of(drawing(anchor, element, d)))
                 .orElse(List.of());
@@ -157,14 +216,17 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     }
 
     private static FindingRow findingRow(Finding finding, String elementId, String elementAnchor,
-                                         List<CheckView> checks) {
+                                         List<CheckView> checks, ReviewRound round) {
         String checkAnchor = checks.stream()
                 .filter(c -> c.id().equals(finding.check()))
                 .map(CheckView::anchor)
                 .findFirst()
                 .orElse("");
+        Optional<Response> response = round.responses().to(finding.id());
         return new FindingRow(finding.id(), elementId, elementAnchor, finding.severity().label(), checkAnchor,
-                finding.basis(), finding.message());
+                finding.basis(), finding.message(), response.map(Response::text).orElse(""),
+                response.flatMap(Response::status).map(ResponseStatus::label).orElse(""),
+                round.revision().flatMap(r -> r.entry(finding.id())).map(e -> e.change().label()).orElse(""));
     }
 
     private static CheckView check(CheckResult check, String anchor) {
