@@ -18,6 +18,7 @@ import dev.countercheck.revision.RevisionComparison;
 import dev.countercheck.round.ReviewRound;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -51,6 +52,11 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     }
 
     public record Count(String label, int count) {
+    }
+
+    /** Every critical and major finding, in the register's order: page one lists them. */
+    public List<FindingRow> problems() {
+        return elements.stream().flatMap(e -> e.problems().stream()).toList();
     }
 
     /**
@@ -98,14 +104,40 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     public record ElementView(String anchor, String number, String id, String type, String description,
                               String verdict, List<CheckView> checks, List<FindingRow> findings, int cautionCount,
                               List<DrawingView> drawings) {
+
+        /** The checks with a utilisation, largest first, then the others in their order. */
+        public List<CheckView> checksByUtilisation() {
+            List<CheckView> sorted = new ArrayList<>(checks);
+            sorted.sort(Comparator.comparing((CheckView c) -> c.utilisationValue().isEmpty())
+                    .thenComparing(c -> -c.utilisationValue().orElse(0.0)));
+            return sorted;
+        }
+
+        /** The check with the largest utilisation, as a list of one, or none when no check has one. */
+        public List<CheckView> governing() {
+            return checksByUtilisation().stream().filter(c -> c.utilisationValue().isPresent()).limit(1).toList();
+        }
+
+        /** Every critical and major finding of the element, for page one. */
+        public List<FindingRow> problems() {
+            return findings.stream().filter(f -> f.severity().equals(Severity.CRITICAL.label())
+                    || f.severity().equals(Severity.MAJOR.label())).toList();
+        }
     }
 
     /**
      * @param failing     whether the check failed (to mark its row)
      * @param utilisation two decimals rounded up, or empty
+     * @param bar         the utilisation bar's width in percent of its track, or empty
+     * @param over        whether the utilisation exceeds 1 (the bar is then full and marked)
      */
     public record CheckView(String anchor, String id, String title, String basis, String status, boolean failing,
-                            String utilisation, String reason, List<QuantityView> quantities, List<StepView> trace) {
+                            String utilisation, String bar, boolean over, String reason, List<QuantityView> quantities,
+                            List<StepView> trace) {
+
+        Optional<Double> utilisationValue() {
+            return utilisation.isEmpty() ? Optional.empty() : Optional.of(Double.parseDouble(utilisation));
+        }
     }
 
     /**
@@ -236,9 +268,11 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
         List<StepView> trace = IntStream.range(0, check.trace().size())
                 .mapToObj(i -> step(check.trace().get(i), anchor + "-s" + (i + 1), i + 1))
                 .toList();
+        String bar = check.utilisation().isPresent() ? ReportNumbers.barPercent(check.utilisation().getAsDouble()) : "";
+        boolean over = check.utilisation().isPresent() && check.utilisation().getAsDouble() > 1;
         return new CheckView(anchor, check.id(), check.title(), check.basis(), check.status().label(),
-                check.status() == CheckStatus.FAIL, utilisation, text(check.reason()), quantities(check, trace),
-                trace);
+                check.status() == CheckStatus.FAIL, utilisation, bar, over, text(check.reason()),
+                quantities(check, trace), trace);
     }
 
     /**
