@@ -32,9 +32,9 @@ class HtmlReportWriterTest {
 
     @Test
     void sectionsComeInTheOrderASignedReviewNeeds() {
-        // Cover, findings register, elements, assumptions and cautions, in document order.
+        // Cover (with the problems), findings register, elements, assumptions and cautions, calculations.
         List<String> ids = page.select("body > header, body > section").eachAttr("id");
-        assertThat(ids).containsExactly("cover", "register", "elements", "assumptions");
+        assertThat(ids).containsExactly("cover", "register", "elements", "assumptions", "calculations");
         assertThat(page.select("#elements > section.element").eachAttr("aria-label")).containsExactly("PC-D1", "PF-A2");
     }
 
