@@ -1,12 +1,12 @@
 package dev.countercheck.cli;
 
+import dev.countercheck.input.UnusableInputException;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.countercheck.revision.FindingSnapshot;
 import dev.countercheck.revision.ResultFile;
-import dev.countercheck.revision.ResultFileException;
 import dev.countercheck.revision.RevisionComparison;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -51,7 +51,7 @@ public final class CompareCommand implements Callable<Integer> {
             ResultFile before = ResultFile.read(older);
             after = ResultFile.read(newer);
             comparison = RevisionComparison.compare(before.label(), before.findings(), after.findings());
-        } catch (ResultFileException e) {
+        } catch (UnusableInputException e) {
             err.println(e.getMessage());
             return ExitCodes.UNUSABLE;
         }

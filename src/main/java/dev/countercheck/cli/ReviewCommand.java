@@ -1,6 +1,7 @@
 package dev.countercheck.cli;
 
 import dev.countercheck.element.ProjectReviewer;
+import dev.countercheck.input.UnusableInputException;
 import dev.countercheck.report.HtmlReportWriter;
 import dev.countercheck.report.JsonResultWriter;
 import dev.countercheck.report.PdfReportWriter;
@@ -151,8 +152,8 @@ public final class ReviewCommand implements Callable<Integer> {
             err.println(file + ": not reviewed (" + e.errors().size() + " input error"
                     + (e.errors().size() == 1 ? "" : "s") + ")");
             index.notReviewed(file.toString(), "input errors");
-        } catch (RoundOptions.UnusableInput e) {
-            e.problems.forEach(err::println);
+        } catch (UnusableInputException e) {
+            e.problems().forEach(err::println);
             err.println(file + ": not reviewed (the responses, previous result or review settings cannot be used)");
             index.notReviewed(file.toString(), "its responses, previous result or review settings cannot be used");
         } catch (RulesetException e) {

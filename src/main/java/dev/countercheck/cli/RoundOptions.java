@@ -1,27 +1,24 @@
 package dev.countercheck.cli;
 
+import dev.countercheck.input.UnusableInputException;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.export.ConsoleJson;
 import dev.countercheck.export.JunitXml;
 import dev.countercheck.export.Sarif;
 import dev.countercheck.responses.Response;
 import dev.countercheck.responses.ResponseSheet;
-import dev.countercheck.responses.ResponseSheetException;
 import dev.countercheck.responses.ResponseSheetReader;
 import dev.countercheck.responses.Responses;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 import dev.countercheck.revision.FindingSnapshot;
 import dev.countercheck.revision.ResultFile;
-import dev.countercheck.revision.ResultFileException;
 import dev.countercheck.revision.RevisionComparison;
 import dev.countercheck.round.ReviewRound;
 import dev.countercheck.round.SignOff;
-import dev.countercheck.round.SignOffException;
 import dev.countercheck.round.SignOffFile;
 import picocli.CommandLine.Option;
 
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
@@ -73,16 +70,6 @@ final class RoundOptions {
     @Option(names = "--sarif", description = "Also write DIR/<name>" + SARIF + ": the findings as SARIF 2.1.0.")
     boolean sarif;
 
-    /** A responses sheet, previous result or sign-off file that cannot be used; each problem says where. */
-    static final class UnusableInput extends Exception {
-        final List<String> problems;
-
-        UnusableInput(List<String> problems) {
-            super(String.join("; ", problems));
-            this.problems = problems;
-        }
-    }
-
     /** @throws UsageException for an unknown format, or a sheet or previous result given for several submissions */
     void validate(List<Path> inputs) {
         if (!format.equals("text") && !format.equals("json")) {
@@ -106,23 +93,12 @@ final class RoundOptions {
     }
 
     /** The round of the review of {@code submission}; warnings (responses whose finding is gone) go to {@code err}. */
-    ReviewRound round(Path submission, Review review, PrintWriter err) throws UnusableInput {
-        SignOff signOff;
-        try {
-            Path folder = submission.toAbsolutePath().getParent();
-            signOff = SignOffFile.read(folder).overriddenBy(new SignOff(checker, reviewRef));
-        } catch (SignOffException e) {
-            throw new UnusableInput(e.problems());
-        }
+    ReviewRound round(Path submission, Review review, PrintWriter err) throws UnusableInputException {
+        SignOff signOff = SignOffFile.read(submission.toAbsolutePath().getParent())
+                .overriddenBy(new SignOff(checker, reviewRef));
         Responses matched = Responses.none();
         if (responses.isPresent()) {
-            try {
-                matched = Responses.match(review, ResponseSheetReader.read(responses.get()));
-            } catch (ResponseSheetException e) {
-                throw new UnusableInput(e.problems());
-            } catch (IOException e) {
-                throw new UnusableInput(List.of(responses.get() + ": cannot be read (" + e.getMessage() + ")"));
-            }
+            matched = Responses.match(review, ResponseSheetReader.read(responses.get()));
             for (Response r : matched.orphans()) {
                 err.println(r.where() + ": warning: a response to " + r.findingId()
                         + ", which this review does not raise (closed, or of another submission)");
@@ -130,13 +106,8 @@ final class RoundOptions {
         }
         Optional<RevisionComparison> revision = Optional.empty();
         if (previous.isPresent()) {
-            try {
-                ResultFile old = ResultFile.read(previous.get());
-                revision = Optional.of(RevisionComparison.compare(old.label(), old.findings(),
-                        FindingSnapshot.of(review)));
-            } catch (ResultFileException e) {
-                throw new UnusableInput(List.of(e.getMessage()));
-            }
+            ResultFile old = ResultFile.read(previous.get());
+            revision = Optional.of(RevisionComparison.compare(old.label(), old.findings(), FindingSnapshot.of(review)));
         }
         return new ReviewRound(signOff, matched, revision, ProjectReviewer.OUT_OF_SCOPE);
     }

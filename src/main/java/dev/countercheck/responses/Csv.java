@@ -1,5 +1,6 @@
 package dev.countercheck.responses;
 
+import dev.countercheck.input.UnusableInputException;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -30,9 +31,9 @@ final class Csv {
     /**
      * The records of {@code text}, each field located as {@code file:line:column (E7)}.
      *
-     * @throws ResponseSheetException on a quote that is never closed or text after a closing quote
+     * @throws UnusableInputException on a quote that is never closed or text after a closing quote
      */
-    static List<List<SheetCell>> parse(String file, String text) throws ResponseSheetException {
+    static List<List<SheetCell>> parse(String file, String text) throws UnusableInputException {
         List<List<SheetCell>> rows = new ArrayList<>();
         List<SheetCell> row = new ArrayList<>();
         StringBuilder field = new StringBuilder();
@@ -48,7 +49,7 @@ final class Csv {
                 column++;
                 while (true) {
                     if (i >= text.length()) {
-                        throw new ResponseSheetException(List.of(where + ": the quoted field is never closed"));
+                        throw new UnusableInputException(where + ": the quoted field is never closed");
                     }
                     char c = text.charAt(i++);
                     column++;
@@ -67,8 +68,8 @@ final class Csv {
                     }
                 }
                 if (i < text.length() && ",\r\n".indexOf(text.charAt(i)) < 0) {
-                    throw new ResponseSheetException(List.of(file + ":" + line + ":" + column
-                            + ": text after the closing quote of a field (a quote inside a field is written twice)"));
+                    throw new UnusableInputException(file + ":" + line + ":" + column
+                            + ": text after the closing quote of a field (a quote inside a field is written twice)");
                 }
             } else {
                 while (i < text.length() && ",\r\n".indexOf(text.charAt(i)) < 0) {

@@ -1,5 +1,6 @@
 package dev.countercheck.responses;
 
+import dev.countercheck.input.UnusableInputException;
 import dev.countercheck.input.Suggestions;
 import org.dhatim.fastexcel.reader.Cell;
 import org.dhatim.fastexcel.reader.ReadableWorkbook;
@@ -35,35 +36,40 @@ public final class ResponseSheetReader {
     }
 
     /** The responses the sheet gives, rows without a response or status left out. */
-    public static List<Response> read(Path file) throws ResponseSheetException, IOException {
+    public static List<Response> read(Path file) throws UnusableInputException {
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
         if (!Files.isRegularFile(file)) {
-            throw new ResponseSheetException(List.of(file + ": no such file"));
+            throw new UnusableInputException(file + ": no such file");
         }
-        if (Files.size(file) > MAX_BYTES) {
-            throw new ResponseSheetException(List.of(file + ": larger than 8 MB; a response sheet is refused unread"));
+        byte[] bytes;
+        try {
+            if (Files.size(file) > MAX_BYTES) {
+                throw new UnusableInputException(file + ": larger than 8 MB; a response sheet is refused unread");
+            }
+            bytes = Files.readAllBytes(file);
+        } catch (IOException e) {
+            throw new UnusableInputException(file + ": cannot be read (" + e.getMessage() + ")");
         }
-        byte[] bytes = Files.readAllBytes(file);
         if (name.endsWith(".csv")) {
             return responses(Csv.parse(file.toString(), utf8(file, bytes)), file.toString());
         }
         if (name.endsWith(".xlsx")) {
             return responses(workbook(file, bytes), file.toString());
         }
-        throw new ResponseSheetException(List.of(file + ": a response sheet is a .csv or an .xlsx file"));
+        throw new UnusableInputException(file + ": a response sheet is a .csv or an .xlsx file");
     }
 
-    private static String utf8(Path file, byte[] bytes) throws ResponseSheetException {
+    private static String utf8(Path file, byte[] bytes) throws UnusableInputException {
         try {
             return StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
                     .decode(ByteBuffer.wrap(bytes)).toString();
         } catch (CharacterCodingException e) {
-            throw new ResponseSheetException(List.of(file + ": not UTF-8 text; save the sheet as CSV UTF-8"));
+            throw new UnusableInputException(file + ": not UTF-8 text; save the sheet as CSV UTF-8");
         }
     }
 
     /** The first worksheet's rows, each cell located as {@code file Sheet!E7}. */
-    private static List<List<SheetCell>> workbook(Path file, byte[] bytes) throws ResponseSheetException {
+    private static List<List<SheetCell>> workbook(Path file, byte[] bytes) throws UnusableInputException {
         try (ReadableWorkbook wb = new ReadableWorkbook(new ByteArrayInputStream(bytes))) {
             Sheet sheet = wb.findSheet(ResponseSheet.SHEET).orElse(wb.getFirstSheet());
             List<List<SheetCell>> rows = new ArrayList<>();
@@ -79,15 +85,15 @@ public final class ResponseSheetReader {
             }
             return rows;
         } catch (IOException | RuntimeException e) {
-            throw new ResponseSheetException(List.of(file + ": not a workbook that can be read ("
-                    + e.getClass().getSimpleName() + ")"));
+            throw new UnusableInputException(file + ": not a workbook that can be read ("
+                    + e.getClass().getSimpleName() + ")");
         }
     }
 
-    private static List<Response> responses(List<List<SheetCell>> rows, String file) throws ResponseSheetException {
+    private static List<Response> responses(List<List<SheetCell>> rows, String file) throws UnusableInputException {
         if (rows.isEmpty()) {
-            throw new ResponseSheetException(List.of(file + ": the sheet is empty; its first row names the columns "
-                    + String.join(", ", ResponseSheet.COLUMNS)));
+            throw new UnusableInputException(file + ": the sheet is empty; its first row names the columns "
+                    + String.join(", ", ResponseSheet.COLUMNS));
         }
         Map<String, Integer> columns = new HashMap<>();
         List<SheetCell> header = rows.get(0);
@@ -101,7 +107,7 @@ public final class ResponseSheetReader {
             }
         }
         if (!problems.isEmpty()) {
-            throw new ResponseSheetException(problems);
+            throw new UnusableInputException(problems);
         }
         List<Response> out = new ArrayList<>();
         Map<String, String> seen = new HashMap<>();
@@ -134,7 +140,7 @@ public final class ResponseSheetReader {
             out.add(new Response(findingId, response, parsed, where));
         }
         if (!problems.isEmpty()) {
-            throw new ResponseSheetException(problems);
+            throw new UnusableInputException(problems);
         }
         return List.copyOf(out);
     }

@@ -1,5 +1,6 @@
 package dev.countercheck.revision;
 
+import dev.countercheck.input.UnusableInputException;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -24,26 +25,26 @@ public record ResultFile(String label, List<FindingSnapshot> findings) {
     private static final long MAX_BYTES = 64L * 1024 * 1024;
     private static final ObjectMapper JSON = new ObjectMapper();
 
-    /** @throws ResultFileException when the file is missing, not JSON or not a review result, with where */
-    public static ResultFile read(Path file) throws ResultFileException {
+    /** @throws UnusableInputException when the file is missing, not JSON or not a review result, with where */
+    public static ResultFile read(Path file) throws UnusableInputException {
         JsonNode root;
         try {
             if (!Files.isRegularFile(file)) {
-                throw new ResultFileException(file + ": no such file");
+                throw new UnusableInputException(file + ": no such file");
             }
             if (Files.size(file) > MAX_BYTES) {
-                throw new ResultFileException(file + ": larger than 64 MB, not a review result");
+                throw new UnusableInputException(file + ": larger than 64 MB, not a review result");
             }
             root = JSON.readTree(file.toFile());
         } catch (JsonProcessingException e) {
             JsonLocation at = e.getLocation();
-            throw new ResultFileException(file + (at == null ? "" : ":" + at.getLineNr() + ":" + at.getColumnNr())
+            throw new UnusableInputException(file + (at == null ? "" : ":" + at.getLineNr() + ":" + at.getColumnNr())
                     + ": not JSON (" + e.getOriginalMessage() + ")");
         } catch (IOException e) {
-            throw new ResultFileException(file + ": cannot be read (" + e.getMessage() + ")");
+            throw new UnusableInputException(file + ": cannot be read (" + e.getMessage() + ")");
         }
         if (root == null || !FORMAT.equals(root.path("format").asText())) {
-            throw new ResultFileException(file + ": not a review result (its \"format\" is not " + FORMAT + ")");
+            throw new UnusableInputException(file + ": not a review result (its \"format\" is not " + FORMAT + ")");
         }
         List<FindingSnapshot> findings = new ArrayList<>();
         for (JsonNode e : root.path("elements")) {

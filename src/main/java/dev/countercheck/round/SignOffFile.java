@@ -1,5 +1,6 @@
 package dev.countercheck.round;
 
+import dev.countercheck.input.UnusableInputException;
 import dev.countercheck.input.InputError;
 import dev.countercheck.input.Node;
 import dev.countercheck.input.Node.Entry;
@@ -29,7 +30,7 @@ public final class SignOffFile {
     }
 
     /** The sign-off the folder's file states, or none when there is no file. */
-    public static SignOff read(Path folder) throws SignOffException {
+    public static SignOff read(Path folder) throws UnusableInputException {
         Path file = folder.resolve(NAME);
         if (!Files.isRegularFile(file)) {
             return SignOff.none();
@@ -37,11 +38,11 @@ public final class SignOffFile {
         byte[] bytes;
         try {
             if (Files.size(file) > MAX_BYTES) {
-                throw new SignOffException(List.of(file + ": larger than 64 KB; refused unread"));
+                throw new UnusableInputException(file + ": larger than 64 KB; refused unread");
             }
             bytes = Files.readAllBytes(file);
         } catch (IOException e) {
-            throw new SignOffException(List.of(file + ": cannot be read (" + e.getMessage() + ")"));
+            throw new UnusableInputException(file + ": cannot be read (" + e.getMessage() + ")");
         }
         Problems problems = new Problems(file.toString());
         Optional<Node> root = new TreeParser(problems).parse(bytes, file.toString());
@@ -64,7 +65,7 @@ public final class SignOffFile {
             problems.add(root.get().location(), "", "expected checker: and review_ref: keys");
         }
         if (problems.any()) {
-            throw new SignOffException(problems.sorted().stream().map(InputError::toString).toList());
+            throw new UnusableInputException(problems.sorted().stream().map(InputError::toString).toList());
         }
         return new SignOff(checker, ref);
     }

@@ -1,5 +1,6 @@
 package dev.countercheck.responses;
 
+import dev.countercheck.input.UnusableInputException;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
 import dev.countercheck.review.Review;
@@ -112,7 +113,7 @@ class ResponseSheetRoundTripTest {
             ws.value(6, 6, "agred");
             wb.finish();
         }
-        ResponseSheetException e = catchThrowableOfType(ResponseSheetException.class,
+        UnusableInputException e = catchThrowableOfType(UnusableInputException.class,
                 () -> ResponseSheetReader.read(sheet));
         assertThat(e.problems()).singleElement().asString()
                 .startsWith(sheet + " Sheet1!G7: status 'agred' is not one of agreed, disputed, will-revise")
@@ -123,7 +124,7 @@ class ResponseSheetRoundTripTest {
     void anUnclosedQuoteInACsvSheetIsLocatedByLineAndColumn(@TempDir Path dir) throws IOException {
         Path sheet = dir.resolve("answers.csv");
         Files.writeString(sheet, "id,response,status\r\nPC-1/tie-x/capacity,\"We agree,agreed\r\n");
-        ResponseSheetException e = catchThrowableOfType(ResponseSheetException.class,
+        UnusableInputException e = catchThrowableOfType(UnusableInputException.class,
                 () -> ResponseSheetReader.read(sheet));
         assertThat(e.problems()).singleElement().asString().startsWith(sheet + ":2:21 (B2): the quoted field");
     }
