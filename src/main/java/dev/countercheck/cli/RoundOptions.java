@@ -64,7 +64,8 @@ final class RoundOptions {
             description = "The console summary: text (default) or json (one line of JSON per submission).")
     String format;
 
-    @Option(names = "--junit", description = "Also write DIR/<name>" + JUNIT + ": one test case per check, for CI servers.")
+    @Option(names = "--junit",
+            description = "Also write DIR/<name>" + JUNIT + ": one test case per check, for CI servers.")
     boolean junit;
 
     @Option(names = "--sarif", description = "Also write DIR/<name>" + SARIF + ": the findings as SARIF 2.1.0.")

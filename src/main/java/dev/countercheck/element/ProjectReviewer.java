@@ -55,7 +55,8 @@ public final class ProjectReviewer {
 
     public Review review(Submission submission, Ruleset rules, String reviewDate) {
         SeverityPolicy severities = new SeverityPolicy(rules::severity);
-        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance")), severities);
+        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance")),
+                severities);
         PileCapReviewer pileCaps = new PileCapReviewer(assembler);
         List<ElementReview> elements = new ArrayList<>();
         for (ElementInput e : submission.elements()) {
@@ -82,7 +83,8 @@ public final class ProjectReviewer {
 
     /** An element that could not be reviewed: a finding of its own kind (major as recommended), never a pass. */
     private static ElementReview incomplete(IncompleteElement e, SeverityPolicy severities) {
-        Finding f = new Finding(e.id() + "/input/" + FindingKind.NOT_REVIEWED.key(), severities.of(FindingKind.NOT_REVIEWED), "input",
+        Finding f = new Finding(e.id() + "/input/" + FindingKind.NOT_REVIEWED.key(),
+                severities.of(FindingKind.NOT_REVIEWED), "input",
                 "The element could not be reviewed; missing: " + String.join(", ", e.missing()) + ".",
                 "submission format");
         return new ElementReview(e.id(), e.type(), e.description(), Verdict.INCOMPLETE, List.of(), List.of(f),

@@ -13,7 +13,6 @@ import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.ByteBuffer;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -38,18 +37,7 @@ public final class ResponseSheetReader {
     /** The responses the sheet gives, rows without a response or status left out. */
     public static List<Response> read(Path file) throws UnusableInputException {
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
-        if (!Files.isRegularFile(file)) {
-            throw new UnusableInputException(file + ": no such file");
-        }
-        byte[] bytes;
-        try {
-            if (Files.size(file) > MAX_BYTES) {
-                throw new UnusableInputException(file + ": larger than 8 MB; a response sheet is refused unread");
-            }
-            bytes = Files.readAllBytes(file);
-        } catch (IOException e) {
-            throw new UnusableInputException(file + ": cannot be read (" + e.getMessage() + ")");
-        }
+        byte[] bytes = UnusableInputException.readBounded(file, MAX_BYTES, "a response sheet");
         if (name.endsWith(".csv")) {
             return responses(Csv.parse(file.toString(), utf8(file, bytes)), file.toString());
         }

@@ -7,7 +7,6 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -27,15 +26,10 @@ public record ResultFile(String label, List<FindingSnapshot> findings) {
 
     /** @throws UnusableInputException when the file is missing, not JSON or not a review result, with where */
     public static ResultFile read(Path file) throws UnusableInputException {
+        byte[] bytes = UnusableInputException.readBounded(file, MAX_BYTES, "a review result");
         JsonNode root;
         try {
-            if (!Files.isRegularFile(file)) {
-                throw new UnusableInputException(file + ": no such file");
-            }
-            if (Files.size(file) > MAX_BYTES) {
-                throw new UnusableInputException(file + ": larger than 64 MB, not a review result");
-            }
-            root = JSON.readTree(file.toFile());
+            root = JSON.readTree(bytes);
         } catch (JsonProcessingException e) {
             JsonLocation at = e.getLocation();
             throw new UnusableInputException(file + (at == null ? "" : ":" + at.getLineNr() + ":" + at.getColumnNr())

@@ -10,7 +10,6 @@ import dev.countercheck.input.Problems;
 import dev.countercheck.input.Suggestions;
 import dev.countercheck.input.TreeParser;
 
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -35,15 +34,7 @@ public final class SignOffFile {
         if (!Files.isRegularFile(file)) {
             return SignOff.none();
         }
-        byte[] bytes;
-        try {
-            if (Files.size(file) > MAX_BYTES) {
-                throw new UnusableInputException(file + ": larger than 64 KB; refused unread");
-            }
-            bytes = Files.readAllBytes(file);
-        } catch (IOException e) {
-            throw new UnusableInputException(file + ": cannot be read (" + e.getMessage() + ")");
-        }
+        byte[] bytes = UnusableInputException.readBounded(file, MAX_BYTES, "a review settings file");
         Problems problems = new Problems(file.toString());
         Optional<Node> root = new TreeParser(problems).parse(bytes, file.toString());
         Optional<String> checker = Optional.empty();
