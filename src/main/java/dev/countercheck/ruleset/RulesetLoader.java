@@ -144,7 +144,7 @@ public final class RulesetLoader {
         return new Ruleset(optionalText(root, "id").orElse(top.name()), optionalText(root, "title").orElse(""),
                 optionalText(root, "standard").orElse(""), optionalText(root, "version").orElse(""), hash(chain),
                 chain.stream().map(RulesetFile::name).toList(), Collections.unmodifiableMap(parameters),
-                Collections.unmodifiableMap(tables), Collections.unmodifiableMap(validated),
+                Collections.unmodifiableMap(tables), Collections.unmodifiableMap(validated), validator.rules(),
                 Collections.unmodifiableMap(severities), expressions);
     }
 

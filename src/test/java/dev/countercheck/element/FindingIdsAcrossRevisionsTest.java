@@ -88,7 +88,7 @@ class FindingIdsAcrossRevisionsTest {
 
     private static Review review(JsonNode submission, Path file) throws Exception {
         Files.writeString(file, JSON.writeValueAsString(submission));
-        Submission s = new SubmissionReader().read(file);
+        Submission s = new SubmissionReader(ElementKinds.binders()).read(file);
         var rules = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY)
                 .load(s.ruleset().orElse("en1992-recommended"));
         return new ProjectReviewer(new Review.ToolInfo("countercheck", "test")).review(s, rules, "2026-12-01");

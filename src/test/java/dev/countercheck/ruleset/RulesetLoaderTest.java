@@ -28,13 +28,11 @@ class RulesetLoaderTest {
             """;
 
     private static RulesetLoader loader(Path dir) {
-        return new RulesetLoader(dir, new RuleVocabulary(Map.of(), Map.of(), Map.of(), Set.of("gamma_c", "gamma_s"),
-                Set.of()));
+        return new RulesetLoader(dir, new RuleVocabulary(Map.of(), Set.of("gamma_c", "gamma_s"), Set.of()));
     }
 
     private static RulesetLoader loaderRaising(Path dir, Set<String> findingKinds) {
-        return new RulesetLoader(dir, new RuleVocabulary(Map.of(), Map.of(), Map.of(), Set.of("gamma_c", "gamma_s"),
-                findingKinds));
+        return new RulesetLoader(dir, new RuleVocabulary(Map.of(), Set.of("gamma_c", "gamma_s"), findingKinds));
     }
 
     @Test
