@@ -7,7 +7,7 @@ import picocli.CommandLine.Command;
 @Command(name = "countercheck", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Independent design review of reinforced-concrete foundations to EN 1992-1-1.",
         subcommands = {ReviewCommand.class, ValidateCommand.class, RulesCommand.class, ExampleCommand.class,
-                SchemaCommand.class,                 CommandLine.HelpCommand.class})
+                SchemaCommand.class, CompareCommand.class,                 CommandLine.HelpCommand.class})
 public final class CountercheckCommand implements Runnable {
 
     @CommandLine.Spec

@@ -2,6 +2,7 @@ package dev.countercheck.cli;
 
 import dev.countercheck.element.ElementKinds;
 import dev.countercheck.element.ProjectReviewer;
+import dev.countercheck.input.UnusableInputException;
 import dev.countercheck.report.HtmlReportWriter;
 import dev.countercheck.report.JsonResultWriter;
 import dev.countercheck.report.PdfReportWriter;
@@ -9,6 +10,7 @@ import dev.countercheck.report.ReportFiles;
 import dev.countercheck.report.ReportIndex;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
+import dev.countercheck.round.ReviewRound;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.ruleset.RulesetException;
 import dev.countercheck.submission.Submission;
@@ -22,8 +24,10 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
+import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
@@ -33,8 +37,8 @@ import java.util.concurrent.Callable;
         description = "Recompute every check of each submission and write DIR/<name>.json and DIR/<name>.html;"
                 + " for several submissions or a folder, also DIR/index.html.",
         exitCodeListHeading = "%nExit status:%n",
-        exitCodeList = {"0:nothing at or above the --fail-on severity was found",
-                "1:something at or above the --fail-on severity was found",
+        exitCodeList = {"0:nothing at or above the --fail-on severity was found and every element was reviewed",
+                "1:something at or above the --fail-on severity was found, or an element is incomplete",
                 "2:unusable input or wrong usage"})
 public final class ReviewCommand implements Callable<Integer> {
 
@@ -64,6 +68,9 @@ public final class ReviewCommand implements Callable<Integer> {
     @Option(names = "--debug", description = "On an internal error, print where it happened (a stack trace).")
     boolean debug;
 
+    @picocli.CommandLine.Mixin
+    RoundOptions round;
+
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -81,13 +88,16 @@ public final class ReviewCommand implements Callable<Integer> {
                     Clock.systemUTC());
             inputs = SubmissionFiles.expand(files);
             requireDistinctBasenames(inputs);
+            round.validate(inputs);
             batch = inputs.size() > 1 || files.stream().anyMatch(Files::isDirectory);
             if (batch && inputs.stream().anyMatch(p -> SubmissionFiles.basename(p).equals(ReportIndex.NAME))) {
                 throw new UsageException("a submission named " + ReportIndex.NAME + " would write its report where"
                         + " the index of several submissions goes; rename it or review it on its own");
             }
-            targets = ReportTargets.of(outDir, inputs, pdf ? List.of(".json", ".html", ".pdf")
+            List<String> extensions = new ArrayList<>(pdf ? List.of(".json", ".html", ".pdf")
                     : List.of(".json", ".html"));
+            extensions.addAll(round.extensions());
+            targets = ReportTargets.of(outDir, inputs, extensions);
         } catch (IllegalArgumentException | UsageException e) {
             err.println("countercheck review: " + e.getMessage());
             return ExitCodes.UNUSABLE;
@@ -118,25 +128,35 @@ public final class ReviewCommand implements Callable<Integer> {
             Ruleset rules = ruleset.isPresent() ? rulesets.load(ruleset.get())
                     : rulesets.load(submission.ruleset().orElse(Rulesets.DEFAULT), submission.rulesetAt());
             Review review = reviewer.review(submission, rules, reviewDate);
+            ReviewRound context = round.round(file, review, err);
             Path json = targets.report(file, ".json");
             Path html = targets.report(file, ".html");
             Files.createDirectories(outDir);
             ReportFiles.writeAtomically(json, new JsonResultWriter().write(review));
-            ReportFiles.writeAtomically(html, new HtmlReportWriter().write(review));
+            ReportFiles.writeAtomically(html, new HtmlReportWriter().write(review, context));
+            List<Path> written = new ArrayList<>(List.of(json, html));
             Optional<Path> pdfFile = pdf ? Optional.of(targets.report(file, ".pdf")) : Optional.empty();
             if (pdfFile.isPresent()) {
-                ReportFiles.writeAtomically(pdfFile.get(), new PdfReportWriter().write(review));
+                ReportFiles.writeAtomically(pdfFile.get(), new PdfReportWriter().write(review, context));
+                written.add(pdfFile.get());
+            }
+            for (Map.Entry<String, byte[]> extra : round.files(review, threshold).entrySet()) {
+                Path target = targets.report(file, extra.getKey());
+                ReportFiles.writeAtomically(target, extra.getValue());
+                written.add(target);
             }
             index.reviewed(review, json, html, pdfFile);
-            spec.commandLine().getOut().println(SummaryLine.of(file, review, json, html));
-            boolean found = review.elements().stream().flatMap(e -> e.findings().stream())
-                    .anyMatch(f -> f.severity().atLeast(threshold));
-            return found ? ExitCodes.FINDINGS : ExitCodes.OK;
+            spec.commandLine().getOut().println(round.summary(file, review, context, written));
+            return review.passesGate(threshold) ? ExitCodes.OK : ExitCodes.FINDINGS;
         } catch (SubmissionException e) {
             e.errors().forEach(err::println);
             err.println(file + ": not reviewed (" + e.errors().size() + " input error"
                     + (e.errors().size() == 1 ? "" : "s") + ")");
             index.notReviewed(file.toString(), "input errors");
+        } catch (UnusableInputException e) {
+            e.problems().forEach(err::println);
+            err.println(file + ": not reviewed (the responses, previous result or review settings cannot be used)");
+            index.notReviewed(file.toString(), "its responses, previous result or review settings cannot be used");
         } catch (RulesetException e) {
             e.errors().forEach(err::println);
             err.println(file + ": not reviewed (the ruleset cannot be used)");

@@ -75,7 +75,8 @@ public final class RuleChecks {
                 if (ex.bool(r.that(), values)) {
                     b.pass();
                 } else {
-                    b.fail(Severity.fromLabel(r.severity()), fill(r.message(), values) + " (" + r.clause() + ")");
+                    b.failRequirement(Severity.fromLabel(r.severity()), r.finding(),
+                            fill(r.message(), values) + " (" + r.clause() + ")");
                 }
             }
             for (CheckDef.CautionDef c : def.cautions()) {

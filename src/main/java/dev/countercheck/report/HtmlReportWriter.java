@@ -1,6 +1,7 @@
 package dev.countercheck.report;
 
 import dev.countercheck.review.Review;
+import dev.countercheck.round.ReviewRound;
 import freemarker.core.HTMLOutputFormat;
 import freemarker.core.TemplateClassResolver;
 import freemarker.template.Configuration;
@@ -41,9 +42,14 @@ public final class HtmlReportWriter {
         freemarker.setNewBuiltinClassResolver(TemplateClassResolver.ALLOWS_NOTHING_RESOLVER);
     }
 
-    /** The HTML page for {@code review}. */
+    /** The HTML page for {@code review} on its own: no sign-off names, responses or previous revision. */
     public String write(Review review) {
-        return render(TEMPLATE, HtmlModel.of(review));
+        return write(review, ReviewRound.none(""));
+    }
+
+    /** The HTML page for {@code review} in its round: sign-off, responses, comparison with the previous revision. */
+    public String write(Review review, ReviewRound round) {
+        return render(TEMPLATE, HtmlModel.of(review, round));
     }
 
     /** The page of template {@code name} for {@code model}. */

@@ -10,6 +10,7 @@ import com.openhtmltopdf.svgsupport.BatikSVGDrawer.SvgExternalResourceMode;
 import com.openhtmltopdf.svgsupport.BatikSVGDrawer.SvgScriptMode;
 import com.openhtmltopdf.util.XRLog;
 import dev.countercheck.review.Review;
+import dev.countercheck.round.ReviewRound;
 import org.apache.pdfbox.cos.COSArray;
 import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.cos.COSString;
@@ -82,6 +83,11 @@ public final class PdfReportWriter {
     /** The PDF bytes of the report of {@code review}. */
     public byte[] write(Review review) {
         return render(html.write(review), review);
+    }
+
+    /** The PDF bytes of the report of {@code review} in its round. */
+    public byte[] write(Review review, ReviewRound round) {
+        return render(html.write(review, round), review);
     }
 
     byte[] render(String page, Review review) {

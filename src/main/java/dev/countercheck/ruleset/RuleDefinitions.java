@@ -13,8 +13,11 @@ import dev.countercheck.ruleset.CheckDef.RequirementDef;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /** Reads the {@code tables:} and {@code checks:} blocks of one ruleset file into definitions. */
 final class RuleDefinitions {
@@ -25,8 +28,9 @@ final class RuleDefinitions {
             "values", "requirements", "cautions");
     private static final List<String> CAUTION_KEYS = List.of("when", "text");
     private static final List<String> DERIVED_KEYS = List.of("symbol", "formula", "unit", "clause");
-    private static final List<String> REQUIREMENT_KEYS = List.of("that", "severity", "utilisation", "message",
-            "clause");
+    private static final List<String> REQUIREMENT_KEYS = List.of("that", "finding", "severity", "utilisation",
+            "message", "clause");
+    private static final Pattern FIRST_NAME = Pattern.compile("[A-Za-z_][A-Za-z0-9_]*");
 
     private final Problems problems;
     private final String origin;
@@ -102,9 +106,10 @@ final class RuleDefinitions {
                     String rPath = path + ".requirements[" + i + "]";
                     mapping(list.items().get(i), rPath).ifPresent(m -> {
                         unknownKeys(m, rPath, REQUIREMENT_KEYS);
-                        requirements.add(new RequirementDef(required(m, "that", rPath), required(m, "severity", rPath),
-                                text(m, "utilisation"), required(m, "message", rPath), required(m, "clause", rPath),
-                                m.location()));
+                        String that = required(m, "that", rPath);
+                        requirements.add(new RequirementDef(that, text(m, "finding").orElseGet(() -> firstName(that)),
+                                required(m, "severity", rPath), text(m, "utilisation"), required(m, "message", rPath),
+                                required(m, "clause", rPath), m.location()));
                     });
                 }
             } else if (reqs.isPresent()) {
@@ -205,4 +210,10 @@ final class RuleDefinitions {
         return out;
     }
 
+
+    /** The default finding name of a requirement: the first name its condition tests, hyphenated. */
+    private static String firstName(String that) {
+        Matcher m = FIRST_NAME.matcher(that);
+        return m.find() ? m.group().toLowerCase(Locale.ROOT).replace('_', '-') : "requirement";
+    }
 }

@@ -37,8 +37,10 @@ import java.util.Optional;
 public final class RulesetLoader {
 
     private static final List<String> TOP_KEYS = List.of("ruleset", "id", "extends", "title", "standard", "version",
-            "parameters", "tables", "checks");
+            "parameters", "severities", "tables", "checks");
     private static final List<String> PARAMETER_KEYS = List.of("symbol", "value", "unit", "clause", "note");
+    private static final List<String> SEVERITY_KEYS = List.of("severity", "meaning");
+    private static final List<String> SEVERITIES = List.of("critical", "major", "minor", "note");
 
     /** A ruleset is a short text file; anything larger is refused before it is read. */
     private static final long MAX_FILE_BYTES = 1024 * 1024;
@@ -96,6 +98,7 @@ public final class RulesetLoader {
         Map<String, Parameter> parameters = new LinkedHashMap<>();
         Map<String, TableDef> tables = new LinkedHashMap<>();
         Map<String, CheckDef> checks = new LinkedHashMap<>();
+        Map<String, SeverityDef> severities = new LinkedHashMap<>();
         List<InputError> errors = new ArrayList<>();
         for (int i = 0; i < chain.size(); i++) {
             RulesetFile file = chain.get(i);
@@ -111,6 +114,7 @@ public final class RulesetLoader {
                 problems.add(params.get().value().location(), "parameters",
                         "expected a mapping of parameter names to their values");
             }
+            readSeverities(file, severities);
             RuleDefinitions definitions = new RuleDefinitions(problems, file.name());
             file.root().entry("tables").ifPresent(t -> definitions.readTables(t.value(), tables));
             file.root().entry("checks").ifPresent(c -> definitions.readChecks(c.value(), checks));
@@ -121,6 +125,11 @@ public final class RulesetLoader {
         if (!missing.isEmpty()) {
             errors.add(new InputError(top.root().location(), "parameters", "the ruleset chain does not define "
                     + String.join(", ", missing) + ", which the review needs"));
+        }
+        List<String> unset = vocabulary.findingKinds().stream().filter(k -> !severities.containsKey(k)).sorted().toList();
+        if (!unset.isEmpty()) {
+            errors.add(new InputError(top.root().location(), "severities", "the ruleset chain gives no severity to "
+                    + String.join(", ", unset) + ", which the review raises"));
         }
         if (!errors.isEmpty()) {
             throw new RulesetException(errors);
@@ -136,7 +145,7 @@ public final class RulesetLoader {
                 optionalText(root, "standard").orElse(""), optionalText(root, "version").orElse(""), hash(chain),
                 chain.stream().map(RulesetFile::name).toList(), Collections.unmodifiableMap(parameters),
                 Collections.unmodifiableMap(tables), Collections.unmodifiableMap(validated), validator.rules(),
-                expressions);
+                Collections.unmodifiableMap(severities), expressions);
     }
 
     private void checkTop(RulesetFile file) {
@@ -199,6 +208,54 @@ public final class RulesetLoader {
                 optionalText(map, "unit").orElse(base ? "-" : inherited.unit()),
                 optionalText(map, "clause").orElse(""),
                 optionalText(map, "note").orElse(base ? "" : inherited.note()), origin));
+    }
+
+    /**
+     * The {@code severities} section: each kind of finding with its severity and meaning. A ruleset that
+     * extends another may move a kind's severity; the meaning stays the one first declared unless restated.
+     */
+    private void readSeverities(RulesetFile file, Map<String, SeverityDef> severities) {
+        Problems problems = file.problems();
+        Optional<Entry> section = file.root().entry("severities");
+        if (section.isEmpty()) {
+            return;
+        }
+        if (!(section.get().value() instanceof MapNode map)) {
+            problems.add(section.get().value().location(), "severities",
+                    "expected a mapping of finding kinds to their severity and meaning");
+            return;
+        }
+        for (Entry e : map.entries()) {
+            String path = "severities." + e.key();
+            SeverityDef inherited = severities.get(e.key());
+            if (!vocabulary.findingKinds().contains(e.key())) {
+                problems.add(e.keyLocation(), path, "'" + e.key() + "' is not a kind of finding the review raises"
+                        + Suggestions.hint(e.key(), vocabulary.findingKinds()));
+                continue;
+            }
+            if (!(e.value() instanceof MapNode m)) {
+                problems.add(e.value().location(), path, "expected a mapping with " + String.join(", ", SEVERITY_KEYS));
+                continue;
+            }
+            for (Entry f : m.entries()) {
+                if (!SEVERITY_KEYS.contains(f.key())) {
+                    problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + f.key() + "'"
+                            + Suggestions.hint(f.key(), SEVERITY_KEYS));
+                }
+            }
+            Optional<String> severity = optionalText(m, "severity");
+            Optional<String> meaning = optionalText(m, "meaning").or(() -> Optional.ofNullable(inherited)
+                    .map(SeverityDef::meaning));
+            if (severity.isEmpty() || meaning.isEmpty()) {
+                problems.add(m.location(), path, "'" + e.key() + "' needs a severity"
+                        + (inherited == null ? " and its meaning" : ""));
+            } else if (!SEVERITIES.contains(severity.get())) {
+                problems.add(m.entry("severity").get().value().location(), path + ".severity", "severity '"
+                        + severity.get() + "' is not one of " + String.join(", ", SEVERITIES));
+            } else {
+                severities.put(e.key(), new SeverityDef(e.key(), severity.get(), meaning.get(), file.name()));
+            }
+        }
     }
 
     private static Optional<Double> number(Node node, Problems problems, String path) {

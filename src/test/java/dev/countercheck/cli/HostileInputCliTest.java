@@ -155,7 +155,8 @@ class HostileInputCliTest {
         Run run = run("review", SAMPLE.toString(), "--out", out.toString(), "--date", DATE);
 
         assertThat(run.code()).as(run.err()).isIn(ExitCodes.OK, ExitCodes.FINDINGS);
-        assertThat(names(out)).containsExactly("harbour-lane.html", "harbour-lane.json");
+        assertThat(names(out)).containsExactly("harbour-lane.html", "harbour-lane.json",
+                "harbour-lane.responses.csv", "harbour-lane.responses.xlsx");
     }
 
     /**
@@ -180,11 +181,11 @@ class HostileInputCliTest {
         assertThat(run("review", newSubmission.toString(), "--out", expected.toString(), "--date", DATE).code())
                 .isNotEqualTo(ExitCodes.UNUSABLE);
         List<String> reports = names(expected);
-        assertThat(reports).containsExactly("plan.html", "plan.json");
+        assertThat(reports).containsExactly("plan.html", "plan.json", "plan.responses.csv", "plan.responses.xlsx");
 
         int halted = 0;
         for (int n = 1; ; n++) {
-            assertThat(n).as("a run of two reports ends within a few write steps").isLessThan(10);
+            assertThat(n).as("a run of four reports ends within a few write steps").isLessThan(12);
             Path out = temp.resolve("killed-at-" + n);
             Files.createDirectories(out);
             for (String report : reports) {
@@ -211,8 +212,8 @@ class HostileInputCliTest {
             }
             halted++;
         }
-        assertThat(halted).as("runs halted before each temporary file and each move of the two reports")
-                .isEqualTo(4);
+        assertThat(halted).as("runs halted before each temporary file and each move of the reports")
+                .isEqualTo(2 * reports.size());
     }
 
     /**

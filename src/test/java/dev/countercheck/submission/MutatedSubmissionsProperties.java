@@ -115,7 +115,8 @@ class MutatedSubmissionsProperties {
             } else {
                 reviews++;
                 assertThat(code).as("a review's exit status for %s%n%s", mutant, all).isIn(0, 1);
-                assertThat(list(out)).containsExactly("mutant.html", "mutant.json");
+                assertThat(list(out)).containsExactly("mutant.html", "mutant.json", "mutant.responses.csv",
+                        "mutant.responses.xlsx");
                 assertThat(YAML_READER.readTree(out.resolve("mutant.json").toFile()).path("verdict").asText())
                         .as("a complete JSON result").isNotEmpty();
                 assertThat(Files.readString(out.resolve("mutant.html")).strip()).as("a complete HTML report")
