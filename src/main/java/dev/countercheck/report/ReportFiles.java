@@ -48,7 +48,7 @@ public final class ReportFiles {
         }
     }
 
-    private static void write(Path file, byte[] content) throws IOException {
+    static void write(Path file, byte[] content) throws IOException {
         try (FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {
             ByteBuffer bytes = ByteBuffer.wrap(content);
             while (bytes.hasRemaining()) {
@@ -58,7 +58,7 @@ public final class ReportFiles {
         }
     }
 
-    private static void move(Path from, Path to) throws IOException {
+    static void move(Path from, Path to) throws IOException {
         try {
             Files.move(from, to, StandardCopyOption.ATOMIC_MOVE);
         } catch (AtomicMoveNotSupportedException e) {

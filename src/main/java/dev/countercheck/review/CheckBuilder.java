@@ -111,7 +111,11 @@ public final class CheckBuilder {
         return this;
     }
 
-    /** A finding that does not change the status (a note, a remark on geometry). */
+    /**
+     * A finding beside the comparison: a note or a remark leaves the status as it is; a major or
+     * critical one fails a check that would otherwise pass (a check never reads pass while it
+     * raises a serious finding about its own subject).
+     */
     public CheckBuilder finding(Severity severity, String message) {
         findings.add(new DraftFinding(severity, spec.id(), message, spec.basis()));
         return this;
@@ -128,6 +132,12 @@ public final class CheckBuilder {
     }
 
     public CheckOutcome build() {
+        if (status == CheckStatus.PASS) {
+            findings.stream().filter(f -> f.severity().atLeast(Severity.MAJOR)).forEach(f -> {
+                status = CheckStatus.FAIL;
+                failures.add(f.message());
+            });
+        }
         Map<String, Value> ordered = new LinkedHashMap<>();
         spec.quantities().stream().filter(q -> values.containsKey(q.name()))
                 .forEach(q -> ordered.put(q.name(), values.get(q.name())));

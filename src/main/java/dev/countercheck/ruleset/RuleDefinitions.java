@@ -91,7 +91,7 @@ final class RuleDefinitions {
                 String dPath = path + ".derived." + d.key();
                 mapping(d.value(), dPath).ifPresent(m -> {
                     unknownKeys(m, dPath, DERIVED_KEYS);
-                    derived.add(new DerivedDef(d.key(), text(m, "symbol").orElse(d.key()), required(m, "formula", dPath),
+                    derived.add(new DerivedDef(d.key(), text(m, "symbol").orElse(d.key()), expression(m, "formula", dPath),
                             required(m, "unit", dPath), required(m, "clause", dPath), d.keyLocation()));
                 });
             }
@@ -102,8 +102,8 @@ final class RuleDefinitions {
                     String rPath = path + ".requirements[" + i + "]";
                     mapping(list.items().get(i), rPath).ifPresent(m -> {
                         unknownKeys(m, rPath, REQUIREMENT_KEYS);
-                        requirements.add(new RequirementDef(required(m, "that", rPath), required(m, "severity", rPath),
-                                text(m, "utilisation"), required(m, "message", rPath), required(m, "clause", rPath),
+                        requirements.add(new RequirementDef(expression(m, "that", rPath), required(m, "severity", rPath),
+                                optionalExpression(m, "utilisation", rPath), required(m, "message", rPath), required(m, "clause", rPath),
                                 m.location()));
                     });
                 }
@@ -117,14 +117,14 @@ final class RuleDefinitions {
                     String cPath = path + ".cautions[" + i + "]";
                     mapping(list.items().get(i), cPath).ifPresent(m -> {
                         unknownKeys(m, cPath, CAUTION_KEYS);
-                        cautions.add(new CheckDef.CautionDef(required(m, "when", cPath), required(m, "text", cPath),
+                        cautions.add(new CheckDef.CautionDef(expression(m, "when", cPath), required(m, "text", cPath),
                                 m.location()));
                     });
                 }
             } else if (cautionNodes.isPresent()) {
                 problems.add(cautionNodes.get().location(), path + ".cautions", "expected a list of cautions");
             }
-            into.put(e.key(), new CheckDef(e.key(), required(c, "scope", path), text(c, "applies_when"),
+            into.put(e.key(), new CheckDef(e.key(), required(c, "scope", path), optionalExpression(c, "applies_when", path),
                     text(c, "not_applicable").orElse("the rule's applies_when condition is false"), derived,
                     texts(c.entry("values").map(Entry::value), path + ".values"), requirements, cautions, origin,
                     e.keyLocation()));
@@ -160,6 +160,23 @@ final class RuleDefinitions {
                     + ("clause".equals(key) ? ": every rule names the clause it rests on" : ""));
         }
         return value.orElse("");
+    }
+
+    /** A required expression, refused at its place when it exceeds {@link ExpressionBounds}. */
+    private String expression(MapNode map, String key, String path) {
+        String text = required(map, key, path);
+        bounded(map, key, path);
+        return text;
+    }
+
+    private Optional<String> optionalExpression(MapNode map, String key, String path) {
+        bounded(map, key, path);
+        return text(map, key);
+    }
+
+    private void bounded(MapNode map, String key, String path) {
+        map.entry(key).ifPresent(e -> text(map, key).flatMap(ExpressionBounds::problem)
+                .ifPresent(why -> problems.add(e.value().location(), path + "." + key, why)));
     }
 
     private List<String> texts(Optional<Node> node, String path) {
