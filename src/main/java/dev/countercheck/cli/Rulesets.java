@@ -1,7 +1,6 @@
 package dev.countercheck.cli;
 
 import dev.countercheck.element.ProjectReviewer;
-import dev.countercheck.input.Shown;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.ruleset.RulesetException;
 import dev.countercheck.ruleset.RulesetLoader;
@@ -61,7 +60,7 @@ final class Rulesets {
     private Ruleset announced(String reference, Ruleset r) {
         loaded.put(reference, r);
         r.files().stream().filter(f -> f.contains(RulesetLoader.SHADOWS)).forEach(f -> console.println(
-                "ruleset " + Shown.text(reference) + ": using " + Shown.text(f)));
+                "ruleset " + reference + ": using " + f));
         return r;
     }
 }

@@ -344,17 +344,16 @@ public final class RulesetLoader {
      */
     private Optional<RulesetFile> readFile(Path p, String name, Optional<SourceLocation> referencedAt,
                                            List<InputError> errors) throws IOException {
-        String shown = Shown.text(name);
         if (!Files.isRegularFile(p)) {
-            return notFound("no ruleset file " + shown, referencedAt, errors);
+            return notFound("no ruleset file " + name, referencedAt, errors);
         }
         if (Files.size(p) > MAX_FILE_BYTES) {
-            return notFound(shown + " is larger than " + MAX_FILE_BYTES / 1024 + " KiB: not a ruleset", referencedAt,
+            return notFound(name + " is larger than " + MAX_FILE_BYTES / 1024 + " KiB: not a ruleset", referencedAt,
                     errors);
         }
         byte[] bytes = Files.readAllBytes(p);
         if (!startsAsARuleset(bytes)) {
-            return notFound(shown + " is not a ruleset: a ruleset file starts with the line 'ruleset: 1' (its"
+            return notFound(name + " is not a ruleset: a ruleset file starts with the line 'ruleset: 1' (its"
                     + " content is not shown)", referencedAt, errors);
         }
         return parse(bytes, name, name, p.getParent(), errors);
