@@ -6,6 +6,7 @@ import dev.countercheck.input.Node.ListNode;
 import dev.countercheck.input.Node.MapNode;
 import dev.countercheck.input.Node.ScalarNode;
 import dev.countercheck.input.Problems;
+import dev.countercheck.input.Shown;
 import dev.countercheck.input.Suggestions;
 import dev.countercheck.ruleset.CheckDef.DerivedDef;
 import dev.countercheck.ruleset.CheckDef.RequirementDef;
@@ -142,7 +143,7 @@ final class RuleDefinitions {
     private void unknownKeys(MapNode map, String path, List<String> known) {
         for (Entry e : map.entries()) {
             if (!known.contains(e.key())) {
-                problems.add(e.keyLocation(), path + "." + e.key(), "unknown key '" + e.key() + "'"
+                problems.add(e.keyLocation(), path + "." + e.key(), "unknown key '" + Shown.text(e.key()) + "'"
                         + Suggestions.hint(e.key(), known));
             }
         }

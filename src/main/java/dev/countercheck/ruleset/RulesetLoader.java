@@ -185,7 +185,7 @@ public final class RulesetLoader {
         Problems problems = file.problems();
         for (Entry e : file.root().entries()) {
             if (!TOP_KEYS.contains(e.key())) {
-                problems.add(e.keyLocation(), e.key(), "unknown key '" + e.key() + "'"
+                problems.add(e.keyLocation(), e.key(), "unknown key '" + Shown.text(e.key()) + "'"
                         + Suggestions.hint(e.key(), TOP_KEYS));
             }
         }
@@ -206,7 +206,7 @@ public final class RulesetLoader {
         String path = "parameters." + e.key();
         Parameter inherited = parameters.get(e.key());
         if (!base && inherited == null) {
-            problems.add(e.keyLocation(), path, "'" + e.key() + "' is not a parameter of the ruleset this one extends"
+            problems.add(e.keyLocation(), path, "'" + Shown.text(e.key()) + "' is not a parameter of the ruleset this one extends"
                     + Suggestions.hint(e.key(), parameters.keySet()));
             return;
         }
@@ -216,7 +216,7 @@ public final class RulesetLoader {
         }
         for (Entry f : map.entries()) {
             if (!PARAMETER_KEYS.contains(f.key())) {
-                problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + f.key() + "'"
+                problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + Shown.text(f.key()) + "'"
                         + Suggestions.hint(f.key(), PARAMETER_KEYS));
             }
         }
@@ -319,7 +319,7 @@ public final class RulesetLoader {
                         + " among the bundled rulesets", referencedAt, errors);
             }
             String name = "rulesets/" + reference + ".yaml";
-            return parse(bundled.get(), name + " (bundled)", name, BUNDLED, errors);
+            return parse(bundled.get(), name, name, BUNDLED, errors);
         } catch (IOException e) {
             return notFound("cannot read ruleset " + Shown.text(reference) + ": " + e.getMessage(), referencedAt,
                     errors);

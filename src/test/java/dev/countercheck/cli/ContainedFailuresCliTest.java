@@ -129,7 +129,7 @@ class ContainedFailuresCliTest {
 
         assertThat(p.waitFor()).as(Files.readString(temp.resolve("log.txt"))).isIn(ExitCodes.OK, ExitCodes.FINDINGS);
         assertThat(Files.readString(sample.resolveSibling("out/job.json")))
-                .contains("rulesets/en1992-recommended.yaml (bundled)").doesNotContain("Planted");
+                .contains("\"rulesets/en1992-recommended.yaml\"").doesNotContain("Planted");
     }
 
     /** The class path with absolute entries, for a process started in another folder. */
