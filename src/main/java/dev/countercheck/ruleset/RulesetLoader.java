@@ -297,25 +297,18 @@ public final class RulesetLoader {
                 Path p = from.map(f -> f.resolve(reference)).orElse(Path.of(reference)).toAbsolutePath().normalize();
                 return readFile(p, p.toString(), referencedAt, errors);
             }
-            if (from.isPresent() && !from.get().equals(BUNDLED)) {
-                Path sibling = from.get().resolve(reference + ".yaml");
-                if (Files.isRegularFile(sibling)) {
-                    return readFile(sibling, sibling.toString(), referencedAt, errors);
-                }
-            }
             Optional<byte[]> bundled = bundled(reference);
-            if (from.isEmpty() && localFolder.isPresent()) {
-                Path local = localFolder.get().resolve(reference + ".yaml");
-                if (Files.isRegularFile(local)) {
-                    Optional<RulesetFile> file = readFile(local, local.toString(), referencedAt, errors);
-                    boolean shadows = bundled.isPresent() && file.isPresent()
-                            && !Arrays.equals(bundled.get(), file.get().bytes());
-                    return shadows ? file.map(f -> f.named(f.name() + SHADOWS + reference + ")")) : file;
-                }
+            Optional<Path> folder = from.isPresent() ? from.filter(f -> !f.equals(BUNDLED)) : localFolder;
+            Path local = folder.map(f -> f.resolve(reference + ".yaml")).orElse(BUNDLED);
+            if (folder.isPresent() && Files.isRegularFile(local)) {
+                Optional<RulesetFile> file = readFile(local, local.toString(), referencedAt, errors);
+                boolean shadows = bundled.isPresent() && file.isPresent()
+                        && !Arrays.equals(bundled.get(), file.get().bytes());
+                return shadows ? file.map(f -> f.named(f.name() + SHADOWS + reference + ")")) : file;
             }
             if (bundled.isEmpty()) {
                 return notFound("no ruleset with id '" + reference + "'"
-                        + localFolder.filter(f -> from.isEmpty()).map(f -> " in " + f + " or").orElse("")
+                        + folder.map(f -> " in " + f + " or").orElse("")
                         + " among the bundled rulesets", referencedAt, errors);
             }
             String name = "rulesets/" + reference + ".yaml";

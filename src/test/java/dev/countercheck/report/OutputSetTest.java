@@ -77,6 +77,35 @@ class OutputSetTest {
     }
 
     @Test
+    void writesTextAsUtf8AndBytesAsGivenIntoAFolderItCreates() throws IOException {
+        Path folder = dir.resolve("new/reports");
+        byte[] bytes = {0, 1, 2, (byte) 0xFF};
+        try (OutputSet set = OutputSet.in(folder)) {
+            set.add("a.html", "Σ P_i·x_i ≤ VRd,c\n").add("a.pdf", bytes).commit();
+        }
+        assertThat(Files.readString(folder.resolve("a.html"))).isEqualTo("Σ P_i·x_i ≤ VRd,c\n");
+        assertThat(Files.readAllBytes(folder.resolve("a.pdf"))).isEqualTo(bytes);
+        try (Stream<Path> files = Files.list(folder)) {
+            assertThat(files.map(f -> f.getFileName().toString()).sorted()).containsExactly("a.html", "a.pdf");
+        }
+    }
+
+    @Test
+    void aFolderInThePlaceOfAReportIsRefusedAndNothingIsLeft() throws IOException {
+        Files.createDirectories(dir.resolve("a.json"));
+        Files.writeString(dir.resolve("a.json/keep.txt"), "keep");
+
+        assertThatThrownBy(() -> {
+            try (OutputSet set = OutputSet.in(dir)) {
+                set.add("a.html", NEW_HTML).add("a.json", NEW_JSON).commit();
+            }
+        }).isInstanceOf(IOException.class);
+
+        assertThat(names()).containsExactly("a.json");
+        assertThat(Files.readString(dir.resolve("a.json/keep.txt"))).isEqualTo("keep");
+    }
+
+    @Test
     void aFileTheToolDidNotWriteIsNeverReplaced() throws IOException {
         Files.writeString(dir.resolve("a.json"), "{\"submission\": \"another firm's data\"}\n");
 

@@ -188,6 +188,10 @@ class RulesetBoundsTest {
 
         assertThat(r.files().get(r.files().size() - 1)).startsWith(dir.resolve("en1992-uk-na.yaml").toString())
                 .endsWith("(in place of the bundled ruleset en1992-uk-na)");
+        Files.writeString(dir.resolve("house.yaml"), HEAD.replace("en1992-recommended", "en1992-uk-na"));
+        assertThat(loader(Optional.empty()).load(dir.resolve("house.yaml").toString()).files())
+                .as("an extends that finds a changed copy beside its file says so too")
+                .anyMatch(f -> f.endsWith("(in place of the bundled ruleset en1992-uk-na)"));
         assertThat(loader(Optional.empty()).load("en1992-uk-na").files())
                 .as("without the checker's folder, the bundled one")
                 .containsExactly("rulesets/en1992-recommended.yaml", "rulesets/en1992-uk-na.yaml");
