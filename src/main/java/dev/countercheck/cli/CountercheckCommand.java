@@ -37,6 +37,8 @@ public final class CountercheckCommand implements Runnable {
             sub.getCommandSpec().exitCodeOnExecutionException(ExitCodes.INTERNAL);
         });
         cl.setExecutionStrategy(CountercheckCommand::execute);
+        // help in plain text: its colours would be control characters, which ConsoleText escapes
+        cl.setColorScheme(CommandLine.Help.defaultColorScheme(CommandLine.Help.Ansi.OFF));
         return cl;
     }
 
@@ -49,7 +51,7 @@ public final class CountercheckCommand implements Runnable {
         int code;
         try {
             code = new CommandLine.RunLast().execute(parseResult);
-        } catch (StackOverflowError | OutOfMemoryError e) {
+        } catch (Error e) { // a stack overflow, out of memory: a fault to report in one line like any other
             code = internalError(root, e);
         }
         root.getOut().flush();

@@ -17,7 +17,7 @@ import java.util.concurrent.Callable;
 /** {@code validate FILE...}: reads and validates submissions, writes nothing. */
 @Command(name = "validate", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Read and validate submissions, and the ruleset each names, without reviewing them."
-                + " Exit 0 when all are usable, 2 otherwise.")
+                + " Exit 0 when all are usable, 2 otherwise, 3 on an internal error.")
 public final class ValidateCommand implements Callable<Integer> {
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "Submission files (YAML or JSON) or folders of them.")

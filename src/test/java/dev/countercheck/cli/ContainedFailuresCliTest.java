@@ -280,7 +280,7 @@ class ContainedFailuresCliTest {
     @Test
     void errorsAndExceptionsEndInOneLineAndExitThree() {
         for (Throwable thrown : List.of(new StackOverflowError(), new OutOfMemoryError("Java heap space"),
-                new IllegalStateException("a bug"), new IOException("a bug"))) {
+                new NoClassDefFoundError("a missing class"), new IllegalStateException("a bug"), new IOException("a bug"))) {
             CommandLine cl = CountercheckCommand.commandLine();
             cl.addSubcommand("fault", new Fault(thrown));
             StringWriter out = new StringWriter();

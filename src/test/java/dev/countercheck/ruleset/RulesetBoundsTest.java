@@ -78,12 +78,28 @@ class RulesetBoundsTest {
     }
 
     @ParameterizedTest(name = "{0}")
-    @CsvSource({"FACT(100000000)", "fact(1e8)", "Fact (1e8)"})
-    void aCostlyLibraryFunctionIsRefused(String call) throws IOException {
-        assertThat(errors(formula("as_x + " + call))).singleElement().satisfies(e -> {
+    @CsvSource(delimiter = '|', textBlock = """
+            as_x + FACT(100000000)      | the function FACT is not offered to rules
+            as_x + fact(1e2)            | the function fact is not offered to rules
+            as_x + Fact (1e2)           | the function Fact is not offered to rules
+            ROUND(as_x, 100)            | the function ROUND is not offered to rules
+            SQRT(1e300000)              | the number 1e300000 is larger than any a rule needs
+            as_x * 2000000              | the number 2000000 is larger than any a rule needs
+            2 ^ 999999999               | a power is raised only to a number of at most 10
+            as_x ^ as_x                 | a power is raised only to a number of at most 10
+            as_x ^ (1/3 + 20)           | a power is raised only to a number of at most 10
+            """)
+    void aCostlyCalculationIsRefused(String expression, String message) throws IOException {
+        assertThat(errors(formula(expression))).singleElement().satisfies(e -> {
             assertThat(e.location().line()).isEqualTo(6);
-            assertThat(e.message()).containsIgnoringCase("the function fact is not offered to rules");
+            assertThat(e.message()).contains(message);
         });
+    }
+
+    @Test
+    void smallPowersAndTheAllowedFunctionsAreAccepted() throws Exception {
+        Files.writeString(dir.resolve("house.yaml"), HEAD + formula("MAX(1, MIN(2, ABS(SQRT(as_x) ^ 0.5 + 2 ^ (1/3))))"));
+        assertThat(loader(Optional.of(dir)).load("house").checks()).containsKey("max-steel");
     }
 
     @ParameterizedTest(name = "{0}: {1}")
