@@ -18,6 +18,7 @@ import picocli.CommandLine.Parameters;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
@@ -158,6 +159,10 @@ public final class ReviewCommand implements Callable<Integer> {
         } catch (IOException e) {
             err.println(file + ": cannot write the reports to " + outDir + ": " + IoReasons.of(e)
                     + "; the previous reports, if any, are left as they were");
+            index.notReviewed(file.toString(), "its reports could not be written");
+        } catch (UncheckedIOException e) {
+            err.println(file + ": cannot write the reports: the temporary folder cannot be used: "
+                    + IoReasons.of(e.getCause()) + "; the previous reports, if any, are left as they were");
             index.notReviewed(file.toString(), "its reports could not be written");
         } catch (RuntimeException | StackOverflowError | OutOfMemoryError e) {
             err.println(file + ": not reviewed: " + InternalFailure.line(e, debug));

@@ -205,6 +205,26 @@ class ContainedFailuresCliTest {
         assertThat(Files.readAllBytes(out.resolve("harbour-lane.html"))).isEqualTo(html);
     }
 
+    /** The PDF needs the machine's temporary folder: when it cannot be used, the previous reports stay whole. */
+    @Test
+    void anUnusableTemporaryFolderLeavesThePreviousReportsWholeAndSaysWhy() throws Exception {
+        Path out = temp.resolve("out");
+        assertThat(run("review", SAMPLE.toString(), "--out", out.toString(), "--date", DATE).code())
+                .isIn(ExitCodes.OK, ExitCodes.FINDINGS);
+        byte[] json = Files.readAllBytes(out.resolve("harbour-lane.json"));
+        Process p = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-XX:TieredStopAtLevel=1", "-Djava.io.tmpdir=" + temp.resolve("no-such-folder"),
+                "-cp", System.getProperty("java.class.path"), Main.class.getName(), "review", SAMPLE.toString(),
+                "--out", out.toString(), "--date", "2026-02-02", "--pdf")
+                .redirectErrorStream(true).redirectOutput(temp.resolve("log.txt").toFile()).start();
+
+        assertThat(p.waitFor()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(Files.readString(temp.resolve("log.txt"))).contains("the temporary folder cannot be used")
+                .doesNotContain("internal error").doesNotContain("\tat ");
+        assertThat(names(out)).containsExactly("harbour-lane.html", "harbour-lane.json");
+        assertThat(Files.readAllBytes(out.resolve("harbour-lane.json"))).isEqualTo(json);
+    }
+
     @Test
     void aBatchWithNothingReviewableWritesNothing() throws IOException {
         Path folder = Files.createDirectories(temp.resolve("batch"));
