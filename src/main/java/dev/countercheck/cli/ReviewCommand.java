@@ -157,13 +157,9 @@ public final class ReviewCommand implements Callable<Integer> {
             err.println(file + ": not reviewed (the ruleset cannot be used)");
             index.notReviewed(file.toString(), "the ruleset cannot be used");
         } catch (IOException e) {
-            err.println(file + ": cannot write the reports to " + outDir + ": " + IoReasons.of(e)
-                    + "; the previous reports, if any, are left as they were");
-            index.notReviewed(file.toString(), "its reports could not be written");
+            notWritten(file, "cannot write the reports to " + outDir + ": " + IoReasons.of(e), index);
         } catch (UncheckedIOException e) {
-            err.println(file + ": cannot write the reports: the temporary folder cannot be used: "
-                    + IoReasons.of(e.getCause()) + "; the previous reports, if any, are left as they were");
-            index.notReviewed(file.toString(), "its reports could not be written");
+            notWritten(file, "cannot write the reports: " + e.getMessage() + ": " + IoReasons.of(e.getCause()), index);
         } catch (RuntimeException | StackOverflowError | OutOfMemoryError e) {
             err.println(file + ": not reviewed: " + InternalFailure.line(e, debug));
             if (debug) {
@@ -173,6 +169,11 @@ public final class ReviewCommand implements Callable<Integer> {
             return ExitCodes.INTERNAL;
         }
         return ExitCodes.UNUSABLE;
+    }
+
+    private void notWritten(Path file, String why, ReportIndex index) {
+        spec.commandLine().getErr().println(file + ": " + why + "; the previous reports, if any, are left as they were");
+        index.notReviewed(file.toString(), "its reports could not be written");
     }
 
     private int writeIndex(ReportIndex index, int submissions) {

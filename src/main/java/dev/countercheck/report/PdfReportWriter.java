@@ -93,7 +93,7 @@ public final class PdfReportWriter {
             font = fontFile();
         } catch (IOException e) {
             // the machine's temporary folder is full or unusable: a condition to report, not a fault of the tool
-            throw new UncheckedIOException(e);
+            throw new UncheckedIOException("the temporary folder cannot be used for the PDF's font", e);
         }
         try {
             PdfRendererBuilder builder = new PdfRendererBuilder()

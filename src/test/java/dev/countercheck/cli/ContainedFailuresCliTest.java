@@ -219,7 +219,7 @@ class ContainedFailuresCliTest {
                 .redirectErrorStream(true).redirectOutput(temp.resolve("log.txt").toFile()).start();
 
         assertThat(p.waitFor()).isEqualTo(ExitCodes.UNUSABLE);
-        assertThat(Files.readString(temp.resolve("log.txt"))).contains("the temporary folder cannot be used")
+        assertThat(Files.readString(temp.resolve("log.txt"))).contains("the temporary folder cannot be used for the PDF")
                 .doesNotContain("internal error").doesNotContain("\tat ");
         assertThat(names(out)).containsExactly("harbour-lane.html", "harbour-lane.json");
         assertThat(Files.readAllBytes(out.resolve("harbour-lane.json"))).isEqualTo(json);
