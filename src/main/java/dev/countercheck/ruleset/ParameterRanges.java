@@ -1,7 +1,5 @@
 package dev.countercheck.ruleset;
 
-import dev.countercheck.eurocode.Num;
-
 import java.util.Optional;
 
 /**
@@ -25,34 +23,38 @@ final class ParameterRanges {
     private ParameterRanges() {
     }
 
-    /** Why {@code value} is not plausible for the parameter {@code name} in {@code unit}; empty when it is. */
-    static Optional<String> problem(String name, String unit, double value) {
+    /**
+     * Why {@code value} is not plausible for the parameter {@code name} in {@code unit}; empty when it is.
+     *
+     * @param written the value as the file writes it, for the message
+     */
+    static Optional<String> problem(String name, String unit, double value, String written) {
         if ("-".equals(unit) && name.startsWith("gamma_")) {
-            return outside(value, 1, true, 5, true, "a partial factor", "from 1 to 5: a factor below 1 would reduce a"
+            return outside(value, written, 1, true, 5, true, "a partial factor", "from 1 to 5: a factor below 1 would reduce a"
                     + " load or raise a resistance");
         }
         if ("-".equals(unit) && name.endsWith("_factor")) {
-            return outside(value, 0, false, 100, true, "a factor", "greater than 0 and at most 100");
+            return outside(value, written, 0, false, 100, true, "a factor", "greater than 0 and at most 100");
         }
         return switch (unit) {
-            case "-" -> outside(value, 0, true, 100, true, "a plain number", "from 0 to 100");
-            case "kN/m3" -> outside(value, 1, true, 100, true, "a unit weight", "from 1 to 100 kN/m3 (concrete weighs"
+            case "-" -> outside(value, written, 0, true, 100, true, "a plain number", "from 0 to 100");
+            case "kN/m3" -> outside(value, written, 1, true, 100, true, "a unit weight", "from 1 to 100 kN/m3 (concrete weighs"
                     + " some 25 kN/m3)");
-            case "mm" -> outside(value, 0, true, 1e5, true, "a length", "from 0 to 100000 mm (100 m)");
-            case "MPa" -> outside(value, 0, true, 1000, true, "a stress", "from 0 to 1000 MPa");
-            case "deg" -> outside(value, 0, false, 90, false, "an angle", "greater than 0° and less than 90°");
+            case "mm" -> outside(value, written, 0, true, 1e5, true, "a length", "from 0 to 100000 mm (100 m)");
+            case "MPa" -> outside(value, written, 0, true, 1000, true, "a stress", "from 0 to 1000 MPa");
+            case "deg" -> outside(value, written, 0, false, 90, false, "an angle", "greater than 0° and less than 90°");
             default -> Optional.empty();
         };
     }
 
-    private static Optional<String> outside(double value, double least, boolean leastAllowed, double most,
+    private static Optional<String> outside(double value, String written, double least, boolean leastAllowed, double most,
                                             boolean mostAllowed, String kind, String range) {
         boolean aboveLeast = leastAllowed ? value >= least : value > least;
         boolean belowMost = mostAllowed ? value <= most : value < most;
         if (aboveLeast && belowMost) {
             return Optional.empty();
         }
-        return Optional.of(Num.f(value) + " is not plausible for " + kind + ": it must be "
+        return Optional.of(written + " is not plausible for " + kind + ": it must be "
                 + range);
     }
 }

@@ -107,6 +107,10 @@ public final class RulesetLoader {
             throws RulesetException {
         List<RulesetFile> chain = new ArrayList<>();
         List<InputError> errors = new ArrayList<>();
+        if (localFolder.isPresent() && !Files.isDirectory(localFolder.get())) {
+            throw new RulesetException(List.of(new InputError(new SourceLocation("--rulesets-dir", 1, 1), "",
+                    "the rulesets folder " + localFolder.get() + " is not a folder")));
+        }
         Optional<RulesetFile> current = open(reference, referencedAt, Optional.empty(), pathAllowed, errors);
         while (current.isPresent()) {
             RulesetFile file = current.get();
@@ -237,9 +241,11 @@ public final class RulesetLoader {
                     + " unit of '" + e.key() + "' (" + inherited.unit() + ")");
         }
         String unit = optionalText(map, "unit").orElse(base ? "-" : inherited.unit());
-        Optional<String> implausible = ParameterRanges.problem(e.key(), unit, value.get());
+        Node written = map.entry("value").get().value();
+        Optional<String> implausible = ParameterRanges.problem(e.key(), unit, value.get(),
+                Shown.text(((ScalarNode) written).text()));
         if (implausible.isPresent()) {
-            problems.add(map.entry("value").get().value().location(), path + ".value", implausible.get());
+            problems.add(written.location(), path + ".value", implausible.get());
             return;
         }
         parameters.put(e.key(), new Parameter(e.key(),

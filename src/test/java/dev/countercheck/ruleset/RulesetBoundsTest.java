@@ -180,6 +180,13 @@ class RulesetBoundsTest {
     }
 
     @Test
+    void aRulesetsFolderThatDoesNotExistIsRefusedRatherThanPassedOver() {
+        List<InputError> errors = catchThrowableOfType(RulesetException.class,
+                () -> loader(Optional.of(dir.resolve("typo"))).load("en1992-recommended")).errors();
+        assertThat(errors).singleElement().satisfies(e -> assertThat(e.message()).contains("is not a folder"));
+    }
+
+    @Test
     void aSubmissionNamesARulesetByIdOnly() {
         SourceLocation at = new SourceLocation("job.yaml", 3, 12);
         for (String path : List.of("/etc/passwd", "../rulesets/house.yaml", "house.yaml", "C:\\rules\\x")) {
