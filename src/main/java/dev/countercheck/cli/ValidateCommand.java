@@ -1,5 +1,6 @@
 package dev.countercheck.cli;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.ruleset.RulesetException;
 import dev.countercheck.submission.ElementInput;
 import dev.countercheck.submission.IncompleteElement;
@@ -45,7 +46,7 @@ public final class ValidateCommand implements Callable<Integer> {
         Rulesets rulesets = new Rulesets(rulesetsDir, err);
         for (Path file : inputs) {
             try {
-                Submission s = new SubmissionReader().read(file);
+                Submission s = new SubmissionReader(ElementKinds.binders()).read(file);
                 rulesets.of(s, java.util.Optional.empty());
                 long incomplete = s.elements().stream().filter(e -> e instanceof IncompleteElement).count();
                 out.println(file + ": valid, " + s.elements().size() + " element" + (s.elements().size() == 1 ? "" : "s")

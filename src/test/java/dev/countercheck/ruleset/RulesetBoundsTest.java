@@ -46,7 +46,7 @@ class RulesetBoundsTest {
     }
 
     private static String formula(String expression) {
-        return "checks:\n  max-steel: {scope: cap, derived: {as_max: {formula: '" + expression
+        return "checks:\n  max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: '" + expression
                 + "', unit: mm2, clause: x}}, values: [as_max], requirements: []}\n";
     }
 
