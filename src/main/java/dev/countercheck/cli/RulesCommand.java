@@ -28,6 +28,10 @@ public final class RulesCommand implements Callable<Integer> {
             description = "Ruleset id or path (default: ${DEFAULT-VALUE}).")
     String ruleset;
 
+    @Option(names = "--rulesets-dir", paramLabel = "DIR",
+            description = "The checker's rulesets folder: ids are looked up here before the bundled rulesets.")
+    java.util.Optional<java.nio.file.Path> rulesetsDir;
+
     @Option(names = "--format", defaultValue = "text", description = "text or markdown (default: ${DEFAULT-VALUE}).")
     Format format;
 
@@ -39,7 +43,7 @@ public final class RulesCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         Ruleset r;
         try {
-            r = new Rulesets().load(ruleset);
+            r = new Rulesets(rulesetsDir, spec.commandLine().getErr()).load(ruleset);
         } catch (RulesetException e) {
             e.errors().forEach(spec.commandLine().getErr()::println);
             return ExitCodes.UNUSABLE;

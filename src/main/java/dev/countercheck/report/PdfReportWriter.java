@@ -94,9 +94,14 @@ public final class PdfReportWriter {
         Document html = Jsoup.parse(page);
         addBookmarks(html);
         org.w3c.dom.Document dom = new W3CDom().fromJsoup(html);
-        Path font = null;
+        Path font;
         try {
             font = fontFile();
+        } catch (IOException e) {
+            // the machine's temporary folder is full or unusable: a condition to report, not a fault of the tool
+            throw new UncheckedIOException("the temporary folder cannot be used for the PDF's font", e);
+        }
+        try {
             PdfRendererBuilder builder = new PdfRendererBuilder()
                     .withW3cDocument(dom, null)
                     .useSVGDrawer(new BatikSVGDrawer(SvgScriptMode.SECURE, SvgExternalResourceMode.SECURE))

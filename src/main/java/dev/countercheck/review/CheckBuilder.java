@@ -126,7 +126,11 @@ public final class CheckBuilder {
         return this;
     }
 
-    /** A finding that does not change the status (a note, a remark on geometry). */
+    /**
+     * A finding beside the comparison: a remark leaves the status as it is; a rule not met or a
+     * capacity exceeded fails a check that would otherwise pass (a check never reads pass while it
+     * raises a serious finding about its own subject).
+     */
     public CheckBuilder finding(FindingKind kind, String slug, String message) {
         findings.add(new DraftFinding(slug, kind, Optional.empty(), spec.id(), message, spec.basis()));
         return this;
@@ -148,7 +152,18 @@ public final class CheckBuilder {
         return Num.f(value) + ("-".equals(unit) ? "" : " " + unit);
     }
 
+    private static boolean failsItsCheck(DraftFinding f) {
+        return f.kind() == FindingKind.CAPACITY || f.kind() == FindingKind.RULE
+                || f.declared().map(s -> s.atLeast(Severity.MAJOR)).orElse(false);
+    }
+
     public CheckOutcome build() {
+        if (status == CheckStatus.PASS) {
+            findings.stream().filter(CheckBuilder::failsItsCheck).forEach(f -> {
+                status = CheckStatus.FAIL;
+                failures.add(f.message());
+            });
+        }
         Map<String, Value> ordered = new LinkedHashMap<>();
         spec.quantities().stream().filter(q -> values.containsKey(q.name()))
                 .forEach(q -> ordered.put(q.name(), values.get(q.name())));
