@@ -1,5 +1,6 @@
 package dev.countercheck.bench;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.report.HtmlReportWriter;
 import dev.countercheck.report.JsonResultWriter;
@@ -47,8 +48,8 @@ public class ElementBenchmark {
     public void setUp() throws Exception {
         Path dir = Files.createTempDirectory("countercheck-bench");
         rules = loader.load("en1992-recommended");
-        fourPiles = new SubmissionReader().read(BenchProject.writeOne(dir.resolve("four.yaml"), 4));
-        ninePiles = new SubmissionReader().read(BenchProject.writeOne(dir.resolve("nine.yaml"), 9));
+        fourPiles = new SubmissionReader(ElementKinds.binders()).read(BenchProject.writeOne(dir.resolve("four.yaml"), 4));
+        ninePiles = new SubmissionReader(ElementKinds.binders()).read(BenchProject.writeOne(dir.resolve("nine.yaml"), 9));
         fourPileReview = reviewer.review(fourPiles, rules, DATE);
     }
 

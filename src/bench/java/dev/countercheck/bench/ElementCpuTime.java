@@ -1,5 +1,6 @@
 package dev.countercheck.bench;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.report.HtmlReportWriter;
 import dev.countercheck.report.JsonResultWriter;
@@ -35,8 +36,8 @@ public final class ElementCpuTime {
         ProjectReviewer reviewer = new ProjectReviewer(new Review.ToolInfo("countercheck", "bench"));
         Ruleset rules = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY)
                 .load("en1992-recommended");
-        Submission four = new SubmissionReader().read(BenchProject.writeOne(dir.resolve("four.yaml"), 4));
-        Submission nine = new SubmissionReader().read(BenchProject.writeOne(dir.resolve("nine.yaml"), 9));
+        Submission four = new SubmissionReader(ElementKinds.binders()).read(BenchProject.writeOne(dir.resolve("four.yaml"), 4));
+        Submission nine = new SubmissionReader(ElementKinds.binders()).read(BenchProject.writeOne(dir.resolve("nine.yaml"), 9));
         Review fourReview = reviewer.review(four, rules, "2026-01-01");
         JsonResultWriter json = new JsonResultWriter();
         HtmlReportWriter html = new HtmlReportWriter();
