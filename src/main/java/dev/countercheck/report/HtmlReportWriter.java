@@ -25,11 +25,13 @@ public final class HtmlReportWriter {
     static final String TEMPLATE = "review.ftlh";
     static final String INDEX_TEMPLATE = "index.ftlh";
 
-    private final Configuration freemarker;
+    /** Configured once; it keeps each template compiled after its first use (safe to share between threads). */
+    private static final Configuration FREEMARKER = configuration();
 
-    public HtmlReportWriter() {
-        freemarker = new Configuration(Configuration.VERSION_2_3_34);
+    private static Configuration configuration() {
+        Configuration freemarker = new Configuration(Configuration.VERSION_2_3_34);
         freemarker.setClassForTemplateLoading(HtmlReportWriter.class, "/templates");
+        freemarker.setTemplateUpdateDelayMilliseconds(Long.MAX_VALUE);
         freemarker.setDefaultEncoding("UTF-8");
         freemarker.setOutputFormat(HTMLOutputFormat.INSTANCE);
         freemarker.setLocale(Locale.ROOT);
@@ -40,6 +42,7 @@ public final class HtmlReportWriter {
         freemarker.setWrapUncheckedExceptions(true);
         freemarker.setFallbackOnNullLoopVariable(false);
         freemarker.setNewBuiltinClassResolver(TemplateClassResolver.ALLOWS_NOTHING_RESOLVER);
+        return freemarker;
     }
 
     /** The HTML page for {@code review} on its own: no sign-off names, responses or previous revision. */
@@ -56,7 +59,7 @@ public final class HtmlReportWriter {
     String render(String name, Object model) {
         StringWriter out = new StringWriter();
         try {
-            Template template = freemarker.getTemplate(name);
+            Template template = FREEMARKER.getTemplate(name);
             template.process(model, out);
         } catch (IOException | TemplateException e) {
             // The templates ship inside the jar and their models are built here: failing is a bug in this package.
