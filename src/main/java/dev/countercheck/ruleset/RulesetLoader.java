@@ -279,7 +279,7 @@ public final class RulesetLoader {
     }
 
     private static Optional<RulesetFile> notFound(String message, Optional<SourceLocation> at, List<InputError> errors) {
-        errors.add(new InputError(at.orElse(new SourceLocation("--ruleset", 1, 1)), at.isPresent() ? "extends" : "",
+        errors.add(new InputError(at.orElse(SourceLocation.unpositioned("--ruleset")), at.isPresent() ? "extends" : "",
                 message));
         return Optional.empty();
     }

@@ -24,7 +24,7 @@ import java.util.Optional;
  */
 record CapSection(List<BarSet> xBars, List<BarSet> yBars, Step dx, Step dy, Step dMean, Step asX, Step asY) {
 
-    private static final String BASIS = "pile-cap-method.md, effective depths (layer 1 nearest the soffit)";
+    private static final String BASIS = "common practice: layer 1 nearest the soffit (docs/pile-cap.md, effective depths)";
 
     /** The section, or empty when the cap has no reinforcement or no bottom bars at all. */
     static Optional<CapSection> of(PileCap cap) {
