@@ -12,7 +12,7 @@ import java.util.Optional;
 
 /**
  * The cap's bottom steel in each direction and the effective depths it gives
- * (pile-cap-method.md, "Effective depths"): d of layer 1 = h − c − φ1/2, of layer 2 = h − c − φ1 − φ2/2.
+ * (docs/pile-cap.md, "Effective depths"): d of layer 1 = h − c − φ1/2, of layer 2 = h − c − φ1 − φ2/2.
  *
  * @param xBars       the bottom sets running in x
  * @param yBars       the bottom sets running in y
