@@ -29,6 +29,24 @@ class ArchitectureTest {
     }
 
     @Test
+    void staticsIsPureAndUsesOnlyTheFormulaLibrary() {
+        noClasses().that().resideInAPackage("dev.countercheck.statics")
+                .should().dependOnClassesThat(DescribedPredicate.describe("are in a project package other than eurocode",
+                        c -> c.getPackageName().startsWith("dev.countercheck")
+                                && !c.getPackageName().equals("dev.countercheck.statics")
+                                && !c.getPackageName().equals("dev.countercheck.eurocode")))
+                .check(CLASSES);
+    }
+
+    @Test
+    void onlyTheListOfKindsNamesAnElementKind() {
+        noClasses().that().resideOutsideOfPackages("dev.countercheck.element.pilecap..")
+                .and().doNotHaveFullyQualifiedName("dev.countercheck.element.ElementKinds")
+                .should().dependOnClassesThat().resideInAPackage("dev.countercheck.element.pilecap..")
+                .check(CLASSES);
+    }
+
+    @Test
     void submissionsKnowNoReviewersRulesetsReportsOrCommands() {
         noClasses().that().resideInAPackage("dev.countercheck.submission..")
                 .should().dependOnClassesThat().resideInAnyPackage("dev.countercheck.review..",
@@ -57,7 +75,7 @@ class ArchitectureTest {
                 .and(not(simpleName("Step").or(simpleName("Num"))));
         noClasses().that().resideInAPackage("dev.countercheck.report..")
                 .should().dependOnClassesThat().resideInAnyPackage("dev.countercheck.element..",
-                        "dev.countercheck.ruleset..")
+                        "dev.countercheck.ruleset..", "dev.countercheck.statics..")
                 .orShould().dependOnClassesThat(formulas)
                 .orShould().dependOnClassesThat().haveSimpleName("ClaimComparer")
                 .check(CLASSES);

@@ -1,5 +1,6 @@
 package dev.countercheck.cli;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.report.HtmlReportWriter;
 import dev.countercheck.report.JsonResultWriter;
@@ -113,7 +114,7 @@ public final class ReviewCommand implements Callable<Integer> {
                           ReportTargets targets, Severity threshold, ReportIndex index) {
         PrintWriter err = spec.commandLine().getErr();
         try {
-            Submission submission = new dev.countercheck.submission.SubmissionReader().read(file);
+            Submission submission = new dev.countercheck.submission.SubmissionReader(ElementKinds.binders()).read(file);
             Ruleset rules = ruleset.isPresent() ? rulesets.load(ruleset.get())
                     : rulesets.load(submission.ruleset().orElse(Rulesets.DEFAULT), submission.rulesetAt());
             Review review = reviewer.review(submission, rules, reviewDate);

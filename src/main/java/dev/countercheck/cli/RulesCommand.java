@@ -68,7 +68,8 @@ public final class RulesCommand implements Callable<Integer> {
         }
         for (CheckDef c : r.checks().values()) {
             out.println();
-            out.println("CHECK " + c.id() + " (scope " + c.scope() + ")  [" + c.origin() + "]");
+            out.println("CHECK " + c.id() + " (" + String.join(", ", c.elementTypes()) + "; scope " + c.scope() + ")  ["
+                    + c.origin() + "]");
             c.appliesWhen().ifPresent(w -> out.println("  applies when " + w));
             for (CheckDef.DerivedDef d : c.derived()) {
                 out.printf("  %-14s = %s  [%s] %s%n", d.symbol(), d.formula(), d.unit(), d.clause());
@@ -113,7 +114,8 @@ public final class RulesCommand implements Callable<Integer> {
             out.println();
             out.println("### `" + c.id() + "`");
             out.println();
-            out.println("Scope `" + c.scope() + "`; defined in " + c.origin() + "."
+            out.println("For " + String.join(", ", c.elementTypes()) + "; scope `" + c.scope() + "`; defined in "
+                    + c.origin() + "."
                     + c.appliesWhen().map(w -> " Applies when `" + w + "`, else not applicable: " + c.notApplicable()
                     + ".").orElse(""));
             out.println();

@@ -1,5 +1,6 @@
 package dev.countercheck.cli;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.ruleset.RulesetException;
 import dev.countercheck.submission.ElementInput;
 import dev.countercheck.submission.IncompleteElement;
@@ -41,7 +42,7 @@ public final class ValidateCommand implements Callable<Integer> {
         Rulesets rulesets = new Rulesets();
         for (Path file : inputs) {
             try {
-                Submission s = new SubmissionReader().read(file);
+                Submission s = new SubmissionReader(ElementKinds.binders()).read(file);
                 rulesets.load(s.ruleset().orElse(Rulesets.DEFAULT), s.rulesetAt());
                 long incomplete = s.elements().stream().filter(e -> e instanceof IncompleteElement).count();
                 out.println(file + ": valid, " + s.elements().size() + " element" + (s.elements().size() == 1 ? "" : "s")

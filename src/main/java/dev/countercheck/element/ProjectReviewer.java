@@ -1,6 +1,5 @@
 package dev.countercheck.element;
 
-import dev.countercheck.element.pilecap.PileCapReviewer;
 import dev.countercheck.review.ClaimComparer;
 import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
@@ -12,7 +11,6 @@ import dev.countercheck.ruleset.RuleVocabulary;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.submission.ElementInput;
 import dev.countercheck.submission.IncompleteElement;
-import dev.countercheck.submission.PileCap;
 import dev.countercheck.submission.Submission;
 
 import java.util.ArrayList;
@@ -21,8 +19,9 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.TreeSet;
 
-/** Reviews a whole submission: each element by the reviewer of its type, then the summary. */
+/** Reviews a whole submission: each element by the kind of its type, then the summary. */
 public final class ProjectReviewer {
 
     /** Stated on every report and in the README (rule of the product). */
@@ -30,11 +29,10 @@ public final class ProjectReviewer {
             + " Local codes, the applicable National Annex and licensed engineering practice govern.";
 
     /** Every ruleset parameter a review reads in Java; the ruleset loader refuses a chain that lacks one. */
-    public static final Set<String> REQUIRED_PARAMETERS = union(PileCapReviewer.PARAMETERS,
-            Set.of("claim_tolerance", "cover_deviation"));
+    public static final Set<String> REQUIRED_PARAMETERS = requiredParameters();
 
     /** What a ruleset's rules may use and define, and the parameters the engine reads. */
-    public static final RuleVocabulary RULE_VOCABULARY = PileCapReviewer.vocabulary(REQUIRED_PARAMETERS);
+    public static final RuleVocabulary RULE_VOCABULARY = ElementKinds.vocabulary(REQUIRED_PARAMETERS);
 
     private final Review.ToolInfo tool;
 
@@ -44,20 +42,18 @@ public final class ProjectReviewer {
 
     public Review review(Submission submission, Ruleset rules, String reviewDate) {
         ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance")));
-        PileCapReviewer pileCaps = new PileCapReviewer(assembler);
         List<ElementReview> elements = new ArrayList<>();
         for (ElementInput e : submission.elements()) {
-            if (e instanceof PileCap cap) {
-                elements.add(pileCaps.review(cap, rules));
-            } else if (e instanceof IncompleteElement inc) {
-                elements.add(incomplete(inc));
-            }
+            ElementKind<?> kind = ElementKinds.of(e.type()).orElseThrow(
+                    () -> new IllegalStateException("no element kind of type " + e.type()));
+            elements.add(e instanceof IncompleteElement inc ? incomplete(inc) : review(kind, e, rules, assembler));
         }
         List<String> assumptions = new ArrayList<>();
         assumptions.add(GENERAL_CAUTION);
         assumptions.add("Nationally determined parameters come from ruleset " + rules.id() + " (" + rules.title()
                 + "); every value used is shown in the calculation trace with the file that set it.");
-        assumptions.addAll(PileCapReviewer.ASSUMPTIONS);
+        ElementKinds.ALL.stream().filter(k -> submission.elements().stream().anyMatch(e -> e.type().equals(k.type())))
+                .forEach(k -> assumptions.addAll(k.assumptions()));
         assumptions.add("Checks marked not-checked were not performed; the review says nothing about them.");
         var p = submission.project();
         return new Review(tool,
@@ -68,6 +64,11 @@ public final class ProjectReviewer {
                 List.copyOf(assumptions));
     }
 
+    private static <E extends ElementInput> ElementReview review(ElementKind<E> kind, ElementInput element,
+                                                                 Ruleset rules, ElementAssembler assembler) {
+        return kind.review(kind.elementClass().cast(element), rules, assembler);
+    }
+
     private static ElementReview incomplete(IncompleteElement e) {
         Finding f = new Finding(e.id() + "/input/1", Severity.MINOR, "input",
                 "The element could not be reviewed; missing: " + String.join(", ", e.missing()) + ".",
@@ -76,9 +77,9 @@ public final class ProjectReviewer {
                 List.of("No check of " + e.id() + " was performed."), Optional.empty());
     }
 
-    private static Set<String> union(Set<String> a, Set<String> b) {
-        Set<String> all = new java.util.TreeSet<>(a);
-        all.addAll(b);
+    private static Set<String> requiredParameters() {
+        Set<String> all = new TreeSet<>(Set.of("claim_tolerance", "cover_deviation"));
+        ElementKinds.ALL.forEach(k -> all.addAll(k.parameters()));
         return Set.copyOf(all);
     }
 

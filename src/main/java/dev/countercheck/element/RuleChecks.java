@@ -9,6 +9,7 @@ import dev.countercheck.review.Severity;
 import dev.countercheck.ruleset.CheckDef;
 import dev.countercheck.ruleset.CheckDef.DerivedDef;
 import dev.countercheck.ruleset.CheckDef.RequirementDef;
+import dev.countercheck.ruleset.Rule;
 import dev.countercheck.ruleset.RuleExpressions;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.ruleset.Variable;
@@ -33,12 +34,16 @@ public final class RuleChecks {
     }
 
     /**
-     * @param variables the scope's variables for this subject, or empty with the reason they could not be formed
+     * @param catalogue the checks of the element's type
+     * @param rule      the ruleset's rule for the check, with the subject it runs on
+     * @param scope     the variables of the rule's scope, with units and descriptions
+     * @param variables the scope's variables for this subject
      */
-    public static CheckOutcome run(String elementType, CheckDef def, String subject, Ruleset rules,
+    public static CheckOutcome run(CheckCatalogue catalogue, Rule rule, Ruleset rules,
                                    Map<String, Variable> scope, Map<String, Object> variables) {
-        String id = def.idFor(subject);
-        CheckBuilder b = new CheckBuilder(CheckCatalogue.check(elementType, id));
+        CheckDef def = rule.def();
+        String subject = rule.subject();
+        CheckBuilder b = new CheckBuilder(catalogue.check(def.idFor(subject)));
         Map<String, Object> values = new HashMap<>(variables);
         values.put("dir", subject);
         rules.parameters().forEach((name, p) -> values.put(name, p.value()));

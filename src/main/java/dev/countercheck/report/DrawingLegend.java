@@ -2,7 +2,7 @@ package dev.countercheck.report;
 
 import dev.countercheck.report.HtmlModel.LegendRow;
 import dev.countercheck.report.HtmlModel.MarkRow;
-import dev.countercheck.review.Drawing;
+import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.Column.ColumnShape;
 import dev.countercheck.submission.PileCap;
@@ -23,7 +23,7 @@ final class DrawingLegend {
     private DrawingLegend() {
     }
 
-    static List<LegendRow> rows(String id, Drawing drawing, boolean failing) {
+    static List<LegendRow> rows(String id, PileCapDrawing drawing, boolean failing) {
         PileCap cap = drawing.cap();
         List<LegendRow> rows = new ArrayList<>();
         rows.add(new LegendRow(sample("cap", s -> s.rect(3, 3, WIDTH - 6, HEIGHT - 6, Styles.CAP)),

@@ -2,7 +2,7 @@ package dev.countercheck.report;
 
 import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.CheckStatus;
-import dev.countercheck.review.Drawing;
+import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
 
@@ -75,7 +75,7 @@ final class DrawingMarks {
         this.marks = List.copyOf(marks);
     }
 
-    static DrawingMarks of(ElementReview element, Drawing drawing) {
+    static DrawingMarks of(ElementReview element, PileCapDrawing drawing) {
         List<Mark> marks = new ArrayList<>();
         for (CheckResult check : element.checks()) {
             if (check.status() != CheckStatus.FAIL) {
@@ -97,12 +97,12 @@ final class DrawingMarks {
         return new DrawingMarks(marks);
     }
 
-    private static double largest(Drawing drawing) {
+    private static double largest(PileCapDrawing drawing) {
         return drawing.pileReactionsKn().stream().mapToDouble(Double::doubleValue).max().orElse(0);
     }
 
     /** Piles whose reaction exceeds {@code limitKn} (or equals it, when {@code orEqual}). */
-    private static List<Integer> piles(Drawing drawing, double limitKn, boolean orEqual) {
+    private static List<Integer> piles(PileCapDrawing drawing, double limitKn, boolean orEqual) {
         List<Double> reactions = drawing.pileReactionsKn();
         return IntStream.range(0, reactions.size())
                 .filter(i -> reactions.get(i) > limitKn || (orEqual && reactions.get(i) == limitKn))

@@ -5,6 +5,7 @@ import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.CheckStatus;
 import dev.countercheck.review.ClaimComparison;
 import dev.countercheck.review.Drawing;
+import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
 import dev.countercheck.review.Review;
@@ -13,11 +14,9 @@ import dev.countercheck.review.Value;
 import dev.countercheck.review.Verdict;
 
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
 import java.util.stream.IntStream;
 
 /**
@@ -150,10 +149,16 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 element.verdict().label(), checks, findings, element.cautions().size(), drawings);
     }
 
+    /** The element's drawing as its kind renders it; the report never asks which kind it is. */
     private static DrawingView drawing(String anchor, ElementReview element, Drawing drawing) {
-        DrawingMarks marks = DrawingMarks.of(element, drawing);
-        return new DrawingView(PlanDrawing.svg(anchor, drawing, marks), SectionDrawing.svg(anchor, drawing, marks),
-                DrawingLegend.rows(anchor, drawing, !marks.all().isEmpty()), DrawingLegend.marks(marks));
+        return drawing.accept(new Drawing.Visitor<>() {
+            @Override
+            public DrawingView pileCap(PileCapDrawing cap) {
+                DrawingMarks marks = DrawingMarks.of(element, cap);
+                return new DrawingView(PlanDrawing.svg(anchor, cap, marks), SectionDrawing.svg(anchor, cap, marks),
+                        DrawingLegend.rows(anchor, cap, !marks.all().isEmpty()), DrawingLegend.marks(marks));
+            }
+        });
     }
 
     private static FindingRow findingRow(Finding finding, String elementId, String elementAnchor,
@@ -186,35 +191,19 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      */
     private static List<QuantityView> quantities(CheckResult check, List<StepView> trace) {
         List<QuantityView> rows = new ArrayList<>();
-        Set<Integer> used = new HashSet<>();
         for (Map.Entry<String, Value> entry : check.values().entrySet()) {
             Value value = entry.getValue();
             Optional<ClaimComparison> claim = claimFor(check, entry.getKey());
-            int step = stepOf(check.trace(), value, used);
+            Optional<StepView> step = value.step().isPresent() ? Optional.of(trace.get(value.step().getAsInt()))
+                    : Optional.empty();
             rows.add(quantity(entry.getKey(), ReportNumbers.display(value.value(), value.unit()),
-                    ReportNumbers.unit(value.unit()), claim, step < 0 ? Optional.empty() : Optional.of(trace.get(step))));
+                    ReportNumbers.unit(value.unit()), claim, step));
         }
         check.claims().stream()
                 .filter(c -> !check.values().containsKey(c.quantity()))
                 .forEach(c -> rows.add(quantity(c.quantity(), ReportNumbers.quantityText(c.computed()), "",
                         Optional.of(c), Optional.empty())));
         return rows;
-    }
-
-    /**
-     * The index of the step that computed {@code value}: the last step with exactly its number and
-     * unit not already taken by an earlier quantity (a reviewer records each value from its step);
-     * -1 when none.
-     */
-    private static int stepOf(List<Step> trace, Value value, Set<Integer> used) {
-        for (int i = trace.size() - 1; i >= 0; i--) {
-            Step s = trace.get(i);
-            if (!used.contains(i) && s.value() == value.value() && s.unit().equals(value.unit())) {
-                used.add(i);
-                return i;
-            }
-        }
-        return -1;
     }
 
     private static Optional<ClaimComparison> claimFor(CheckResult check, String quantity) {

@@ -1,7 +1,7 @@
 package dev.countercheck.report;
 
 import dev.countercheck.report.DrawingMarks.Item;
-import dev.countercheck.review.Drawing;
+import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.review.Drawing.SectionLine;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.Column.ColumnShape;
@@ -30,7 +30,7 @@ final class PlanDrawing {
     private static final double MAX_HEIGHT = 420;
 
     private final PileCap cap;
-    private final Drawing drawing;
+    private final PileCapDrawing drawing;
     private final DrawingMarks marks;
     private final String id;
     private final PlanFrame frame;
@@ -39,7 +39,7 @@ final class PlanDrawing {
     /** Labels and tags, drawn last so that no line or pile hides them. */
     private final List<Runnable> overlay = new ArrayList<>();
 
-    private PlanDrawing(String id, Drawing drawing, DrawingMarks marks) {
+    private PlanDrawing(String id, PileCapDrawing drawing, DrawingMarks marks) {
         this.id = id;
         this.drawing = drawing;
         this.cap = drawing.cap();
@@ -50,7 +50,7 @@ final class PlanDrawing {
     }
 
     /** The SVG text of the plan; {@code id} makes its pattern and clip ids unique on the page. */
-    static String svg(String id, Drawing drawing, DrawingMarks marks) {
+    static String svg(String id, PileCapDrawing drawing, DrawingMarks marks) {
         return new PlanDrawing(id, drawing, marks).draw();
     }
 

@@ -1,7 +1,7 @@
 package dev.countercheck.report;
 
 import dev.countercheck.report.DrawingMarks.Item;
-import dev.countercheck.review.Drawing;
+import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.PileCap;
 import dev.countercheck.submission.Point;
@@ -38,7 +38,7 @@ final class SectionDrawing {
     private final double soffit;
     private final Svg svg;
 
-    private SectionDrawing(String id, Drawing drawing, DrawingMarks marks) {
+    private SectionDrawing(String id, PileCapDrawing drawing, DrawingMarks marks) {
         this.id = id;
         this.cap = drawing.cap();
         this.marks = marks;
@@ -48,7 +48,7 @@ final class SectionDrawing {
     }
 
     /** The SVG text of section A–A; {@code id} makes its pattern ids unique on the page. */
-    static String svg(String id, Drawing drawing, DrawingMarks marks) {
+    static String svg(String id, PileCapDrawing drawing, DrawingMarks marks) {
         return new SectionDrawing(id, drawing, marks).draw();
     }
 

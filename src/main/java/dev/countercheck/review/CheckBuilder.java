@@ -11,6 +11,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalInt;
+import java.util.stream.IntStream;
 import java.util.OptionalDouble;
 
 /**
@@ -25,6 +27,7 @@ public final class CheckBuilder {
     private final List<Step> trace = new ArrayList<>();
     private final List<DraftFinding> findings = new ArrayList<>();
     private final List<String> cautions = new ArrayList<>();
+    private final List<Drawing.SectionLine> sections = new ArrayList<>();
     private CheckStatus status = CheckStatus.NOT_CHECKED;
     private OptionalDouble utilisation = OptionalDouble.empty();
     private Optional<String> reason = Optional.of("not computed");
@@ -52,10 +55,12 @@ public final class CheckBuilder {
             throw new IllegalArgumentException(spec.id() + "." + name + " is in " + q.unit() + ", step "
                     + step.symbol() + " is in " + step.unit());
         }
-        if (trace.stream().noneMatch(s -> s == step)) {
-            trace(step);
-        }
-        values.put(name, new Value(step.value(), q.unit()));
+        int index = IntStream.range(0, trace.size()).filter(i -> trace.get(i) == step).findFirst()
+                .orElseGet(() -> {
+                    trace(step);
+                    return trace.size() - 1;
+                });
+        values.put(name, new Value(step.value(), q.unit(), OptionalInt.of(index)));
         return step;
     }
 
@@ -117,6 +122,12 @@ public final class CheckBuilder {
         return this;
     }
 
+    /** Records where a critical section of this check lies, for the drawing. */
+    public CheckBuilder section(Drawing.SectionLine line) {
+        sections.add(line);
+        return this;
+    }
+
     public CheckBuilder caution(String text) {
         cautions.add(text);
         return this;
@@ -134,6 +145,6 @@ public final class CheckBuilder {
         Optional<String> why = status == CheckStatus.FAIL ? Optional.of(String.join("; ", failures)) : reason;
         CheckResult result = new CheckResult(spec.id(), spec.title(), spec.basis(), status, utilisation, why,
                 Collections.unmodifiableMap(ordered), List.of(), List.copyOf(trace));
-        return new CheckOutcome(result, List.copyOf(findings), List.copyOf(cautions));
+        return new CheckOutcome(result, List.copyOf(findings), List.copyOf(cautions), List.copyOf(sections));
     }
 }

@@ -1,24 +1,22 @@
 package dev.countercheck.review;
 
-import dev.countercheck.submission.PileCap;
-
-import java.util.List;
-import java.util.OptionalDouble;
-
 /**
- * What the report draws for a pile cap: the cap as submitted and the places the review computed.
- * Everything here is in the cap's axes, mm and kN; the report only scales and draws it.
- *
- * @param cap                  the element as submitted
- * @param pileReactionsKn      the largest reaction of each pile over the ULS cases, in pile order
- * @param shearSections        the critical one-way shear sections
- * @param controlPerimeterMm   distance a of the basic control perimeter from the column face (2d), when d is known
+ * What the report draws of an element: one record per element kind, holding the element as
+ * submitted and the places its review computed. The report renders a drawing through a
+ * {@link Visitor}, so that it never asks for an element's type and a new kind's drawing cannot be
+ * left unrendered.
  */
-public record Drawing(PileCap cap, List<Double> pileReactionsKn, List<SectionLine> shearSections,
-                      OptionalDouble controlPerimeterMm) {
+public sealed interface Drawing permits PileCapDrawing {
+
+    /** Renders each kind's drawing; one method per member of the family. */
+    interface Visitor<R> {
+        R pileCap(PileCapDrawing drawing);
+    }
+
+    <R> R accept(Visitor<R> visitor);
 
     /**
-     * A straight critical section across the whole cap.
+     * A straight critical section across the whole element.
      *
      * @param axis       "x" when the line is perpendicular to x (at x = position), "y" likewise
      * @param positionMm its coordinate along that axis

@@ -26,7 +26,8 @@ public final class ElementAssembler {
         this.comparer = comparer;
     }
 
-    public ElementReview assemble(String id, String type, String description, List<CheckOutcome> outcomes,
+    /** @param catalogue the checks of the element's type, which its claims name */
+    public ElementReview assemble(String id, CheckCatalogue catalogue, String description, List<CheckOutcome> outcomes,
                                   List<Claim> claims, List<String> elementCautions, Optional<Drawing> drawing) {
         Map<String, CheckResult> results = new LinkedHashMap<>();
         Map<String, List<DraftFinding>> drafts = new LinkedHashMap<>();
@@ -38,7 +39,7 @@ public final class ElementAssembler {
         }
         Map<String, List<ClaimComparison>> compared = new HashMap<>();
         for (Claim claim : claims) {
-            CheckSpec spec = CheckCatalogue.check(type, claim.checkId());
+            CheckSpec spec = catalogue.check(claim.checkId());
             QuantitySpec q = spec.quantity(claim.quantity()).orElseThrow();
             CheckResult r = results.get(claim.checkId());
             Value computed = r == null ? null : r.values().get(claim.quantity());
@@ -56,7 +57,7 @@ public final class ElementAssembler {
         List<CheckResult> checks = results.values().stream()
                 .map(r -> withClaims(r, compared.getOrDefault(r.id(), List.of()))).toList();
         List<Finding> findings = number(id, drafts);
-        return new ElementReview(id, type, description, verdict(checks, findings), checks, findings,
+        return new ElementReview(id, catalogue.elementType(), description, verdict(checks, findings), checks, findings,
                 List.copyOf(cautions), drawing);
     }
 

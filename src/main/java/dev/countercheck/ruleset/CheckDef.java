@@ -10,6 +10,7 @@ import java.util.Optional;
  * evaluated once per subject of its scope.
  *
  * @param id            the check id, with {@code {dir}} standing for the subject (e.g. {@code min-steel-{dir}})
+ * @param elementTypes  the element types it applies to ({@code applies_to}, e.g. {@code [pile-cap]})
  * @param scope         which variables it sees and which subjects it runs over
  * @param appliesWhen   a boolean expression; when false the check is not-applicable with {@code notApplicable}
  * @param derived       derived quantities in evaluation order (the loader sorts them by dependency)
@@ -18,7 +19,7 @@ import java.util.Optional;
  * @param cautions      cautions to show when their condition holds
  * @param origin        the ruleset file that defined the check
  */
-public record CheckDef(String id, String scope, Optional<String> appliesWhen, String notApplicable,
+public record CheckDef(String id, List<String> elementTypes, String scope, Optional<String> appliesWhen, String notApplicable,
                        List<DerivedDef> derived, List<String> values, List<RequirementDef> requirements,
                        List<CautionDef> cautions, String origin, SourceLocation location) {
 

@@ -21,7 +21,7 @@ final class RuleDefinitions {
 
     private static final List<String> TABLE_KEYS = List.of("symbol", "unit", "clause", "note", "interpolate",
             "several", "columns", "rows");
-    private static final List<String> CHECK_KEYS = List.of("scope", "applies_when", "not_applicable", "derived",
+    private static final List<String> CHECK_KEYS = List.of("applies_to", "scope", "applies_when", "not_applicable", "derived",
             "values", "requirements", "cautions");
     private static final List<String> CAUTION_KEYS = List.of("when", "text");
     private static final List<String> DERIVED_KEYS = List.of("symbol", "formula", "unit", "clause");
@@ -124,7 +124,12 @@ final class RuleDefinitions {
             } else if (cautionNodes.isPresent()) {
                 problems.add(cautionNodes.get().location(), path + ".cautions", "expected a list of cautions");
             }
-            into.put(e.key(), new CheckDef(e.key(), required(c, "scope", path), text(c, "applies_when"),
+            List<String> types = texts(c.entry("applies_to").map(Entry::value), path + ".applies_to");
+            if (c.entry("applies_to").isEmpty()) {
+                problems.add(c.location(), path, "'applies_to' is missing: every check names the element types it"
+                        + " applies to, e.g. [pile-cap]");
+            }
+            into.put(e.key(), new CheckDef(e.key(), types, required(c, "scope", path), text(c, "applies_when"),
                     text(c, "not_applicable").orElse("the rule's applies_when condition is false"), derived,
                     texts(c.entry("values").map(Entry::value), path + ".values"), requirements, cautions, origin,
                     e.keyLocation()));

@@ -5,8 +5,10 @@ import dev.countercheck.input.InputError;
 import dev.countercheck.input.SourceLocation;
 import dev.countercheck.ruleset.CheckDef.DerivedDef;
 import dev.countercheck.ruleset.CheckDef.RequirementDef;
+import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -32,6 +34,7 @@ final class RuleValidator {
     private final Map<String, Parameter> parameters;
     private final RuleExpressions expressions;
     private final List<InputError> errors = new ArrayList<>();
+    private final Map<String, Map<String, Rule>> rules = new LinkedHashMap<>();
 
     RuleValidator(RuleVocabulary vocabulary, Map<String, Parameter> parameters, RuleExpressions expressions) {
         this.vocabulary = vocabulary;
@@ -48,23 +51,64 @@ final class RuleValidator {
         for (CheckDef check : checks.values()) {
             validate(check).ifPresent(c -> out.put(c.id(), c));
         }
+        for (CheckDef check : out.values()) {
+            for (String type : check.elementTypes()) {
+                for (String subject : vocabulary.elementTypes().get(type).subjectsOf(check.scope())) {
+                    Rule before = rules.computeIfAbsent(type, t -> new LinkedHashMap<>())
+                            .putIfAbsent(check.idFor(subject), new Rule(check, subject));
+                    if (before != null) {
+                        error(check.location(), check.id(), "'" + check.idFor(subject) + "' of " + type
+                                + " is already defined by the check " + before.def().id());
+                    }
+                }
+            }
+        }
         return out;
+    }
+
+    /** The rule of each check, by element type and check id, once {@link #validate(Map)} has run. */
+    Map<String, Map<String, Rule>> rules() {
+        return Collections.unmodifiableMap(rules);
     }
 
     private Optional<CheckDef> validate(CheckDef check) {
         int before = errors.size();
-        Optional<Map<String, Variable>> scope = vocabulary.scope(check.scope());
-        if (scope.isEmpty()) {
-            error(check.location(), check.id(), "unknown scope '" + check.scope() + "'; the scopes are "
-                    + String.join(", ", new TreeSet<>(vocabulary.scopes().keySet())));
+        if (check.elementTypes().isEmpty()) {
+            error(check.location(), check.id() + ".applies_to", "the check applies to no element type; the types are "
+                    + String.join(", ", new TreeSet<>(vocabulary.elementTypes().keySet())));
+        }
+        List<DerivedDef> ordered = List.of();
+        for (String type : check.elementTypes()) {
+            Optional<ElementRules> rulesOfType = vocabulary.of(type);
+            if (rulesOfType.isEmpty()) {
+                error(check.location(), check.id() + ".applies_to", "unknown element type '" + type
+                        + "'; the element types are " + String.join(", ", new TreeSet<>(vocabulary.elementTypes().keySet())));
+            } else {
+                ordered = validate(check, type, rulesOfType.get());
+            }
+        }
+        if (errors.size() > before) {
             return Optional.empty();
         }
-        List<String> subjects = vocabulary.subjects().getOrDefault(check.scope(), List.of(""));
+        return Optional.of(new CheckDef(check.id(), check.elementTypes(), check.scope(), check.appliesWhen(),
+                check.notApplicable(), ordered, check.values(), check.requirements(), check.cautions(), check.origin(),
+                check.location()));
+    }
+
+    /** Validates the check as a rule of {@code type}; returns its derived quantities in evaluation order. */
+    private List<DerivedDef> validate(CheckDef check, String type, ElementRules vocabulary) {
+        Optional<Map<String, Variable>> scope = vocabulary.scope(check.scope());
+        if (scope.isEmpty()) {
+            error(check.location(), check.id(), "unknown scope '" + check.scope() + "' for " + type + "; the scopes are "
+                    + String.join(", ", new TreeSet<>(vocabulary.scopes().keySet())));
+            return List.of();
+        }
+        List<String> subjects = vocabulary.subjectsOf(check.scope());
         for (String subject : subjects) {
             if (!vocabulary.checkUnits().containsKey(check.idFor(subject))) {
-                error(check.location(), check.id(), "'" + check.idFor(subject) + "' is not a check a ruleset can define;"
-                        + " they are " + String.join(", ", new TreeSet<>(vocabulary.checkUnits().keySet())));
-                return Optional.empty();
+                error(check.location(), check.id(), "'" + check.idFor(subject) + "' is not a check a ruleset can define"
+                        + " for " + type + "; they are " + String.join(", ", new TreeSet<>(vocabulary.checkUnits().keySet())));
+                return List.of();
             }
         }
         Map<String, Object> values = new HashMap<>();
@@ -129,11 +173,7 @@ final class RuleValidator {
             namesIn(c.when(), c.location(), check.id() + ".cautions", known);
             typeOf(c.when(), values, c.location(), check.id() + ".cautions.when", false);
         }
-        if (errors.size() > before) {
-            return Optional.empty();
-        }
-        return Optional.of(new CheckDef(check.id(), check.scope(), check.appliesWhen(), check.notApplicable(),
-                ordered, check.values(), check.requirements(), check.cautions(), check.origin(), check.location()));
+        return ordered;
     }
 
     private Set<String> namesIn(String expression, SourceLocation at, String path, Set<String> known) {

@@ -7,19 +7,36 @@ import java.util.Set;
 
 /**
  * What the review engine offers the rules and expects of them, so that a ruleset can be validated
- * completely at load: the variables of each scope, the subjects a scope expands over ({@code {dir}}
- * in a check id), the checks the rules may define with their quantities' units, and the parameters
- * the engine itself reads.
+ * completely at load: for each element type, the variables of each scope, the subjects a scope
+ * expands over ({@code {dir}} in a check id) and the checks the rules may define; and the
+ * parameters the engine itself reads.
  *
- * @param scopes             variables by scope name
- * @param subjects           for each scope, the values of {@code {dir}} ({@code [""]} for a scope with one subject)
- * @param checkUnits         check id → quantity → unit, for the checks a ruleset may define
+ * @param elementTypes       what the rules of each element type may use and define, by type ({@code pile-cap})
  * @param requiredParameters parameters the engine reads in Java
  */
-public record RuleVocabulary(Map<String, Map<String, Variable>> scopes, Map<String, List<String>> subjects,
-                             Map<String, Map<String, String>> checkUnits, Set<String> requiredParameters) {
+public record RuleVocabulary(Map<String, ElementRules> elementTypes, Set<String> requiredParameters) {
 
-    Optional<Map<String, Variable>> scope(String name) {
-        return Optional.ofNullable(scopes.get(name));
+    /**
+     * What the rules of one element type may use and define.
+     *
+     * @param scopes     variables by scope name ({@code section}, {@code bottom-bars}, {@code starters})
+     * @param subjects   for each scope, the values of {@code {dir}} ({@code [""]} for a scope with one subject)
+     * @param checkUnits check id → quantity → unit, for the checks a ruleset may define for this type
+     */
+    public record ElementRules(Map<String, Map<String, Variable>> scopes, Map<String, List<String>> subjects,
+                               Map<String, Map<String, String>> checkUnits) {
+
+        Optional<Map<String, Variable>> scope(String name) {
+            return Optional.ofNullable(scopes.get(name));
+        }
+
+        /** The subjects of a scope; one unnamed subject when the scope has no directions. */
+        public List<String> subjectsOf(String scope) {
+            return subjects.getOrDefault(scope, List.of(""));
+        }
+    }
+
+    Optional<ElementRules> of(String elementType) {
+        return Optional.ofNullable(elementTypes.get(elementType));
     }
 }

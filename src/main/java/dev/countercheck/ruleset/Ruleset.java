@@ -2,6 +2,7 @@ package dev.countercheck.ruleset;
 
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * The effective ruleset: a ruleset file with everything it {@code extends} resolved.
@@ -15,11 +16,17 @@ import java.util.Map;
  * @param parameters  every parameter by name, with the file that set its value
  * @param tables      every table by name, with the file that set it
  * @param checks      the checks the ruleset defines, by id template, in file order
+ * @param rules       the rule of each check a ruleset defines, by element type and check id
  * @param expressions the evaluator for the rules' expressions, with the tables as functions
  */
 public record Ruleset(String id, String title, String standard, String version, String sha256, List<String> files,
                       Map<String, Parameter> parameters, Map<String, TableDef> tables, Map<String, CheckDef> checks,
-                      RuleExpressions expressions) {
+                      Map<String, Map<String, Rule>> rules, RuleExpressions expressions) {
+
+    /** The rule for check {@code checkId} of {@code elementType}, when the ruleset defines one. */
+    public Optional<Rule> rule(String elementType, String checkId) {
+        return Optional.ofNullable(rules.getOrDefault(elementType, Map.of()).get(checkId));
+    }
 
     /** The parameter {@code name}; every name the engine asks for is validated at load. */
     public Parameter parameter(String name) {

@@ -135,7 +135,8 @@ public final class RulesetLoader {
         return new Ruleset(optionalText(root, "id").orElse(top.name()), optionalText(root, "title").orElse(""),
                 optionalText(root, "standard").orElse(""), optionalText(root, "version").orElse(""), hash(chain),
                 chain.stream().map(RulesetFile::name).toList(), Collections.unmodifiableMap(parameters),
-                Collections.unmodifiableMap(tables), Collections.unmodifiableMap(validated), expressions);
+                Collections.unmodifiableMap(tables), Collections.unmodifiableMap(validated), validator.rules(),
+                expressions);
     }
 
     private void checkTop(RulesetFile file) {

@@ -1,14 +1,16 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.input.Node;
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Predicate;
 
 /**
- * The check ids and quantity names of each element type, with the unit of each quantity and
- * the side on which a claim is unconservative. This is the vocabulary of
+ * The checks of one element type: ids and quantity names, with the unit of each quantity and
+ * the side on which a claim is unconservative. Each element type declares its catalogue once
+ * (e.g. {@link PileCapChecks}); the reader, the reviewers, the rulesets and the report all read it. This is the vocabulary of
  * {@code claims.<check-id>.<quantity>} in a submission and of {@code checks[].values} in a result.
  */
 public final class CheckCatalogue {
@@ -39,89 +41,55 @@ public final class CheckCatalogue {
         }
     }
 
-    private static QuantitySpec demand(String name, String unit) {
+    /** A quantity whose claim is unconservative when smaller than the computed value. */
+    public static QuantitySpec demand(String name, String unit) {
         return new QuantitySpec(name, unit, SafeSide.DEMAND);
     }
 
-    private static QuantitySpec capacity(String name, String unit) {
+    /** A quantity whose claim is unconservative when larger than the computed value. */
+    public static QuantitySpec capacity(String name, String unit) {
         return new QuantitySpec(name, unit, SafeSide.CAPACITY);
     }
 
-    private static final Map<String, CheckSpec> PILE_CAP = index(List.of(
-            new CheckSpec("pile-reactions", "Pile reactions, rigid cap", "linear distribution (common practice)",
-                    Kind.STRENGTH, List.of(demand("max", "kN"), capacity("min", "kN"))),
-            new CheckSpec("pile-reactions-deviation", "Pile reactions with piles off position",
-                    "EN 1992-1-1 9.8.1(1); tolerance common practice", Kind.STRENGTH, List.of(demand("max", "kN"))),
-            new CheckSpec("pile-spacing", "Pile spacing", "common practice",
-                    Kind.DETAILING, List.of(capacity("min_spacing", "mm"))),
-            new CheckSpec("edge-distance", "Pile edge distance", "EN 1992-1-1 9.8.1(1); minimum common practice",
-                    Kind.DETAILING, List.of(capacity("min_edge", "mm"))),
-            new CheckSpec("tie-x", "Tension tie, bars parallel to x", "EN 1992-1-1 6.5, 9.8.1(2)",
-                    Kind.STRENGTH, List.of(demand("force", "kN"), demand("moment", "kNm"), capacity("z", "mm"),
-                            demand("as_required", "mm2"), capacity("as_provided", "mm2"))),
-            new CheckSpec("tie-y", "Tension tie, bars parallel to y", "EN 1992-1-1 6.5, 9.8.1(2)",
-                    Kind.STRENGTH, List.of(demand("force", "kN"), demand("moment", "kNm"), capacity("z", "mm"),
-                            demand("as_required", "mm2"), capacity("as_provided", "mm2"))),
-            new CheckSpec("shear-x", "One-way shear, sections across x", "EN 1992-1-1 6.2.2",
-                    Kind.STRENGTH, List.of(demand("av", "mm"), demand("beta", "-"), demand("ved", "kN"),
-                            demand("ved_unreduced", "kN"), capacity("vrd_max", "kN"), capacity("vrdc", "kN"))),
-            new CheckSpec("shear-y", "One-way shear, sections across y", "EN 1992-1-1 6.2.2",
-                    Kind.STRENGTH, List.of(demand("av", "mm"), demand("beta", "-"), demand("ved", "kN"),
-                            demand("ved_unreduced", "kN"), capacity("vrd_max", "kN"), capacity("vrdc", "kN"))),
-            new CheckSpec("punching-face", "Punching at the column face", "EN 1992-1-1 6.4.5(3)",
-                    Kind.STRENGTH, List.of(capacity("u0", "mm"), demand("ved", "kN"), capacity("vrd_max", "kN"))),
-            new CheckSpec("punching-perimeter", "Punching at the basic control perimeter", "EN 1992-1-1 6.4.4",
-                    Kind.STRENGTH, List.of(capacity("u1", "mm"), demand("ved", "kN"), capacity("vrd", "kN"))),
-            new CheckSpec("node-column", "Compression node under the column", "EN 1992-1-1 6.5.4(4)a",
-                    Kind.STRENGTH, List.of(demand("stress", "MPa"), capacity("limit", "MPa"))),
-            new CheckSpec("node-pile", "Node over the most heavily loaded pile", "EN 1992-1-1 6.5.4(4)b, c",
-                    Kind.STRENGTH, List.of(demand("stress", "MPa"), capacity("limit", "MPa"), capacity("strut_angle", "deg"))),
-            new CheckSpec("min-steel-x", "Minimum tie steel, bars parallel to x", "EN 1992-1-1 9.2.1.1, 9.8.1(3)",
-                    Kind.DETAILING, List.of(demand("as_min", "mm2"), capacity("as_provided", "mm2"))),
-            new CheckSpec("min-steel-y", "Minimum tie steel, bars parallel to y", "EN 1992-1-1 9.2.1.1, 9.8.1(3)",
-                    Kind.DETAILING, List.of(demand("as_min", "mm2"), capacity("as_provided", "mm2"))),
-            new CheckSpec("max-steel", "Maximum steel", "EN 1992-1-1 9.2.1.1(3)",
-                    Kind.DETAILING, List.of(capacity("as_max", "mm2"), demand("as_provided", "mm2"))),
-            new CheckSpec("bar-spacing-x", "Bar spacing, bars parallel to x", "EN 1992-1-1 8.2, 7.3.3",
-                    Kind.DETAILING, List.of(demand("spacing", "mm"), capacity("clear", "mm"), demand("min_clear", "mm"),
-                            capacity("max_spacing", "mm"))),
-            new CheckSpec("bar-spacing-y", "Bar spacing, bars parallel to y", "EN 1992-1-1 8.2, 7.3.3",
-                    Kind.DETAILING, List.of(demand("spacing", "mm"), capacity("clear", "mm"), demand("min_clear", "mm"),
-                            capacity("max_spacing", "mm"))),
-            new CheckSpec("cover", "Concrete cover", "EN 1992-1-1 4.4.1",
-                    Kind.DETAILING, List.of(demand("required", "mm"), capacity("provided", "mm"))),
-            new CheckSpec("anchorage-x", "Anchorage of the x ties beyond the piles", "EN 1992-1-1 8.4, 9.8.1(5)",
-                    Kind.DETAILING, List.of(demand("lb_rqd", "mm"), demand("lbd", "mm"), capacity("available", "mm"))),
-            new CheckSpec("anchorage-y", "Anchorage of the y ties beyond the piles", "EN 1992-1-1 8.4, 9.8.1(5)",
-                    Kind.DETAILING, List.of(demand("lb_rqd", "mm"), demand("lbd", "mm"), capacity("available", "mm"))),
-            new CheckSpec("lap-x", "Laps of the bottom x-bars", "EN 1992-1-1 8.7.3", Kind.DETAILING,
-                    List.of(demand("lb_rqd", "mm"), demand("l0", "mm"), capacity("provided", "mm"))),
-            new CheckSpec("lap-y", "Laps of the bottom y-bars", "EN 1992-1-1 8.7.3", Kind.DETAILING,
-                    List.of(demand("lb_rqd", "mm"), demand("l0", "mm"), capacity("provided", "mm"))),
-            new CheckSpec("anchorage-starters", "Anchorage of the column starter bars in compression",
-                    "EN 1992-1-1 8.4",
-                    Kind.DETAILING, List.of(demand("lb_rqd", "mm"), demand("lbd", "mm"), capacity("available", "mm"))),
-            new CheckSpec("crack-control", "Crack control without direct calculation", "EN 1992-1-1 7.3.3",
-                    Kind.DETAILING, List.of(demand("sigma_s", "MPa"), capacity("max_diameter", "mm"),
-                            capacity("max_spacing", "mm")))));
+    private final String elementType;
+    private final Map<String, CheckSpec> checks;
 
-    private static Map<String, CheckSpec> index(List<CheckSpec> specs) {
+    private CheckCatalogue(String elementType, Map<String, CheckSpec> checks) {
+        this.elementType = elementType;
+        this.checks = checks;
+    }
+
+    /** The catalogue of {@code elementType}: its checks in report order. */
+    public static CheckCatalogue of(String elementType, List<CheckSpec> specs) {
         Map<String, CheckSpec> map = new LinkedHashMap<>();
         specs.forEach(s -> map.put(s.id(), s));
-        return java.util.Collections.unmodifiableMap(map);
+        return new CheckCatalogue(elementType, Collections.unmodifiableMap(map));
     }
 
-    private CheckCatalogue() {
+    /** The element type these checks belong to, e.g. {@code pile-cap}. */
+    public String elementType() {
+        return elementType;
     }
 
-    /** The checks of an element type, in report order; empty for an unknown type. */
-    public static Map<String, CheckSpec> checksOf(String elementType) {
-        return PileCap.TYPE.equals(elementType) ? PILE_CAP : Map.of();
+    /** The checks by id, in report order. */
+    public Map<String, CheckSpec> checks() {
+        return checks;
     }
 
-    /** The check {@code id} of {@code elementType}; throws when there is none (a programming error). */
-    public static CheckSpec check(String elementType, String id) {
-        CheckSpec spec = checksOf(elementType).get(id);
+    /** Check id → quantity → unit, in report order, for the checks whose id {@code which} accepts. */
+    public Map<String, Map<String, String>> quantityUnits(Predicate<String> which) {
+        Map<String, Map<String, String>> units = new LinkedHashMap<>();
+        checks.values().stream().filter(c -> which.test(c.id())).forEach(c -> {
+            Map<String, String> q = new LinkedHashMap<>();
+            c.quantities().forEach(x -> q.put(x.name(), x.unit()));
+            units.put(c.id(), Collections.unmodifiableMap(q));
+        });
+        return Collections.unmodifiableMap(units);
+    }
+
+    /** The check {@code id}; throws when there is none (a programming error). */
+    public CheckSpec check(String id) {
+        CheckSpec spec = checks.get(id);
         if (spec == null) {
             throw new IllegalArgumentException("no check '" + id + "' for " + elementType);
         }

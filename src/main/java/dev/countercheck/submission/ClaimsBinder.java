@@ -34,8 +34,8 @@ final class ClaimsBinder {
         this.values = values;
     }
 
-    Optional<Claims> read(Node node, String path, String elementType) {
-        Map<String, CheckSpec> checks = CheckCatalogue.checksOf(elementType);
+    Optional<Claims> read(Node node, String path, CheckCatalogue catalogue) {
+        Map<String, CheckSpec> checks = catalogue.checks();
         return values.map(node, path).flatMap(map -> {
             Optional<TieMethod> method = Optional.of(TieMethod.TRUSS);
             List<Claim> claims = new ArrayList<>();

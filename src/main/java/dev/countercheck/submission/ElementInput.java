@@ -3,7 +3,7 @@ package dev.countercheck.submission;
 import dev.countercheck.input.SourceLocation;
 
 /** One element of a submission: a reviewable element of a known type, or one too incomplete to review. */
-public sealed interface ElementInput permits PileCap, IncompleteElement {
+public interface ElementInput {
 
     String id();
 

@@ -14,11 +14,20 @@ import java.util.Optional;
  * plan, depth, piles, column, actions, or a ULS action case) but is otherwise readable becomes an
  * {@link IncompleteElement} naming what is missing; whatever it does give is still validated.
  */
-final class PileCapBinder {
+public final class PileCapBinder {
 
-    static final List<String> KEYS = List.of("id", "type", "description", "materials", "plan", "depth",
+    private static final List<String> KEYS = List.of("id", "type", "description", "materials", "plan", "depth",
             "cast_against", "self_weight", "piles", "column", "actions", "reinforcement", "claims", "punching_beta");
     private static final List<String> PLAN_KEYS = List.of("x", "y");
+
+    /** Reads pile caps for the reader. */
+    public static final ElementBinder BINDER = new ElementBinder(KEYS, PileCapChecks.CATALOGUE) {
+        @Override
+        Optional<ElementInput> read(Values values, MaterialsBinder materialsBinder, Fields f, String id,
+                                    String description, MaterialsBinder.Draft fileMaterials) {
+            return new PileCapBinder(values, materialsBinder).read(f, id, description, fileMaterials);
+        }
+    };
 
     private final Values values;
     private final MaterialsBinder materialsBinder;
@@ -48,7 +57,7 @@ final class PileCapBinder {
         Optional<Reinforcement> reinforcement = f.fields("reinforcement", ReinforcementBinder.KEYS)
                 .flatMap(r -> new ReinforcementBinder(values).read(r, plan, depth));
         Optional<ClaimsBinder.Claims> claims = f.has("claims")
-                ? f.get("claims").flatMap(n -> new ClaimsBinder(values).read(n, f.path("claims"), PileCap.TYPE))
+                ? f.get("claims").flatMap(n -> new ClaimsBinder(values).read(n, f.path("claims"), PileCapChecks.CATALOGUE))
                 : Optional.of(ClaimsBinder.Claims.NONE);
 
         List<String> missing = missing(f, actions);

@@ -7,6 +7,7 @@ import dev.countercheck.input.SourceLocation;
 import dev.countercheck.input.Suggestions;
 
 import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -25,16 +26,18 @@ final class SubmissionBinder {
     private static final List<String> KEYS = List.of("countercheck", "project", "basis", "materials", "elements");
     private static final List<String> PROJECT_KEYS = List.of("title", "reference", "revision", "prepared_by", "date");
     private static final List<String> BASIS_KEYS = List.of("ruleset");
-    private static final List<String> SUPPORTED_TYPES = List.of(PileCap.TYPE);
     private static final int ID_MAX_CHARS = 64;
     private static final Pattern ID = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]{0," + (ID_MAX_CHARS - 1) + "}");
 
     private final Values values;
     private final MaterialsBinder materialsBinder;
+    private final Map<String, ElementBinder> binders = new LinkedHashMap<>();
 
-    SubmissionBinder(Values values) {
+    /** @param binders the binder of each element type, in the order the types are listed to the user */
+    SubmissionBinder(Values values, List<ElementBinder> binders) {
         this.values = values;
         this.materialsBinder = new MaterialsBinder(values);
+        binders.forEach(b -> this.binders.put(b.type(), b));
     }
 
     Optional<Submission> bind(Node root, String sha256) {
@@ -84,8 +87,9 @@ final class SubmissionBinder {
         if (type.isEmpty()) {
             return Optional.empty();
         }
-        return Fields.of(node, path, values, PileCapBinder.KEYS).flatMap(f -> id.flatMap(i ->
-                new PileCapBinder(values, materialsBinder).read(f, i, f.text("description").orElse(""), materials)));
+        ElementBinder binder = binders.get(type.get());
+        return Fields.of(node, path, values, binder.keys()).flatMap(f -> id.flatMap(i ->
+                binder.read(values, materialsBinder, f, i, f.text("description").orElse(""), materials)));
     }
 
     /** A required entry of an element, read before the element's type (and so its keys) is known. */
@@ -114,12 +118,13 @@ final class SubmissionBinder {
 
     private Optional<String> type(Node node, String path) {
         return values.text(node, path).filter(type -> {
-            if (!SUPPORTED_TYPES.contains(type)) {
+            List<String> supported = List.copyOf(binders.keySet());
+            if (!supported.contains(type)) {
                 values.error(node, path, "unknown element type '" + Shown.text(type) + "'"
-                        + Suggestions.nearest(type, SUPPORTED_TYPES).map(t -> "; did you mean '" + t + "'?").orElse("")
-                        + "; supported types: " + String.join(", ", SUPPORTED_TYPES));
+                        + Suggestions.nearest(type, supported).map(t -> "; did you mean '" + t + "'?").orElse("")
+                        + "; supported types: " + String.join(", ", supported));
             }
-            return SUPPORTED_TYPES.contains(type);
+            return supported.contains(type);
         });
     }
 }

@@ -12,6 +12,7 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
+import java.util.List;
 import java.util.Optional;
 
 /**
@@ -29,6 +30,13 @@ public final class SubmissionReader {
 
     /** The most bytes read: four per character (the most UTF-8 takes) of the largest document parsed. */
     static final int MAX_BYTES = 4 * TreeParser.MAX_DOCUMENT_CHARS;
+
+    private final List<ElementBinder> binders;
+
+    /** @param binders the binder of each element type the reader accepts */
+    public SubmissionReader(List<ElementBinder> binders) {
+        this.binders = List.copyOf(binders);
+    }
 
     /**
      * Reads and validates {@code file}.
@@ -52,7 +60,7 @@ public final class SubmissionReader {
             throw new SubmissionException(problems.sorted());
         }
         Optional<Submission> submission = new TreeParser(problems).parse(bytes, name)
-                .flatMap(root -> new SubmissionBinder(new Values(problems)).bind(root, sha256(bytes)));
+                .flatMap(root -> new SubmissionBinder(new Values(problems), binders).bind(root, sha256(bytes)));
         if (problems.any()) {
             throw new SubmissionException(problems.sorted());
         }

@@ -1,5 +1,6 @@
 package dev.countercheck.docs;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.submission.PileCap;
 import dev.countercheck.submission.Submission;
 import dev.countercheck.submission.SubmissionReader;
@@ -24,7 +25,7 @@ class ManualExampleTest {
         String yaml = from.substring(start, from.indexOf("```", start));
         Path file = Files.writeString(dir.resolve("example.yaml"), yaml, StandardCharsets.UTF_8);
 
-        Submission s = new SubmissionReader().read(file);
+        Submission s = new SubmissionReader(ElementKinds.binders()).read(file);
 
         PileCap cap = (PileCap) s.elements().get(0);
         assertThat(cap.materials().exposure()).containsExactly("XC2"); // one class written alone

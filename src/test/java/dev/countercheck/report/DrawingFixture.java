@@ -4,6 +4,7 @@ import dev.countercheck.input.SourceLocation;
 import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.CheckStatus;
 import dev.countercheck.review.Drawing;
+import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
 import dev.countercheck.review.Severity;
@@ -60,8 +61,8 @@ final class DrawingFixture {
                 List.of(), Optional.empty(), Optional.of(reinforcement), PileCap.TieMethod.TRUSS, List.of());
     }
 
-    static Drawing drawing(String id) {
-        return new Drawing(cap(id), List.of(1500.0, 1620.0, 1380.0, 1450.0),
+    static PileCapDrawing drawing(String id) {
+        return new PileCapDrawing(cap(id), List.of(1500.0, 1620.0, 1380.0, 1450.0),
                 List.of(new Drawing.SectionLine("x", 600, "shear-x"), new Drawing.SectionLine("x", -600, "shear-x"),
                         new Drawing.SectionLine("y", 600, "shear-y"), new Drawing.SectionLine("y", -600, "shear-y")),
                 OptionalDouble.of(1700));

@@ -1,6 +1,6 @@
 package dev.countercheck.report;
 
-import dev.countercheck.review.Drawing;
+import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.review.ElementReview;
 import org.junit.jupiter.api.Test;
 import org.w3c.dom.Document;
@@ -23,7 +23,7 @@ import static org.assertj.core.api.Assertions.within;
 class DrawingsTest {
 
     private final ElementReview element = DrawingFixture.element("PC-T1");
-    private final Drawing drawing = element.drawing().orElseThrow();
+    private final PileCapDrawing drawing = (PileCapDrawing) element.drawing().orElseThrow();
     private final DrawingMarks marks = DrawingMarks.of(element, drawing);
     private final Document plan = xml(PlanDrawing.svg("e1", drawing, marks));
     private final Document section = xml(SectionDrawing.svg("e1", drawing, marks));
@@ -129,8 +129,8 @@ class DrawingsTest {
     void submittedTextIsEscapedInTheDrawings() {
         String hostile = "<script>alert(1)</script>";
         ElementReview bad = DrawingFixture.element(hostile);
-        DrawingMarks badMarks = DrawingMarks.of(bad, bad.drawing().orElseThrow());
-        Document badPlan = xml(PlanDrawing.svg("e1", bad.drawing().orElseThrow(), badMarks));
+        DrawingMarks badMarks = DrawingMarks.of(bad, (PileCapDrawing) bad.drawing().orElseThrow());
+        Document badPlan = xml(PlanDrawing.svg("e1", (PileCapDrawing) bad.drawing().orElseThrow(), badMarks));
         assertThat(badPlan.getElementsByTagName("script").getLength()).isZero();
         assertThat(badPlan.getElementsByTagName("title").item(0).getTextContent())
                 .isEqualTo("Plan of pile cap " + hostile);
@@ -143,9 +143,9 @@ class DrawingsTest {
                 if (e.drawing().isEmpty()) {
                     continue;
                 }
-                DrawingMarks m = DrawingMarks.of(e, e.drawing().get());
-                for (String svg : List.of(PlanDrawing.svg("e", e.drawing().get(), m),
-                        SectionDrawing.svg("e", e.drawing().get(), m))) {
+                DrawingMarks m = DrawingMarks.of(e, (PileCapDrawing) e.drawing().get());
+                for (String svg : List.of(PlanDrawing.svg("e", (PileCapDrawing) e.drawing().get(), m),
+                        SectionDrawing.svg("e", (PileCapDrawing) e.drawing().get(), m))) {
                     assertInsideCanvas(e.id(), xml(svg));
                 }
             }

@@ -18,6 +18,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.OptionalInt;
 
 /**
  * A small finished review built by hand for the writer tests.
@@ -70,9 +71,9 @@ final class ReviewFixture {
     private static ElementReview pileCap() {
         CheckResult tie = new CheckResult("tie-x", "Tension tie, bars parallel to x", "EN 1992-1-1 6.5, 9.8.1(2)",
                 CheckStatus.PASS, OptionalDouble.of(0.8123456), Optional.empty(),
-                values("force", new Value(812.3456, "kN"),
-                        "as_required", new Value(1867.459, "mm2"),
-                        "as_provided", new Value(123456.7, "mm2")),
+                values("force", new Value(812.3456, "kN", OptionalInt.of(0)),
+                        "as_required", new Value(1867.459, "mm2", OptionalInt.of(1)),
+                        "as_provided", new Value(123456.7, "mm2", OptionalInt.empty())),
                 List.of(new ClaimComparison("force", 812.0, 812.3456, -0.000425, ClaimVerdict.AGREES),
                         new ClaimComparison("as_required", 2000.0, 1867.459, 0.070974,
                                 ClaimVerdict.DIFFERS_CONSERVATIVE)),
@@ -81,7 +82,7 @@ final class ReviewFixture {
                                 "EN 1992-1-1 6.5.4", "fyd = fyk/γs with γs from the ruleset")));
         CheckResult shear = new CheckResult("shear-x", "One-way shear, sections parallel to y", "EN 1992-1-1 6.2.2",
                 CheckStatus.FAIL, OptionalDouble.of(1.18341), Optional.of("VEd exceeds VRd,c"),
-                values("ved", new Value(1183.4, "kN"), "vrdc", new Value(1000.1, "kN")),
+                values("ved", new Value(1183.4, "kN", OptionalInt.empty()), "vrdc", new Value(1000.1, "kN", OptionalInt.empty())),
                 List.of(new ClaimComparison("vrdc", 1200.0, 1000.1, 0.19988, ClaimVerdict.DIFFERS_UNCONSERVATIVE)),
                 List.of(Step.withRemark("k", "1 + √(200/d)", "1 + √(200/45)", 2.0, "-", "EN 1992-1-1 6.2.2(1)",
                         "k capped at 2.0")));
@@ -100,7 +101,7 @@ final class ReviewFixture {
     private static ElementReview padFooting() {
         CheckResult bearing = new CheckResult("bearing", "Ground bearing pressure", "common practice",
                 CheckStatus.PASS, OptionalDouble.of(0.7), Optional.empty(),
-                values("pressure", new Value(154.0, "kPa")),
+                values("pressure", new Value(154.0, "kPa", OptionalInt.of(0))),
                 List.of(),
                 List.of(Step.of("q", "N / (B·L)", "1386/(3·3)", 154.0, "kPa", "common practice")));
         CheckResult shearY = new CheckResult("shear-y", "One-way shear, sections parallel to x", "EN 1992-1-1 6.2.2",

@@ -1,5 +1,6 @@
 package dev.countercheck.report;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.review.Review;
 import dev.countercheck.ruleset.RulesetLoader;
@@ -37,7 +38,7 @@ final class SampleReviews {
 
     static Review review(Path sample) {
         try {
-            Submission submission = new SubmissionReader().read(sample);
+            Submission submission = new SubmissionReader(ElementKinds.binders()).read(sample);
             var rules = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY)
                     .load(submission.ruleset().orElse("en1992-recommended"));
             return new ProjectReviewer(new Review.ToolInfo("countercheck", "test")).review(submission, rules, DATE);

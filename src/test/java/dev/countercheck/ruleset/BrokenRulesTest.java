@@ -3,6 +3,7 @@ package dev.countercheck.ruleset;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.input.InputError;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -30,16 +31,18 @@ class BrokenRulesTest {
 
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', textBlock = """
-            unknown variable   |  max-steel: {scope: cap, derived: {as_max: {formula: 'as_q * 2', unit: mm2, clause: x}}, values: [as_max], requirements: []}                                  | 6 | 'as_q'
-            unknown table      |  max-steel: {scope: cap, derived: {as_max: {formula: 'no_such_table(1, 2)', unit: mm2, clause: x}}, values: [as_max], requirements: []}                     | 6 | no_such_table
-            type error         |  max-steel: {scope: cap, derived: {}, values: [], requirements: [{that: 'as_x + 1', severity: major, message: m, clause: x}]}                                    | 6 | must be a condition
-            derived cycle      |  max-steel: {scope: cap, derived: {a: {formula: 'b + 1', unit: mm2, clause: x}, b: {formula: 'a + 1', unit: mm2, clause: x}}, values: [], requirements: []}     | 6 | cycle
-            rule without clause|  max-steel: {scope: cap, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: major, message: m}]}                                              | 6 | every rule names the clause
-            unknown check      |  max-stell: {scope: cap, derived: {}, values: [], requirements: []}                                                                                                 | 6 | not a check a ruleset can define
-            unknown scope      |  max-steel: {scope: slab, derived: {}, values: [], requirements: []}                                                                                                | 6 | unknown scope
-            wrong unit         |  max-steel: {scope: cap, derived: {as_max: {formula: 'as_x', unit: mm, clause: x}}, values: [as_max], requirements: []}                                          | 6 | reported in mm2
-            bad severity       |  max-steel: {scope: cap, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: grave, message: m, clause: x}]}                                    | 6 | is not one of critical
-            unknown placeholder|  max-steel: {scope: cap, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: major, message: 'see {nothing}', clause: x}]}                     | 6 | {nothing}
+            unknown variable   |  max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'as_q * 2', unit: mm2, clause: x}}, values: [as_max], requirements: []}                                  | 6 | 'as_q'
+            unknown table      |  max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'no_such_table(1, 2)', unit: mm2, clause: x}}, values: [as_max], requirements: []}                     | 6 | no_such_table
+            type error         |  max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x + 1', severity: major, message: m, clause: x}]}                                    | 6 | must be a condition
+            derived cycle      |  max-steel: {applies_to: [pile-cap], scope: section, derived: {a: {formula: 'b + 1', unit: mm2, clause: x}, b: {formula: 'a + 1', unit: mm2, clause: x}}, values: [], requirements: []}     | 6 | cycle
+            rule without clause|  max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: major, message: m}]}                                              | 6 | every rule names the clause
+            unknown check      |  max-stell: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: []}                                                                                                 | 6 | not a check a ruleset can define
+            unknown scope      |  max-steel: {applies_to: [pile-cap], scope: slab, derived: {}, values: [], requirements: []}                                                                                                | 6 | unknown scope
+            wrong unit         |  max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'as_x', unit: mm, clause: x}}, values: [as_max], requirements: []}                                          | 6 | reported in mm2
+            bad severity       |  max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: grave, message: m, clause: x}]}                                    | 6 | is not one of critical
+            unknown type       |  max-steel: {applies_to: [pile-kap], scope: section, derived: {}, values: [], requirements: []}                                                                                             | 6 | unknown element type
+            no type            |  max-steel: {scope: section, derived: {}, values: [], requirements: []}                                                                                                                   | 6 | is missing: every check names the element types it applies to
+            unknown placeholder|  max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: major, message: 'see {nothing}', clause: x}]}                     | 6 | {nothing}
             """)
     void aBrokenRuleIsRefusedWithItsLocation(String name, String check, int line, String message, @TempDir Path dir)
             throws IOException {
@@ -52,5 +55,26 @@ class BrokenRulesTest {
             assertThat(e.location().column()).isPositive();
             assertThat(e.message()).contains(message.replace("'", ""));
         });
+    }
+
+    @Test
+    void twoChecksCannotDefineTheSameCheckOfOneElementType(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("broken.yaml"), HEAD
+                + "  min-steel-x: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: []}\n");
+        List<InputError> errors = catchThrowableOfType(RulesetException.class,
+                () -> new RulesetLoader(dir, ProjectReviewer.RULE_VOCABULARY).load("broken")).errors();
+        assertThat(errors).anySatisfy(e -> assertThat(e.message())
+                .contains("'min-steel-x' of pile-cap is already defined by the check min-steel-{dir}"));
+    }
+
+    @Test
+    void rulesAreFoundByElementTypeAndCheckId() throws RulesetException {
+        Ruleset rules = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY).load("en1992-recommended");
+        assertThat(rules.rule("pile-cap", "anchorage-y")).hasValueSatisfying(r -> {
+            assertThat(r.def().id()).isEqualTo("anchorage-{dir}");
+            assertThat(r.subject()).isEqualTo("y");
+        });
+        assertThat(rules.rule("pile-cap", "tie-x")).as("computed in Java, not by a rule").isEmpty();
+        assertThat(rules.rule("pad-footing", "anchorage-x")).as("no such element type").isEmpty();
     }
 }

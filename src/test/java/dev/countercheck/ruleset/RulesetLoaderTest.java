@@ -28,7 +28,7 @@ class RulesetLoaderTest {
             """;
 
     private static RulesetLoader loader(Path dir) {
-        return new RulesetLoader(dir, new RuleVocabulary(Map.of(), Map.of(), Map.of(), Set.of("gamma_c", "gamma_s")));
+        return new RulesetLoader(dir, new RuleVocabulary(Map.of(), Set.of("gamma_c", "gamma_s")));
     }
 
     private static List<InputError> errors(Path dir, String reference) {

@@ -1,5 +1,6 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.input.InputError;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -48,7 +49,7 @@ class BadSubmissionsTest {
         assertThat(expected).as("the file announces at least one error").isNotEmpty();
 
         SubmissionException e = catchThrowableOfType(SubmissionException.class,
-                () -> new SubmissionReader().read(file));
+                () -> new SubmissionReader(ElementKinds.binders()).read(file));
 
         assertThat(e).as("a SubmissionException").isNotNull();
         for (Expected x : expected) {

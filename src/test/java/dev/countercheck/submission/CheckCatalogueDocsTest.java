@@ -14,7 +14,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /**
  * The table of checks, quantities, units and safe sides in {@code docs/pile-cap.md} is generated
- * from {@link CheckCatalogue}; this test keeps the two equal. Run it with
+ * from the pile cap's check catalogue ({@link PileCapChecks}); this test keeps the two equal. Run it with
  * {@code -Dcountercheck.writeDocs=true} to rewrite the generated part after changing the catalogue.
  */
 class CheckCatalogueDocsTest {
@@ -24,10 +24,10 @@ class CheckCatalogueDocsTest {
     static final String END = "<!-- end of generated part -->\n";
 
     /** The generated table: one row per check, its quantities with unit and unsafe side. */
-    static String table(String elementType) {
+    static String table(CheckCatalogue catalogue) {
         StringBuilder out = new StringBuilder("| check | title | basis | kind | quantities (unit, unconservative claim) |\n"
                 + "|---|---|---|---|---|\n");
-        for (CheckSpec c : CheckCatalogue.checksOf(elementType).values()) {
+        for (CheckSpec c : catalogue.checks().values()) {
             String quantities = c.quantities().stream().map(CheckCatalogueDocsTest::quantity)
                     .collect(Collectors.joining("; "));
             out.append("| `").append(c.id()).append("` | ").append(c.title()).append(" | ").append(c.basis())
@@ -49,7 +49,7 @@ class CheckCatalogueDocsTest {
         int end = page.indexOf(END);
         assertThat(start).as("the page marks its generated part").isNotNegative();
         assertThat(end).isGreaterThan(start);
-        String generated = table(PileCap.TYPE);
+        String generated = table(PileCapChecks.CATALOGUE);
         String expected = page.substring(0, start + START.length()) + generated + page.substring(end);
         if (Boolean.getBoolean("countercheck.writeDocs")) {
             Files.writeString(PAGE, expected, StandardCharsets.UTF_8);
@@ -62,7 +62,7 @@ class CheckCatalogueDocsTest {
     void everyCheckOfThePageIsInTheCatalogueAndEveryCatalogueCheckHasASection() throws IOException {
         String page = Files.readString(PAGE, StandardCharsets.UTF_8);
         String prose = page.substring(0, page.indexOf(START));
-        for (String id : CheckCatalogue.checksOf(PileCap.TYPE).keySet()) {
+        for (String id : PileCapChecks.CATALOGUE.checks().keySet()) {
             assertThat(prose).as("a method section names " + id).containsPattern("### [^\\n]*\\b" + id + "\\b");
         }
     }

@@ -1,5 +1,6 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.input.InputError;
 import dev.countercheck.input.Shown;
 import dev.countercheck.input.TreeParser;
@@ -28,7 +29,7 @@ class HostileSubmissionsTest {
     @TempDir
     Path folder;
 
-    private final SubmissionReader reader = new SubmissionReader();
+    private final SubmissionReader reader = new SubmissionReader(ElementKinds.binders());
 
     @ParameterizedTest(name = "{0}")
     @ValueSource(strings = {"harbour-lane-utf8-bom.yaml", "harbour-lane-utf16le-bom.yaml", "harbour-lane-utf16be-bom.yaml"})

@@ -1,5 +1,6 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.element.ElementKinds;
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.Combinators;
@@ -78,7 +79,7 @@ class SubmissionReaderProperties {
         try {
             Files.writeString(file, text, StandardCharsets.UTF_8);
             try {
-                new SubmissionReader().read(file);
+                new SubmissionReader(ElementKinds.binders()).read(file);
             } catch (SubmissionException e) {
                 assertThat(e.errors()).isNotEmpty().allSatisfy(error -> {
                     assertThat(error.location().line()).isPositive();

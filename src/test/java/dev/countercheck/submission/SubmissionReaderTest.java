@@ -1,5 +1,6 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.input.InputError;
 import dev.countercheck.input.SourceLocation;
 import dev.countercheck.submission.ActionCase.Kind;
@@ -34,7 +35,7 @@ class SubmissionReaderTest {
 
     private static final Path GOOD = Path.of("src/test/resources/submissions/good");
 
-    private final SubmissionReader reader = new SubmissionReader();
+    private final SubmissionReader reader = new SubmissionReader(ElementKinds.binders());
 
     private Submission readGood(String name) throws SubmissionException {
         return reader.read(GOOD.resolve(name));

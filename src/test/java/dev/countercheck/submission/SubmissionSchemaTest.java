@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.countercheck.cli.CountercheckCommand;
 import dev.countercheck.submission.ActionCase.Kind;
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.submission.CheckCatalogue.CheckSpec;
 import dev.countercheck.submission.CheckCatalogue.QuantitySpec;
 import dev.countercheck.submission.Column.ColumnShape;
@@ -134,7 +135,7 @@ class SubmissionSchemaTest {
 
         assertThat(schema.at("/$defs/pile-cap/properties/type/const").asText())
                 .as("the element types the reader supports")
-                .isEqualTo(String.join(",", (List<String>) staticField(SubmissionBinder.class, "SUPPORTED_TYPES")));
+                .isEqualTo(String.join(",", ElementKinds.binders().stream().map(ElementBinder::type).toList()));
         assertThat(schema.at("/properties/elements/items/$ref").asText()).isEqualTo("#/$defs/pile-cap");
         assertThat(schema.at("/properties/countercheck/const").asInt()).isEqualTo(SubmissionBinder.FORMAT_VERSION);
         assertThat(schema.at("/$defs/pile-cap/properties/id/pattern").asText())
@@ -144,7 +145,7 @@ class SubmissionSchemaTest {
     @Test
     void claimsAreTheCataloguesChecksAndQuantitiesInTheirUnits() {
         JsonNode claims = schema.at("/$defs/claims/properties");
-        Map<String, CheckSpec> checks = CheckCatalogue.checksOf(PileCap.TYPE);
+        Map<String, CheckSpec> checks = PileCapChecks.CATALOGUE.checks();
         Set<String> expected = new TreeSet<>(checks.keySet());
         expected.add("method");
         assertThat(new TreeSet<>(names(claims))).isEqualTo(expected);

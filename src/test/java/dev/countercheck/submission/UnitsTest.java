@@ -146,7 +146,7 @@ class UnitsTest {
 
     @Test
     void everyClaimableQuantityHasAUnitTheReaderKnows() {
-        CheckCatalogue.checksOf(PileCap.TYPE).values().forEach(check -> check.quantities().forEach(
+        PileCapChecks.CATALOGUE.checks().values().forEach(check -> check.quantities().forEach(
                 q -> assertThat(Dimension.ofCatalogueUnit(q.unit())).as(check.id() + "." + q.name()).isNotNull()));
     }
 }

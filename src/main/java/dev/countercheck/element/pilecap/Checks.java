@@ -1,8 +1,7 @@
 package dev.countercheck.element.pilecap;
 
 import dev.countercheck.review.CheckBuilder;
-import dev.countercheck.submission.CheckCatalogue;
-import dev.countercheck.submission.PileCap;
+import dev.countercheck.submission.PileCapChecks;
 
 /** Shared starting point of the pile-cap checks. */
 final class Checks {
@@ -11,6 +10,6 @@ final class Checks {
     }
 
     static CheckBuilder builder(String checkId) {
-        return new CheckBuilder(CheckCatalogue.check(PileCap.TYPE, checkId));
+        return new CheckBuilder(PileCapChecks.CATALOGUE.check(checkId));
     }
 }

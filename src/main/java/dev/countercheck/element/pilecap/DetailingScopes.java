@@ -15,17 +15,18 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * The variables a pile cap offers the ruleset's detailing rules, by scope: {@code cap} (the whole
- * element), {@code bottom-bars} (one direction of bottom bars, subjects x and y) and
- * {@code starter-bars}. Every scope also sees the cap's variables. The engine computes geometry
+ * The variables a pile cap offers the ruleset's detailing rules, by scope: {@code section} (the whole
+ * element: concrete, covers and bars), {@code bottom-bars} (one direction of bottom bars, subjects x
+ * and y) and {@code starters} (the column's starter bars). The names are shared with every element
+ * type that has such parts. Every scope also sees the section's variables. The engine computes geometry
  * and actions here (As,req from the tie check, available lengths, the quasi-permanent steel
  * stress); what is required of them is the ruleset's business.
  */
 final class DetailingScopes {
 
-    static final String CAP = "cap";
+    static final String SECTION = "section";
     static final String BARS = "bottom-bars";
-    static final String STARTERS = "starter-bars";
+    static final String STARTERS = "starters";
 
     /** The variables of a scope for one subject, or why they cannot be formed. */
     record Values(Map<String, Object> values, Optional<String> missing) {
@@ -94,11 +95,11 @@ final class DetailingScopes {
         starters.put("count", Variable.number("-", "number of starter bars", 8));
         starters.put("phi_layer1", Variable.number("mm", "largest bottom bar of layer 1", 25));
         starters.put("phi_layer2", Variable.number("mm", "largest bottom bar of layer 2 (0 when none)", 25));
-        return Map.of(CAP, cap, BARS, bars, STARTERS, starters);
+        return Map.of(SECTION, cap, BARS, bars, STARTERS, starters);
     }
 
     static Map<String, List<String>> subjects() {
-        return Map.of(CAP, List.of(""), BARS, List.of("x", "y"), STARTERS, List.of(""));
+        return Map.of(SECTION, List.of(""), BARS, List.of("x", "y"), STARTERS, List.of(""));
     }
 
     /**

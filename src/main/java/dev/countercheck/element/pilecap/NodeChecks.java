@@ -9,6 +9,7 @@ import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.Severity;
 import dev.countercheck.submission.Column;
+import dev.countercheck.statics.PileGroupReactions;
 import dev.countercheck.submission.Point;
 
 /** {@code node-column} and {@code node-pile}: node stresses of the strut-and-tie model (6.5.4). */
@@ -79,7 +80,7 @@ final class NodeChecks {
     }
 
     static double maxReaction(PileCapContext ctx) {
-        return ctx.uls.stream().map(UlsCase::withSelfWeight).mapToDouble(RigidCapReactions.Distribution::max)
+        return ctx.uls.stream().map(UlsCase::withSelfWeight).mapToDouble(PileGroupReactions.Distribution::max)
                 .max().orElse(0);
     }
 }

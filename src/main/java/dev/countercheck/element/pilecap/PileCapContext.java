@@ -1,7 +1,9 @@
 package dev.countercheck.element.pilecap;
 
-import dev.countercheck.element.pilecap.RigidCapReactions.Distribution;
-import dev.countercheck.element.pilecap.RigidCapReactions.Load;
+import dev.countercheck.statics.PileGroupReactions;
+import dev.countercheck.statics.PileGroupReactions.Distribution;
+import dev.countercheck.statics.PileGroupReactions.Load;
+import dev.countercheck.statics.PlanPoint;
 import dev.countercheck.eurocode.Materials;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
@@ -83,13 +85,21 @@ final class PileCapContext {
      */
     Distribution reactions(List<Point> piles, ActionCase a, boolean withSelfWeight) {
         List<Load> loads = new ArrayList<>();
-        loads.add(new Load("N", a.nKn(), cap.column().position()));
+        loads.add(new Load("N", a.nKn(), plan(cap.column().position())));
         if (withSelfWeight && addsSelfWeight()) {
-            loads.add(new Load("γG·Wcap", factoredSelfWeightKn(), new Point(0, 0)));
+            loads.add(new Load("γG·Wcap", factoredSelfWeightKn(), new PlanPoint(0, 0)));
         }
         double h = cap.depthMm() / 1000.0;
-        return RigidCapReactions.solve(piles, loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h,
-                RigidCapReactions.lineOf(cap.piles().positions()));
+        return PileGroupReactions.solve(plan(piles), loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h,
+                PileGroupReactions.lineOf(plan(cap.piles().positions())));
+    }
+
+    private static PlanPoint plan(Point p) {
+        return new PlanPoint(p.xMm(), p.yMm());
+    }
+
+    private static List<PlanPoint> plan(List<Point> points) {
+        return points.stream().map(PileCapContext::plan).toList();
     }
 
     /** The largest column N over the ULS cases (the cap's own weight is not part of it). */

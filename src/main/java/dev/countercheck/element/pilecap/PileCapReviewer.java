@@ -3,13 +3,12 @@ package dev.countercheck.element.pilecap;
 import dev.countercheck.eurocode.OutOfRangeException;
 import dev.countercheck.element.RuleChecks;
 import dev.countercheck.review.Value;
-import dev.countercheck.ruleset.CheckDef;
-import dev.countercheck.ruleset.RuleVocabulary;
+import dev.countercheck.ruleset.Rule;
+import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.ruleset.Ruleset;
-import dev.countercheck.submission.CheckCatalogue;
 import dev.countercheck.submission.PileCap;
 
 import java.util.ArrayList;
@@ -22,11 +21,13 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.function.Function;
 
+import static dev.countercheck.submission.PileCapChecks.CATALOGUE;
+
 /** Reviews one pile cap: every check of pile-cap-method.md that this version performs. */
-public final class PileCapReviewer {
+final class PileCapReviewer {
 
     /** The assumptions every pile-cap review makes, for the report. */
-    public static final List<String> ASSUMPTIONS = List.of(
+    static final List<String> ASSUMPTIONS = List.of(
             "Pile caps are rigid: pile reactions vary linearly with position (common practice). The cap's own"
                     + " weight (γconc × plan area × h, factored by γG) is added at the cap centre unless the"
                     + " submission says it is included in the actions.",
@@ -44,7 +45,7 @@ public final class PileCapReviewer {
             "Concrete properties come from the expressions of EN 1992-1-1 Table 3.1, unrounded.");
 
     /** The ruleset parameters the pile-cap checks read. */
-    public static final Set<String> PARAMETERS = Set.of("gamma_c", "gamma_s", "gamma_g", "alpha_cc",
+    static final Set<String> PARAMETERS = Set.of("gamma_c", "gamma_s", "gamma_g", "alpha_cc",
             "alpha_cc_shear", "alpha_ct", "c_rdc_factor", "v_min_coefficient", "punching_vrd_max_factor", "node_k1",
             "node_k2", "node_k3", "k_prime", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
             "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
@@ -52,23 +53,15 @@ public final class PileCapReviewer {
 
     private final ElementAssembler assembler;
 
-    public PileCapReviewer(ElementAssembler assembler) {
+    PileCapReviewer(ElementAssembler assembler) {
         this.assembler = assembler;
     }
 
-    /** What the detailing rules of a ruleset may use and define for pile caps. */
-    public static RuleVocabulary vocabulary(Set<String> requiredParameters) {
-        Map<String, Map<String, String>> units = new LinkedHashMap<>();
-        CheckCatalogue.checksOf(PileCap.TYPE).values().stream().filter(c -> !checks().containsKey(c.id()))
-                .forEach(c -> {
-                    Map<String, String> q = new LinkedHashMap<>();
-                    c.quantities().forEach(x -> q.put(x.name(), x.unit()));
-                    units.put(c.id(), q);
-                });
-        return new RuleVocabulary(DetailingScopes.SCOPES, DetailingScopes.subjects(), units, requiredParameters);
-    }
+    /** What the detailing rules of a ruleset may use and define for pile caps: the checks not computed in Java. */
+    static final ElementRules RULE_VOCABULARY = new ElementRules(DetailingScopes.SCOPES, DetailingScopes.subjects(),
+            CATALOGUE.quantityUnits(id -> !checks().containsKey(id)));
 
-    public ElementReview review(PileCap cap, Ruleset rules) {
+    ElementReview review(PileCap cap, Ruleset rules) {
         PileCapContext ctx = new PileCapContext(cap, rules);
         Map<String, Function<PileCapContext, CheckOutcome>> checks = checks();
         Map<String, CheckOutcome> done = new LinkedHashMap<>();
@@ -80,11 +73,11 @@ public final class PileCapReviewer {
         }
         Map<String, DetailingScopes.Values> variables = new HashMap<>();
         List<CheckOutcome> outcomes = new ArrayList<>();
-        for (String id : CheckCatalogue.checksOf(PileCap.TYPE).keySet()) {
+        for (String id : CATALOGUE.checks().keySet()) {
             outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired, variables));
         }
-        return assembler.assemble(cap.id(), cap.type(), cap.description(), outcomes, cap.claims(), List.of(),
-                Optional.of(DrawingNotes.of(ctx)));
+        return assembler.assemble(cap.id(), CATALOGUE, cap.description(), outcomes, cap.claims(), List.of(),
+                Optional.of(DrawingNotes.of(ctx, outcomes)));
     }
 
     /** The checks computed in Java, in catalogue order; the others come from the ruleset. */
@@ -121,20 +114,18 @@ public final class PileCapReviewer {
      */
     private static CheckOutcome byRule(String id, PileCapContext ctx, Map<Axis, Double> asRequired,
                                        Map<String, DetailingScopes.Values> variables) {
-        for (CheckDef def : ctx.rules.checks().values()) {
-            for (String subject : DetailingScopes.subjects().getOrDefault(def.scope(), List.of(""))) {
-                if (def.idFor(subject).equals(id)) {
-                    DetailingScopes.Values v = variables.computeIfAbsent(def.scope() + "/" + subject,
-                            k -> DetailingScopes.values(ctx, def.scope(), subject, asRequired));
-                    if (v.missing().isPresent()) {
-                        return Checks.builder(id).notChecked(v.missing().get()).build();
-                    }
-                    return RuleChecks.run(PileCap.TYPE, def, subject, ctx.rules,
-                            DetailingScopes.SCOPES.get(def.scope()), v.values());
-                }
-            }
+        Optional<Rule> rule = ctx.rules.rule(CATALOGUE.elementType(), id);
+        if (rule.isEmpty()) {
+            return Checks.builder(id).notChecked("ruleset " + ctx.rules.id() + " has no rule for this check").build();
         }
-        return Checks.builder(id).notChecked("ruleset " + ctx.rules.id() + " has no rule for this check").build();
+        String scope = rule.get().def().scope();
+        String subject = rule.get().subject();
+        DetailingScopes.Values v = variables.computeIfAbsent(scope + "/" + subject,
+                k -> DetailingScopes.values(ctx, scope, subject, asRequired));
+        if (v.missing().isPresent()) {
+            return Checks.builder(id).notChecked(v.missing().get()).build();
+        }
+        return RuleChecks.run(CATALOGUE, rule.get(), ctx.rules, DetailingScopes.SCOPES.get(scope), v.values());
     }
 
     /** A formula asked outside its valid range makes the check not-checked, with the reason. */

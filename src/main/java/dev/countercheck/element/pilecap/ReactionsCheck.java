@@ -1,7 +1,8 @@
 package dev.countercheck.element.pilecap;
 
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
-import dev.countercheck.element.pilecap.RigidCapReactions.Distribution;
+import dev.countercheck.statics.PileGroupReactions;
+import dev.countercheck.statics.PileGroupReactions.Distribution;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
@@ -27,9 +28,9 @@ final class ReactionsCheck {
         }
         Extreme max = Extreme.over(ctx, true);
         Extreme min = Extreme.over(ctx, false);
-        RigidCapReactions.trace(max.distribution, max.caseName).forEach(b::trace);
+        PileGroupReactions.trace(max.distribution, max.caseName).forEach(b::trace);
         if (!min.caseName.equals(max.caseName)) {
-            RigidCapReactions.trace(min.distribution, min.caseName).forEach(b::trace);
+            PileGroupReactions.trace(min.distribution, min.caseName).forEach(b::trace);
         }
         b.value("max", Step.of("P,max", "max P_i over piles and ULS cases",
                 "pile " + max.pile + " in " + max.caseName, max.value, "kN", BASIS));

@@ -6,6 +6,7 @@ import dev.countercheck.eurocode.Shear;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
+import dev.countercheck.review.Drawing.SectionLine;
 import dev.countercheck.review.Severity;
 import dev.countercheck.submission.Point;
 
@@ -29,6 +30,7 @@ final class ShearCheck {
 
     static CheckOutcome run(PileCapContext ctx, Axis axis) {
         CheckBuilder b = Checks.builder("shear-" + axis.label());
+        placeSections(ctx, axis, b);
         if (ctx.section.isEmpty()) {
             return b.notChecked("no bottom reinforcement given: d and ρl are unknown").build();
         }
@@ -88,10 +90,31 @@ final class ShearCheck {
     }
 
     /**
+     * Records the critical section on each side of the column that has a pile centre beyond its face:
+     * av (before the 0.5d floor, which needs d) from the face towards the nearest such pile.
+     */
+    private static void placeSections(PileCapContext ctx, Axis axis, CheckBuilder b) {
+        for (int sign : new int[] {1, -1}) {
+            double face = axis.along(ctx.cap.column().position()) + sign * axis.columnHalf(ctx.cap.column());
+            double nearest = Double.POSITIVE_INFINITY;
+            for (Point p : ctx.cap.piles().positions()) {
+                double distance = sign * (axis.along(p) - face);
+                if (distance > 0) {
+                    nearest = Math.min(nearest, distance);
+                }
+            }
+            if (Double.isFinite(nearest)) {
+                double av = Math.max(0, shearSpan(ctx, 0, nearest).value());
+                b.section(new SectionLine(axis.label(), face + sign * av, b.id()));
+            }
+        }
+    }
+
+    /**
      * The distance av from the column face to the critical section, taken a share of the pile diameter
      * inside the face of pile {@code pile} (ruleset parameter, common practice 0.2φ), before the 0.5d floor.
      */
-    static Step shearSpan(PileCapContext ctx, int pile, double faceToCentreMm) {
+    private static Step shearSpan(PileCapContext ctx, int pile, double faceToCentreMm) {
         double phi = ctx.cap.piles().diameterMm();
         double inside = ctx.rules.number("shear_section_inside_pile");
         double offset = (0.5 - inside) * phi;

@@ -1,5 +1,6 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.ElementReview;
@@ -29,7 +30,7 @@ final class CapReviews {
     static Review review(String resource, String rulesetId) {
         try {
             Path file = Path.of(CapReviews.class.getResource(resource).toURI());
-            Submission s = new SubmissionReader().read(file);
+            Submission s = new SubmissionReader(ElementKinds.binders()).read(file);
             return new ProjectReviewer(new Review.ToolInfo("countercheck", "test")).review(s, ruleset(rulesetId),
                     "2026-01-01");
         } catch (URISyntaxException e) {

@@ -1,5 +1,6 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.ElementKinds;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.ElementReview;
@@ -80,7 +81,7 @@ class UnitInvarianceProperties {
             Files.writeString(file, written(choice));
             try {
                 Review r = new ProjectReviewer(new Review.ToolInfo("countercheck", "test"))
-                        .review(new SubmissionReader().read(file), CapReviews.ruleset("en1992-recommended"), "2026-01-01");
+                        .review(new SubmissionReader(ElementKinds.binders()).read(file), CapReviews.ruleset("en1992-recommended"), "2026-01-01");
                 return r.elements().get(0);
             } finally {
                 Files.deleteIfExists(file);

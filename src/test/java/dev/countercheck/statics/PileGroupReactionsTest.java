@@ -1,8 +1,7 @@
-package dev.countercheck.element.pilecap;
+package dev.countercheck.statics;
 
-import dev.countercheck.element.pilecap.RigidCapReactions.Distribution;
-import dev.countercheck.element.pilecap.RigidCapReactions.Load;
-import dev.countercheck.submission.Point;
+import dev.countercheck.statics.PileGroupReactions.Distribution;
+import dev.countercheck.statics.PileGroupReactions.Load;
 import org.junit.jupiter.api.Test;
 
 import java.util.List;
@@ -14,10 +13,10 @@ import static org.assertj.core.api.Assertions.within;
  * Pile reactions under a rigid cap. Expected values are hand calculations of the linear
  * distribution P_i = V/n + a·dx_i + b·dy_i, written out beside each test.
  */
-class RigidCapReactionsTest {
+class PileGroupReactionsTest {
 
     private static Load column(double n, double x, double y) {
-        return new Load("N", n, new Point(x, y));
+        return new Load("N", n, new PlanPoint(x, y));
     }
 
     @Test
@@ -25,9 +24,9 @@ class RigidCapReactionsTest {
         // Hand calculation: 4 piles at (±600, ±600), V = 4000 kN, Mx = 240 kNm.
         // Σdy² = 4·600² = 1 440 000 mm²; b = 240 000 kN·mm / 1 440 000 = 0.1667 kN/mm;
         // P(+y) = 1000 + 0.1667·600 = 1100 kN, P(−y) = 900 kN.
-        List<Point> piles = List.of(new Point(-600, -600), new Point(600, -600), new Point(600, 600),
-                new Point(-600, 600));
-        Distribution d = RigidCapReactions.solve(piles, List.of(column(4000, 0, 0)), 240, 0);
+        List<PlanPoint> piles = List.of(new PlanPoint(-600, -600), new PlanPoint(600, -600), new PlanPoint(600, 600),
+                new PlanPoint(-600, 600));
+        Distribution d = PileGroupReactions.solve(piles, List.of(column(4000, 0, 0)), 240, 0);
         assertThat(d.reactionsKn()).containsExactly(new double[] {900, 900, 1100, 1100}, within(1e-9));
         assertThat(d.unresistedKnm()).isZero();
     }
@@ -37,8 +36,8 @@ class RigidCapReactionsTest {
         // Hand calculation: piles at (±900, 0), N = 2000 kN at (0, 50), My = 180 kNm.
         // In line: P = 1000 ± 180 000·900/(2·900²) = 1000 ± 100 kN.
         // About the line: N·e = 2000·50/1000 = 100 kNm, which two piles cannot resist.
-        List<Point> piles = List.of(new Point(-900, 0), new Point(900, 0));
-        Distribution d = RigidCapReactions.solve(piles, List.of(column(2000, 0, 50)), 0, 180);
+        List<PlanPoint> piles = List.of(new PlanPoint(-900, 0), new PlanPoint(900, 0));
+        Distribution d = PileGroupReactions.solve(piles, List.of(column(2000, 0, 50)), 0, 180);
         assertThat(d.reactionsKn()).containsExactly(new double[] {900, 1100}, within(1e-9));
         assertThat(d.unresistedKnm()).isCloseTo(100, within(1e-9));
     }
@@ -48,8 +47,8 @@ class RigidCapReactionsTest {
         // Hand calculation: piles at (0, 600), (−520, −300), (520, −300): centroid at the origin,
         // Σdx² = 2·520² = 540 800, Σdxdy = 0. N = 3000 kN, My = 104 kNm:
         // a = 104 000/540 800 = 0.1923 kN/mm; P = 1000, 1000 − 100, 1000 + 100 kN.
-        List<Point> piles = List.of(new Point(0, 600), new Point(-520, -300), new Point(520, -300));
-        Distribution d = RigidCapReactions.solve(piles, List.of(column(3000, 0, 0)), 0, 104);
+        List<PlanPoint> piles = List.of(new PlanPoint(0, 600), new PlanPoint(-520, -300), new PlanPoint(520, -300));
+        Distribution d = PileGroupReactions.solve(piles, List.of(column(3000, 0, 0)), 0, 104);
         assertThat(d.reactionsKn()).containsExactly(new double[] {1000, 900, 1100}, within(1e-9));
     }
 
@@ -58,8 +57,8 @@ class RigidCapReactionsTest {
         // Hand calculation: piles at (0,0), (1000,0), (0,1000); centroid (333.3, 333.3). N = 3000 kN at
         // (0,0) gives Mx* = My* = −1000 kNm; Σdx² = Σdy² = 666 667, Σdxdy = −333 333, det = 3.333e11;
         // a = b = −3 kN/mm, so P1 = 1000 + 1000 + 1000 = 3000 kN and P2 = P3 = 0.
-        List<Point> piles = List.of(new Point(0, 0), new Point(1000, 0), new Point(0, 1000));
-        Distribution d = RigidCapReactions.solve(piles, List.of(column(3000, 0, 0)), 0, 0);
+        List<PlanPoint> piles = List.of(new PlanPoint(0, 0), new PlanPoint(1000, 0), new PlanPoint(0, 1000));
+        Distribution d = PileGroupReactions.solve(piles, List.of(column(3000, 0, 0)), 0, 0);
         assertThat(d.reactionsKn()).containsExactly(new double[] {3000, 0, 0}, within(1e-6));
     }
 
@@ -70,8 +69,8 @@ class RigidCapReactionsTest {
         // not at all: P = 1000 kN each. The centroid moves to x̄ = 75/3 = 25 mm, so the moment about the
         // line left unresisted is 120 + 3000·(0 − 25)/1000 = 45 kNm. (Solved as a free group, the offset
         // would carry that moment on a 75 mm lever arm: an artefact found by a property test.)
-        List<Point> moved = List.of(new Point(0, -1500), new Point(75, 0), new Point(0, 1500));
-        Distribution d = RigidCapReactions.solve(moved, List.of(column(3000, 0, 0)), 0, 120,
+        List<PlanPoint> moved = List.of(new PlanPoint(0, -1500), new PlanPoint(75, 0), new PlanPoint(0, 1500));
+        Distribution d = PileGroupReactions.solve(moved, List.of(column(3000, 0, 0)), 0, 120,
                 java.util.Optional.of(new double[] {0, 1}));
         assertThat(d.reactionsKn()).containsExactly(new double[] {1000, 1000, 1000}, within(1e-9));
         assertThat(d.unresistedKnm()).isCloseTo(45, within(1e-9));

@@ -1,8 +1,7 @@
-package dev.countercheck.element.pilecap;
+package dev.countercheck.statics;
 
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
-import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -15,10 +14,10 @@ import java.util.Optional;
  * A collinear group (two piles, a single row) carries only the moment in its own line; the moment
  * about the line is returned as {@link Distribution#unresistedKnm()} for the reviewer to report.
  */
-final class RigidCapReactions {
+public final class PileGroupReactions {
 
     /** A vertical load (kN, downwards positive) at a plan position (mm). */
-    record Load(String name, double forceKn, Point at) {
+    public record Load(String name, double forceKn, PlanPoint at) {
     }
 
     /**
@@ -30,22 +29,22 @@ final class RigidCapReactions {
      * @param reactionsKn  P_i in pile order
      * @param unresistedKnm the moment about the line of a collinear group (0 otherwise)
      */
-    record Distribution(double totalKn, double mxStarKnm, double myStarKnm, double[] reactionsKn,
+    public record Distribution(double totalKn, double mxStarKnm, double myStarKnm, double[] reactionsKn,
                         double unresistedKnm) {
 
-        double max() {
+        public double max() {
             return java.util.Arrays.stream(reactionsKn).max().orElse(0);
         }
 
-        double min() {
+        public double min() {
             return java.util.Arrays.stream(reactionsKn).min().orElse(0);
         }
     }
 
-    private RigidCapReactions() {
+    private PileGroupReactions() {
     }
 
-    static Distribution solve(List<Point> piles, List<Load> loads, double mxKnm, double myKnm) {
+    public static Distribution solve(List<PlanPoint> piles, List<Load> loads, double mxKnm, double myKnm) {
         return solve(piles, loads, mxKnm, myKnm, lineOf(piles));
     }
 
@@ -55,11 +54,11 @@ final class RigidCapReactions {
      * that the moment about its line stays unresisted rather than being carried on a lever arm of
      * the tolerance.
      */
-    static Distribution solve(List<Point> piles, List<Load> loads, double mxKnm, double myKnm,
+    public static Distribution solve(List<PlanPoint> piles, List<Load> loads, double mxKnm, double myKnm,
                               Optional<double[]> line) {
         int n = piles.size();
-        double xBar = piles.stream().mapToDouble(Point::xMm).average().orElse(0);
-        double yBar = piles.stream().mapToDouble(Point::yMm).average().orElse(0);
+        double xBar = piles.stream().mapToDouble(PlanPoint::xMm).average().orElse(0);
+        double yBar = piles.stream().mapToDouble(PlanPoint::yMm).average().orElse(0);
         double v = 0;
         double mx = mxKnm;
         double my = myKnm;
@@ -99,7 +98,7 @@ final class RigidCapReactions {
     }
 
     /** The unit direction of a group of two or more piles on one line; empty when they span an area. */
-    static Optional<double[]> lineOf(List<Point> piles) {
+    public static Optional<double[]> lineOf(List<PlanPoint> piles) {
         if (piles.size() < 2) {
             return Optional.empty();
         }
@@ -115,13 +114,13 @@ final class RigidCapReactions {
     /** Second moments of the pile positions about their centroid: Σdx², Σdy², Σdx·dy (mm²). */
     private record Spread(double sxx, double syy, double sxy) {
 
-        static Spread of(List<Point> piles) {
-            double xBar = piles.stream().mapToDouble(Point::xMm).average().orElse(0);
-            double yBar = piles.stream().mapToDouble(Point::yMm).average().orElse(0);
+        static Spread of(List<PlanPoint> piles) {
+            double xBar = piles.stream().mapToDouble(PlanPoint::xMm).average().orElse(0);
+            double yBar = piles.stream().mapToDouble(PlanPoint::yMm).average().orElse(0);
             double sxx = 0;
             double syy = 0;
             double sxy = 0;
-            for (Point pile : piles) {
+            for (PlanPoint pile : piles) {
                 double dx = pile.xMm() - xBar;
                 double dy = pile.yMm() - yBar;
                 sxx += dx * dx;
@@ -133,7 +132,7 @@ final class RigidCapReactions {
     }
 
     /** Trace steps of a distribution: V, Mx*, My* and every P_i. */
-    static List<Step> trace(Distribution d, String caseName) {
+    public static List<Step> trace(Distribution d, String caseName) {
         String basis = "rigid cap, linear distribution (common practice)";
         List<Step> steps = new ArrayList<>();
         steps.add(Step.of("V (" + caseName + ")", "Σ vertical loads", Num.f(d.totalKn()), d.totalKn(), "kN", basis));
