@@ -5,19 +5,22 @@ import picocli.CommandLine;
 import java.io.PrintWriter;
 import picocli.CommandLine.Command;
 
-/** The top-level command: only sub-commands. */
+import java.util.concurrent.Callable;
+
+/** The top-level command: only sub-commands; alone it prints the help and exits as a usage error. */
 @Command(name = "countercheck", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Independent design review of reinforced-concrete foundations to EN 1992-1-1.",
         subcommands = {ReviewCommand.class, ValidateCommand.class, RulesCommand.class, ExampleCommand.class,
-                SchemaCommand.class, CompareCommand.class,                 CommandLine.HelpCommand.class})
-public final class CountercheckCommand implements Runnable {
+                SchemaCommand.class, CompareCommand.class, CommandLine.HelpCommand.class})
+public final class CountercheckCommand implements Callable<Integer> {
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Override
-    public void run() {
-        spec.commandLine().usage(spec.commandLine().getOut());
+    public Integer call() {
+        spec.commandLine().usage(spec.commandLine().getErr());
+        return ExitCodes.UNUSABLE;
     }
 
     /**

@@ -1,6 +1,6 @@
 package dev.countercheck.cli;
 
-/** Every exit status of the tool, defined once (results.md). */
+/** Every exit status of the tool, defined once (docs/results.md). */
 public final class ExitCodes {
 
     /** Nothing at or above the {@code --fail-on} severity was found. */

@@ -442,7 +442,7 @@ public final class RulesetLoader {
     }
 
     private static Optional<RulesetFile> notFound(String message, Optional<SourceLocation> at, List<InputError> errors) {
-        errors.add(new InputError(at.orElse(new SourceLocation("--ruleset", 1, 1)), "", message));
+        errors.add(new InputError(at.orElse(SourceLocation.unpositioned("--ruleset")), "", message));
         return Optional.empty();
     }
 

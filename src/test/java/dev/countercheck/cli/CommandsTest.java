@@ -25,6 +25,20 @@ class CommandsTest {
     }
 
     @Test
+    void withoutArgumentsTheHelpIsPrintedAsAUsageError() {
+        SampleSubmissionsTest.Run r = run();
+        assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(r.err()).contains("Usage: countercheck").contains("review").contains("validate");
+    }
+
+    @Test
+    void anUnknownRulesetIsNamedWithoutAnInventedFilePosition() {
+        SampleSubmissionsTest.Run r = run("rules", "--ruleset", "nosuch");
+        assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(r.err()).contains("--ruleset: no ruleset with id 'nosuch'").doesNotContain("--ruleset:1:1");
+    }
+
+    @Test
     void theStarterSubmissionIsValid(@TempDir Path dir) throws IOException {
         SampleSubmissionsTest.Run example = run("example");
         assertThat(example.exit()).isEqualTo(ExitCodes.OK);

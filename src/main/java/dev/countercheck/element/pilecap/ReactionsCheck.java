@@ -53,6 +53,7 @@ final class ReactionsCheck {
                         + "It needs tie beams or another restraint, which this review did not check.");
             }
         }
+        ForcePlausibility.meganewtonSlips(ctx.cap).forEach(m -> b.finding(Severity.NOTE, m));
         return b.build();
     }
 
