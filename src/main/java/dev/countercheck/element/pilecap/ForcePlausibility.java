@@ -23,12 +23,16 @@ final class ForcePlausibility {
     private ForcePlausibility() {
     }
 
-    /** One message per action case whose N looks like MN; empty when every N is plausible in kN. */
-    static List<String> meganewtonSlips(PileCap cap) {
+    /** An action case whose N looks like MN, and what to tell the designer about it. */
+    record Slip(String caseName, String message) {
+    }
+
+    /** One slip per action case whose N looks like MN; empty when every N is plausible in kN. */
+    static List<Slip> meganewtonSlips(PileCap cap) {
         double group = cap.piles().positions().size() * cap.piles().compressionKn();
         return cap.actions().stream()
                 .filter(a -> a.nKn() > 0 && a.nKn() * 1000 <= PLAUSIBLE_GROUP_MULTIPLE * group)
-                .map(a -> message(a, group)).toList();
+                .map(a -> new Slip(a.name(), message(a, group))).toList();
     }
 
     private static String message(ActionCase a, double group) {

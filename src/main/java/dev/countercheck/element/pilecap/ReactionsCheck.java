@@ -53,7 +53,8 @@ final class ReactionsCheck {
                         + "It needs tie beams or another restraint, which this review did not check.");
             }
         }
-        ForcePlausibility.meganewtonSlips(ctx.cap).forEach(m -> b.finding(Severity.NOTE, m));
+        ForcePlausibility.meganewtonSlips(ctx.cap).forEach(slip -> b.finding(FindingKind.REMARK,
+                "force-unit-" + Slugs.of(slip.caseName()), slip.message()));
         return b.build();
     }
 
