@@ -5,7 +5,7 @@ import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
-import dev.countercheck.review.Severity;
+import dev.countercheck.review.FindingKind;
 import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
@@ -59,7 +59,7 @@ final class DeviationCheck {
         }
         b.value("max", Step.of("P,max,δ", "max P_i with one pile off position by δ", where, worst, "kN", BASIS));
         double rc = ctx.cap.piles().compressionKn();
-        b.require(worst, rc, Severity.CRITICAL, capitalised(where) + " carries " + Num.f(worst)
+        b.require(worst, rc, FindingKind.CAPACITY, "capacity", capitalised(where) + " carries " + Num.f(worst)
                 + " kN, more than its design resistance " + Num.f(rc) + " kN.");
         double rise = (worst - nominalMax) / nominalMax;
         if (worst <= rc && rise > 0) {
