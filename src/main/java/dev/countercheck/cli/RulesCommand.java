@@ -121,6 +121,7 @@ public final class RulesCommand implements Callable<Integer> {
             out.println("### `" + t.name() + "` (" + t.symbol() + ", " + t.unit() + ")");
             out.println();
             out.println(t.clause() + ". " + t.note() + (t.interpolate() ? " Rows interpolated linearly." : "")
+                    + t.beyond().map(v -> " A blank cell or a row beyond the last reads " + Num.f(v) + ".").orElse("")
                     + " Set in " + t.origin() + ".");
             out.println();
             out.println("| row | " + String.join(" | ", t.columns()) + " |");

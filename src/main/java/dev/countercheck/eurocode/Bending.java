@@ -69,6 +69,27 @@ public final class Bending {
     }
 
     /**
+     * Limit on K for a section without compression steel, from the rectangular block of EN 1992-1-1
+     * 3.1.7(3) with the neutral axis at its limit ξ = x/d: K' = (αcc/γc)·λ·ξ·(1 − λ·ξ/2).
+     *
+     * @param alphaCc αcc (NDP), -, 0.8 ≤ αcc ≤ 1.0
+     * @param gammaC  γc (NDP), -, &gt; 0
+     * @param lambda  λ, depth of the block over x (0.8 for fck ≤ 50 MPa, Exp. (3.19)), -, 0 &lt; λ ≤ 1
+     * @param xiLimit ξ = x/d limit, -, 0 &lt; ξ ≤ 1
+     * @return K', -
+     */
+    public static Step kPrime(double alphaCc, double gammaC, double lambda, double xiLimit) {
+        String clause = "EN 1992-1-1 3.1.7(3); x/d limit of the ruleset";
+        OutOfRangeException.requireWithin("αcc", alphaCc, "-", 0.8, 1.0, "EN 1992-1-1 3.1.6(1)");
+        Bounds.positive("γc", gammaC, "-", clause);
+        Bounds.positiveAtMost("λ", lambda, "-", 1.0, clause);
+        Bounds.positiveAtMost("ξ", xiLimit, "-", 1.0, clause);
+        return Step.of("K'", "(αcc/γc)·λ·ξ·(1 − λ·ξ/2)", "(" + Num.f(alphaCc) + "/" + Num.f(gammaC) + ")·"
+                + Num.f(lambda) + "·" + Num.f(xiLimit) + "·(1 − " + Num.f(lambda) + "·" + Num.f(xiLimit) + "/2)",
+                alphaCc / gammaC * lambda * xiLimit * (1 - lambda * xiLimit / 2), "-", clause);
+    }
+
+    /**
      * Tension steel area for a moment at lever arm z, EN 1992-1-1 6.1: As,req = MEd/(fyd·z),
      * MEd converted from kN·m to N·mm.
      *

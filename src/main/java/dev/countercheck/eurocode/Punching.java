@@ -212,4 +212,23 @@ public final class Punching {
                         + Num.f(wMm2) + ")",
                 1 + k * (moment * 1000 / vEdKn) * (uMm / wMm2), "-", clause);
     }
+
+    /**
+     * Eccentricity factor for a circular column, EN 1992-1-1 6.4.3(3), Exp. (6.42), at distance a from
+     * the face (6.4.4(2)): β = 1 + 0.6·π·e/(D + 2·a), e = MEd/VEd the resultant eccentricity (a = 2d gives
+     * the 1 + 0.6·π·e/(D + 4d) of Exp. (6.42)).
+     *
+     * @param eMm        resultant eccentricity e, mm, ≥ 0
+     * @param diameterMm column diameter D, mm, &gt; 0
+     * @param aMm        distance a from the column face, mm, &gt; 0
+     * @return β, -, ≥ 1
+     */
+    public static Step betaCircular(double eMm, double diameterMm, double aMm) {
+        String clause = "EN 1992-1-1 6.4.3(3), Exp. (6.42), at distance a (6.4.4(2))";
+        Bounds.nonNegative("e", eMm, "mm", clause);
+        Bounds.positive("D", diameterMm, "mm", clause);
+        Bounds.positive("a", aMm, "mm", clause);
+        return Step.of("β", "1 + 0.6·π·e/(D + 2·a)", "1 + 0.6·π·" + Num.f(eMm) + "/(" + Num.f(diameterMm) + " + 2·"
+                + Num.f(aMm) + ")", 1 + 0.6 * Math.PI * eMm / (diameterMm + 2 * aMm), "-", clause);
+    }
 }

@@ -54,7 +54,7 @@ final class DrawingLegend {
         drawing.controlPerimeterMm().ifPresent(a -> rows.add(new LegendRow(sample("perimeter",
                         s -> s.path(new Svg.Path().moveTo(3, HEIGHT - 3).lineTo(WIDTH - 14, HEIGHT - 3)
                                 .arcTo(11, WIDTH - 3, 3, false), Styles.PERIMETER)),
-                "Basic control perimeter u1 at a = 2d = " + mm(a) + " mm from the column face, rounded corners;"
+                "Governing control perimeter u at a = " + mm(a) + " mm from the column face, rounded corners;"
                         + " only the part on the cap is drawn.")));
         BarLayout.spreadMm(cap).ifPresent(rise -> rows.add(new LegendRow(sample("spread", s -> {
             s.circle(WIDTH / 2, HEIGHT / 2, 7, Styles.SPREAD);

@@ -12,7 +12,7 @@ import java.util.OptionalDouble;
  * @param cap                  the element as submitted
  * @param pileReactionsKn      the largest reaction of each pile over the ULS cases, in pile order
  * @param shearSections        the critical one-way shear sections, as the shear checks recorded them
- * @param controlPerimeterMm   distance a of the basic control perimeter from the column face (2d), when d is known
+ * @param controlPerimeterMm   distance a of the governing control perimeter from the column face, when punching-perimeter found one
  */
 public record PileCapDrawing(PileCap cap, List<Double> pileReactionsKn, List<SectionLine> shearSections,
                              OptionalDouble controlPerimeterMm) implements Drawing {

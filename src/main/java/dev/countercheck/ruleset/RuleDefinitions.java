@@ -24,7 +24,7 @@ import java.util.regex.Pattern;
 final class RuleDefinitions {
 
     private static final List<String> TABLE_KEYS = List.of("symbol", "unit", "clause", "note", "interpolate",
-            "several", "columns", "rows");
+            "several", "columns", "rows", "beyond");
     private static final List<String> CHECK_KEYS = List.of("applies_to", "scope", "applies_when", "not_applicable", "derived",
             "values", "requirements", "cautions");
     private static final List<String> CAUTION_KEYS = List.of("when", "text");
@@ -77,8 +77,19 @@ final class RuleDefinitions {
             }
             into.put(e.key(), new TableDef(e.key(), text(t, "symbol").orElse(e.key()), required(t, "unit", path),
                     required(t, "clause", path), text(t, "note").orElse(""), origin, interpolate,
-                    "least".equals(several) ? TableDef.Several.LEAST : TableDef.Several.LARGEST, columns, rows));
+                    "least".equals(several) ? TableDef.Several.LEAST : TableDef.Several.LARGEST, columns, rows,
+                    beyond(t, path)));
         }
+    }
+
+    /** The optional {@code beyond} value of a table: a number. */
+    private Optional<Double> beyond(MapNode t, String path) {
+        Optional<String> value = text(t, "beyond");
+        if (value.isPresent() && !TableDef.isNumber(value.get())) {
+            problems.add(t.entry("beyond").get().value().location(), path + ".beyond", "expected a number");
+            return Optional.empty();
+        }
+        return value.map(Double::parseDouble);
     }
 
     void readChecks(Node node, Map<String, CheckDef> into) {

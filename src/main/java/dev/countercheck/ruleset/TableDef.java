@@ -13,14 +13,17 @@ import java.util.Optional;
  * a key is a list (several exposure classes) the value is the largest or the least over its items,
  * as {@code several} says; items the table does not list (XF and XA in Table 4.4N) are passed over,
  * and the lookup fails only when none is listed. A cell with no value ({@code null}, "–" in the
- * standard) is an error when looked up.
+ * standard) is an error when looked up, unless the table says what such a gap means: {@code beyond}
+ * is the value taken for a blank cell and above the last row of an interpolated table (0 in
+ * Tables 7.2N and 7.3N: no bar size or spacing meets that stress).
  *
  * @param columns column keys in order: text, or numbers as written
  * @param rows    row key (as written) → one value per column, empty where the standard has none
+ * @param beyond  the value of a blank cell and above the last row, when the table gives one
  */
 public record TableDef(String name, String symbol, String unit, String clause, String note, String origin,
                        boolean interpolate, Several several, List<String> columns,
-                       Map<String, List<Optional<Double>>> rows) {
+                       Map<String, List<Optional<Double>>> rows, Optional<Double> beyond) {
 
     /** How a list-valued key combines. */
     public enum Several { LARGEST, LEAST }

@@ -97,6 +97,9 @@ final class TableFunction extends AbstractFunction {
                 return v0 + (v1 - v0) * (key - k0) / (k1 - k0);
             }
         }
+        if (table.beyond().isPresent()) {
+            return table.beyond().get();
+        }
         throw new EvaluationException(token, "table " + table.name() + " (" + table.clause() + ") ends at "
                 + sorted.get(sorted.size() - 1).getKey() + "; " + key + " is beyond it");
     }
@@ -113,7 +116,7 @@ final class TableFunction extends AbstractFunction {
     }
 
     private double cell(Token token, Optional<Double> cell, String row, String column) throws EvaluationException {
-        return cell.orElseThrow(() -> new EvaluationException(token, "table " + table.name() + " (" + table.clause()
+        return cell.or(table::beyond).orElseThrow(() -> new EvaluationException(token, "table " + table.name() + " (" + table.clause()
                 + ") gives no value for " + row + ", " + column));
     }
 

@@ -12,7 +12,6 @@ import java.util.Optional;
  * @param depthMm          overall depth h, mm
  * @param castAgainst      what the soffit is cast against
  * @param selfWeight       whether the cap's own weight is to be added to the actions
- * @param punchingBeta     β for punching at the column face (6.4.3), when the submission gives it
  * @param reinforcement    the reinforcement, when given
  * @param tieMethod        how the designer sized the ties ({@code claims.method})
  * @param claims           the designer's claimed values
@@ -20,7 +19,7 @@ import java.util.Optional;
 public record PileCap(String id, String description, SourceLocation location, Materials materials,
                       double planXMm, double planYMm, double depthMm, CastAgainst castAgainst,
                       SelfWeight selfWeight, PileGroup piles, Column column, List<ActionCase> actions,
-                      Optional<Double> punchingBeta, Optional<Reinforcement> reinforcement,
+                      Optional<Reinforcement> reinforcement,
                       TieMethod tieMethod, List<Claim> claims) implements ElementInput {
 
     public static final String TYPE = "pile-cap";

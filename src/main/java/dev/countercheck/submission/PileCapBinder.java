@@ -70,13 +70,24 @@ public final class PileCapBinder {
         return Optional.of(new PileCap(id, description, f.location(), materials.orElseThrow(),
                 plan.orElseThrow().xMm(), plan.orElseThrow().yMm(), depth.orElseThrow(), castAgainst.orElseThrow(),
                 selfWeight.orElseThrow(), piles.orElseThrow(), column.orElseThrow(), actions.orElseThrow(),
-                punchingBeta, reinforcement, claims.orElseThrow().method(), claims.orElseThrow().claims()));
+                reinforcement, claims.orElseThrow().method(), withBeta(claims.orElseThrow().claims(), punchingBeta, f)));
     }
 
     private Optional<Plan> plan(Fields f) {
         Optional<Double> x = f.requiredQuantity("x", Dimension.LENGTH, Bound.POSITIVE);
         Optional<Double> y = f.requiredQuantity("y", Dimension.LENGTH, Bound.POSITIVE);
         return x.flatMap(a -> y.map(b -> new Plan(a, b)));
+    }
+
+    /** A stated {@code punching_beta} is the claim {@code punching-face.beta} (unless claimed there too). */
+    private static List<Claim> withBeta(List<Claim> claims, Optional<Double> beta, Fields f) {
+        if (beta.isEmpty() || claims.stream().anyMatch(c -> c.checkId().equals("punching-face")
+                && c.quantity().equals("beta"))) {
+            return claims;
+        }
+        List<Claim> all = new ArrayList<>(claims);
+        all.add(new Claim("punching-face", "beta", beta.get(), f.get("punching_beta").orElseThrow().location()));
+        return List.copyOf(all);
     }
 
     private boolean atLeastOne(Fields f, double beta) {

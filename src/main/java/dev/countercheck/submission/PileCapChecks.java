@@ -38,9 +38,11 @@ public final class PileCapChecks {
                     Kind.STRENGTH, List.of(demand("av", "mm"), demand("beta", "-"), demand("ved", "kN"),
                             demand("ved_unreduced", "kN"), capacity("vrd_max", "kN"), capacity("vrdc", "kN"))),
             new CheckSpec("punching-face", "Punching at the column face", "EN 1992-1-1 6.4.5(3)",
-                    Kind.STRENGTH, List.of(capacity("u0", "mm"), demand("ved", "kN"), capacity("vrd_max", "kN"))),
-            new CheckSpec("punching-perimeter", "Punching at the basic control perimeter", "EN 1992-1-1 6.4.4",
-                    Kind.STRENGTH, List.of(capacity("u1", "mm"), demand("ved", "kN"), capacity("vrd", "kN"))),
+                    Kind.STRENGTH, List.of(capacity("u0", "mm"), demand("beta", "-"), demand("ved", "kN"),
+                            capacity("vrd_max", "kN"))),
+            new CheckSpec("punching-perimeter", "Punching at the governing control perimeter within 2d",
+                    "EN 1992-1-1 6.4.4(2)", Kind.STRENGTH, List.of(demand("a", "mm"), capacity("u", "mm"),
+                            demand("ved", "kN"), capacity("vrd", "kN"))),
             new CheckSpec("node-column", "Compression node under the column", "EN 1992-1-1 6.5.4(4)a",
                     Kind.STRENGTH, List.of(demand("stress", "MPa"), capacity("limit", "MPa"))),
             new CheckSpec("node-pile", "Node over the most heavily loaded pile", "EN 1992-1-1 6.5.4(4)b, c",
@@ -51,10 +53,10 @@ public final class PileCapChecks {
                     Kind.DETAILING, List.of(demand("as_min", "mm2"), capacity("as_provided", "mm2"))),
             new CheckSpec("max-steel", "Maximum steel", "EN 1992-1-1 9.2.1.1(3)",
                     Kind.DETAILING, List.of(capacity("as_max", "mm2"), demand("as_provided", "mm2"))),
-            new CheckSpec("bar-spacing-x", "Bar spacing, bars parallel to x", "EN 1992-1-1 8.2, 7.3.3",
+            new CheckSpec("bar-spacing-x", "Bar spacing, bars parallel to x", "EN 1992-1-1 8.2",
                     Kind.DETAILING, List.of(demand("spacing", "mm"), capacity("clear", "mm"), demand("min_clear", "mm"),
                             capacity("max_spacing", "mm"))),
-            new CheckSpec("bar-spacing-y", "Bar spacing, bars parallel to y", "EN 1992-1-1 8.2, 7.3.3",
+            new CheckSpec("bar-spacing-y", "Bar spacing, bars parallel to y", "EN 1992-1-1 8.2",
                     Kind.DETAILING, List.of(demand("spacing", "mm"), capacity("clear", "mm"), demand("min_clear", "mm"),
                             capacity("max_spacing", "mm"))),
             new CheckSpec("cover", "Concrete cover", "EN 1992-1-1 4.4.1",
@@ -71,8 +73,8 @@ public final class PileCapChecks {
                     "EN 1992-1-1 8.4",
                     Kind.DETAILING, List.of(demand("lb_rqd", "mm"), demand("lbd", "mm"), capacity("available", "mm"))),
             new CheckSpec("crack-control", "Crack control without direct calculation", "EN 1992-1-1 7.3.3",
-                    Kind.DETAILING, List.of(demand("sigma_s", "MPa"), capacity("max_diameter", "mm"),
-                            capacity("max_spacing", "mm")))));
+                    Kind.DETAILING, List.of(demand("sigma_s", "MPa"), capacity("phi_max", "mm"),
+                            capacity("s_max", "mm")))));
 
     private PileCapChecks() {
     }

@@ -54,6 +54,14 @@ class BendingTest {
     }
 
     @Test
+    void kPrimeFollowsFromAlphaCcAndTheNeutralAxisLimit() {
+        // Hand calculation: (0.85/1.5)·0.8·0.45·(1 − 0.8·0.45/2) = 0.56667·0.36·0.82 = 0.16728, the K' ≈ 0.167
+        // of UK design practice for αcc = 0.85 (common practice); with αcc = 1.0: 0.66667·0.36·0.82 = 0.19680.
+        assertThat(Bending.kPrime(0.85, 1.5, 0.8, 0.45).value()).isCloseTo(0.16728, within(1e-5));
+        assertThat(Bending.kPrime(1.0, 1.5, 0.8, 0.45).value()).isCloseTo(0.19680, within(1e-5));
+    }
+
+    @Test
     void tensionSteelForTheMoment() {
         // Source: hand calculation, As = 500·10^6/(434.78·450) = 2555.6 mm² (fyd = 500/1.15)
         Step step = Bending.asRequired(500, 500 / 1.15, 450);

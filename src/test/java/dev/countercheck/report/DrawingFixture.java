@@ -35,7 +35,7 @@ import java.util.OptionalDouble;
  * resistance 1550 kN; column 500 × 500 at the centre; covers 75 bottom, 50 top, 75 side; bottom
  * 10 φ20 along x (layer 1, bent), 10 φ20 along y (layer 2, bent); top 4 φ12 along x. Largest
  * reactions 1500, 1620, 1380, 1450 kN: only pile 2 exceeds the resistance. Shear sections at
- * x = ±600 and y = ±600; a = 2d = 1700 mm.
+ * x = ±600 and y = ±600; a = 1700 mm.
  */
 final class DrawingFixture {
 
@@ -58,7 +58,7 @@ final class DrawingFixture {
                 Optional.empty());
         return new PileCap(id, "Four-pile cap (invented)", new SourceLocation("fixture.yaml", 1, 1), materials,
                 PLAN_MM, PLAN_MM, 1000, PileCap.CastAgainst.BLINDING, PileCap.SelfWeight.ADD, piles, column,
-                List.of(), Optional.empty(), Optional.of(reinforcement), PileCap.TieMethod.TRUSS, List.of());
+                List.of(), Optional.of(reinforcement), PileCap.TieMethod.TRUSS, List.of());
     }
 
     static PileCapDrawing drawing(String id) {

@@ -69,7 +69,8 @@ class SubmissionReaderTest {
         assertThat(cap.depthMm()).isEqualTo(1300);
         assertThat(cap.castAgainst()).isEqualTo(CastAgainst.SOIL);
         assertThat(cap.selfWeight()).isEqualTo(SelfWeight.ADD);
-        assertThat(cap.punchingBeta()).contains(1.15);
+        assertThat(cap.claims()).as("punching_beta is the claim punching-face.beta")
+                .anyMatch(c -> c.checkId().equals("punching-face") && c.quantity().equals("beta") && c.value() == 1.15);
         assertThat(cap.materials()).isEqualTo(new Materials(Optional.of("C35/45"), 35, 500, 20, List.of("XC2", "XA1"),
                 "S4", Optional.of(10.0)));
 
@@ -119,7 +120,8 @@ class SubmissionReaderTest {
                 Tuple.tuple("shear-y", "av", 260.0),
                 Tuple.tuple("shear-y", "beta", 0.21),
                 Tuple.tuple("shear-y", "ved", 1030.0),
-                Tuple.tuple("node-pile", "strut_angle", 41.0));
+                Tuple.tuple("node-pile", "strut_angle", 41.0),
+                Tuple.tuple("punching-face", "beta", 1.15)); // punching_beta: 1.15
         assertThat(cap.claims().get(3).value()).as("\"53.1 cm2\": hand calculation 53.1 × 100 = 5310 mm2")
                 .isEqualTo(5310, within(1e-9));
     }
@@ -131,7 +133,8 @@ class SubmissionReaderTest {
         assertThat(cap.description()).as("description is optional").isEmpty();
         assertThat(cap.castAgainst()).as("cast_against defaults to blinding").isEqualTo(CastAgainst.BLINDING);
         assertThat(cap.selfWeight()).as("self_weight defaults to add").isEqualTo(SelfWeight.ADD);
-        assertThat(cap.punchingBeta()).isEmpty();
+        assertThat(cap.claims()).as("no punching_beta, no β claim").noneMatch(c -> c.quantity().equals("beta")
+                && c.checkId().equals("punching-face"));
         assertThat(cap.piles().tensionKn()).as("tension capacity defaults to 0").isZero();
         assertThat(cap.piles().embedmentMm()).as("embedment defaults to 0").isZero();
         assertThat(cap.piles().toleranceMm()).isEmpty();

@@ -4,16 +4,15 @@ import dev.countercheck.eurocode.Punching;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.Column.ColumnShape;
-import dev.countercheck.submission.PileCap;
 import dev.countercheck.submission.Point;
 
 /**
  * A control perimeter at distance a from the column face, with rounded corners (EN 1992-1-1
- * 6.4.2(1)), and the part of it that lies on the cap.
+ * 6.4.2(1)), the part of it that lies on the cap and the share of a pile head inside it.
  */
 final class ControlPerimeter {
 
-    private static final int SAMPLES = 4000;
+    private static final int STRIPS = 400;
 
     private ControlPerimeter() {
     }
@@ -38,55 +37,94 @@ final class ControlPerimeter {
     }
 
     /**
-     * Length of the perimeter at distance a that lies within the cap's plan, mm, found by walking
-     * the perimeter in {@value #SAMPLES} equal steps.
+     * Length of the perimeter at distance a that lies within the plan |x| ≤ planX/2, |y| ≤ planY/2
+     * (the cap, centred on the origin; a free edge cuts the perimeter off, EN 1992-1-1 6.4.2(4)), mm.
+     * The perimeter is four straight sides and four quarter arcs of radius a about the column corners
+     * (a circular column: four quarter arcs of radius D/2 + a about its centre); on a quarter arc
+     * x = xc + sx·r·cos φ and y = yc + sy·r·sin φ, φ from 0 to π/2, so the part within the plan is
+     * acos((X − sx·xc)/r) ≤ φ ≤ asin((Y − sy·yc)/r), with X, Y the half plan. The column lies on the cap.
      */
-    static double lengthOnCap(PileCap cap, double aMm) {
-        Column c = cap.column();
-        double total = full(c, aMm).value();
-        int inside = 0;
-        for (int i = 0; i < SAMPLES; i++) {
-            Point p = pointAt(c, aMm, (i + 0.5) / SAMPLES * total);
-            if (Math.abs(p.xMm()) <= cap.planXMm() / 2 && Math.abs(p.yMm()) <= cap.planYMm() / 2) {
-                inside++;
+    static double lengthInPlan(Column c, double aMm, double planXMm, double planYMm) {
+        boolean circular = c.shape() == ColumnShape.CIRCULAR;
+        double hx = circular ? 0 : c.cxMm() / 2;
+        double hy = circular ? 0 : c.cyMm() / 2;
+        double r = circular ? c.cxMm() / 2 + aMm : aMm;
+        double x0 = c.position().xMm();
+        double y0 = c.position().yMm();
+        double halfX = planXMm / 2;
+        double halfY = planYMm / 2;
+        double length = 0;
+        for (int sx : new int[] {1, -1}) {
+            length += Math.abs(x0 + sx * (hx + aMm)) <= halfX ? overlap(y0 - hy, y0 + hy, halfY) : 0;
+            for (int sy : new int[] {1, -1}) {
+                double from = Math.acos(clamp((halfX - sx * (x0 + sx * hx)) / r));
+                double to = Math.asin(clamp((halfY - sy * (y0 + sy * hy)) / r));
+                length += r * Math.max(0, to - from);
             }
         }
-        return total * inside / SAMPLES;
+        for (int sy : new int[] {1, -1}) {
+            length += Math.abs(y0 + sy * (hy + aMm)) <= halfY ? overlap(x0 - hx, x0 + hx, halfX) : 0;
+        }
+        return length;
     }
 
-    /** The point at arc length {@code s} along the perimeter, starting at the middle of the +x side. */
-    private static Point pointAt(Column c, double a, double s) {
-        double cx = c.position().xMm();
-        double cy = c.position().yMm();
+    /** Length of [lo, hi] within [−half, half]. */
+    private static double overlap(double lo, double hi, double half) {
+        return Math.max(0, Math.min(hi, half) - Math.max(lo, -half));
+    }
+
+    private static double clamp(double v) {
+        return Math.max(-1, Math.min(1, v));
+    }
+
+    /**
+     * Share (0 to 1) of a circular pile head's area that lies inside the control perimeter at distance
+     * a from the column face (EN 1992-1-1 6.4.4(2): the pile relieves the load by that share of its
+     * reaction): the mean of {@value #STRIPS} strips across x and as many across y, so that the share
+     * turns with the cap; the region inside the perimeter is convex, so each strip meets it once.
+     *
+     * @param centre     pile centre
+     * @param diameterMm pile head diameter, mm
+     */
+    static double headShareInside(Column c, double aMm, Point centre, double diameterMm) {
+        Column turned = new Column(c.shape(), c.cyMm(), c.cxMm(), new Point(c.position().yMm(), c.position().xMm()),
+                c.starterBars());
+        return (stripShare(c, aMm, centre, diameterMm)
+                + stripShare(turned, aMm, new Point(centre.yMm(), centre.xMm()), diameterMm)) / 2;
+    }
+
+    /** The share of the head inside the perimeter by strips across x. */
+    private static double stripShare(Column c, double aMm, Point centre, double diameterMm) {
+        double r = diameterMm / 2;
+        double width = diameterMm / STRIPS;
+        double whole = 0;
+        double inside = 0;
+        for (int i = 0; i < STRIPS; i++) {
+            double x = centre.xMm() - r + (i + 0.5) * width;
+            double chord = Math.sqrt(Math.max(0, r * r - sq(x - centre.xMm())));
+            whole += 2 * chord;
+            double half = halfHeightInside(c, aMm, x);
+            if (half >= 0) {
+                double lo = Math.max(centre.yMm() - chord, c.position().yMm() - half);
+                double hi = Math.min(centre.yMm() + chord, c.position().yMm() + half);
+                inside += Math.max(0, hi - lo);
+            }
+        }
+        return whole == 0 ? 0 : inside / whole;
+    }
+
+    /** Half the height of the region within distance a of the column at abscissa x, mm; −1 outside it. */
+    private static double halfHeightInside(Column c, double aMm, double x) {
+        double dx = Math.abs(x - c.position().xMm());
         if (c.shape() == ColumnShape.CIRCULAR) {
-            double r = c.cxMm() / 2 + a;
-            double t = s / r;
-            return new Point(cx + r * Math.cos(t), cy + r * Math.sin(t));
+            double radius = c.cxMm() / 2 + aMm;
+            return dx > radius ? -1 : Math.sqrt(radius * radius - dx * dx);
         }
-        double hx = c.cxMm() / 2;
-        double hy = c.cyMm() / 2;
-        double arc = Math.PI * a / 2;
-        double[] straight = {2 * hy, 2 * hx, 2 * hy, 2 * hx};
-        double[][] corner = {{hx, hy}, {-hx, hy}, {-hx, -hy}, {hx, -hy}};
-        double remaining = s + hy;
-        for (int side = 0; side < 4; side++) {
-            if (remaining <= straight[side]) {
-                double t = remaining;
-                return switch (side) {
-                    case 0 -> new Point(cx + hx + a, cy - hy + t);
-                    case 1 -> new Point(cx + hx - t, cy + hy + a);
-                    case 2 -> new Point(cx - hx - a, cy + hy - t);
-                    default -> new Point(cx - hx + t, cy - hy - a);
-                };
-            }
-            remaining -= straight[side];
-            if (remaining <= arc) {
-                double angle = side * Math.PI / 2 + remaining / Math.max(a, 1e-9);
-                return new Point(cx + corner[side][0] + a * Math.cos(angle),
-                        cy + corner[side][1] + a * Math.sin(angle));
-            }
-            remaining -= arc;
-        }
-        return new Point(cx + hx + a, cy - hy + remaining);
+        double beyond = Math.max(0, dx - c.cxMm() / 2);
+        return beyond > aMm ? -1 : c.cyMm() / 2 + Math.sqrt(aMm * aMm - beyond * beyond);
+    }
+
+    private static double sq(double v) {
+        return v * v;
     }
 }

@@ -1,6 +1,5 @@
 package dev.countercheck.element.pilecap;
 
-import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.ruleset.Variable;
 import dev.countercheck.submission.ActionCase;
 import dev.countercheck.submission.Column.StarterBars;
@@ -86,7 +85,6 @@ final class DetailingScopes {
         bars.put("leg", Variable.number("mm", "vertical leg of bent ends: stated, else h − c_bottom − c_top", 1000));
         bars.put("available_from_pile_centre", Variable.number("mm",
                 "length along the bar from the outermost pile centre to the bar end (shorter side)", 600));
-        bars.put("sigma_qp", Variable.number("MPa", "quasi-permanent steel stress (0 without a QP case)", 250));
         bars.put("has_lap", Variable.bool("the submission declares laps for these bars"));
         bars.put("lap_percent", Variable.number("-", "share of the bars lapped at one section, % (0 without laps)", 50));
         bars.put("lap_length", Variable.number("mm", "lap length provided (0 without laps)", 1200));
@@ -161,10 +159,10 @@ final class DetailingScopes {
         v.put("as_y", s.asY().value());
         v.put("ac_x", cap.planYMm() * cap.depthMm());
         v.put("ac_y", cap.planXMm() * cap.depthMm());
-        v.put("has_sls_qp", quasiPermanentRatio(ctx).isPresent());
+        v.put("has_sls_qp", ctx.cap.actions().stream().anyMatch(a -> a.kind() == ActionCase.Kind.SLS_QUASI_PERMANENT));
         for (Axis axis : Axis.values()) {
             List<BarSet> sets = axis == Axis.X ? s.xBars() : s.yBars();
-            v.put("sigma_qp_" + axis.label(), sigmaQp(ctx, sets, asRequired.getOrDefault(axis, 0.0)));
+            v.put("sigma_qp_" + axis.label(), sigmaQp(ctx, axis, sets, asRequired.getOrDefault(axis, 0.0)));
             v.put("phi_" + axis.label(), sets.stream().mapToDouble(BarSet::diameterMm).max().orElse(0));
             v.put("spacing_" + axis.label(), centreSpacing(axis.capWidth(cap), r.cover().sideMm(), sets));
         }
@@ -189,7 +187,6 @@ final class DetailingScopes {
         double far = cap.piles().positions().stream().mapToDouble(axis::along).max().orElse(0);
         double near = cap.piles().positions().stream().mapToDouble(axis::along).min().orElse(0);
         v.put("available_from_pile_centre", Math.min(end - far, end + near));
-        v.put("sigma_qp", sigmaQp(ctx, sets, asRequired));
         Optional<Reinforcement.Lap> lap = sets.stream().map(BarSet::lap).flatMap(Optional::stream).findFirst();
         v.put("has_lap", lap.isPresent());
         v.put("lap_percent", lap.map(Reinforcement.Lap::percentLapped).orElse(0.0));
@@ -197,18 +194,21 @@ final class DetailingScopes {
         return v;
     }
 
-    /** N_qp/N_uls, the largest of each, when a quasi-permanent case is given (common approximation). */
-    private static Optional<Double> quasiPermanentRatio(PileCapContext ctx) {
-        double nUls = ctx.uls.stream().map(UlsCase::action).mapToDouble(ActionCase::nKn).max().orElse(0);
+    /**
+     * N_qp/N_uls, the largest quasi-permanent N over N of the ULS case that governs this direction's tie,
+     * when a quasi-permanent case is given (common approximation).
+     */
+    private static Optional<Double> quasiPermanentRatio(PileCapContext ctx, Axis axis) {
+        double nUls = TieCheck.governingAxialForce(ctx, axis);
         return ctx.cap.actions().stream().filter(a -> a.kind() == ActionCase.Kind.SLS_QUASI_PERMANENT)
                 .mapToDouble(ActionCase::nKn).max().stream().boxed().findFirst()
                 .filter(q -> nUls > 0).map(q -> q / nUls);
     }
 
-    /** σs ≈ fyd·(N_qp/N_uls)·(As,req/As,prov) (pile-cap-method.md, crack-control), 0 without a QP case. */
-    private static double sigmaQp(PileCapContext ctx, List<BarSet> sets, double asRequired) {
+    /** σs ≈ fyd·(N_qp/N_uls)·(As,req/As,prov) (crack-control), 0 without a QP case. */
+    private static double sigmaQp(PileCapContext ctx, Axis axis, List<BarSet> sets, double asRequired) {
         double provided = sets.stream().mapToDouble(BarSet::areaMm2).sum();
-        return quasiPermanentRatio(ctx).filter(q -> provided > 0)
+        return quasiPermanentRatio(ctx, axis).filter(q -> provided > 0)
                 .map(q -> ctx.fyd.value() * q * asRequired / provided).orElse(0.0);
     }
 

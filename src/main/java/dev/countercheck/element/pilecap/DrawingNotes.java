@@ -2,6 +2,7 @@ package dev.countercheck.element.pilecap;
 
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.PileCapDrawing;
+import dev.countercheck.review.Value;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -9,7 +10,7 @@ import java.util.OptionalDouble;
 
 /**
  * The places of a pile cap's review that its drawing shows: reactions, the critical sections as the
- * checks placed them, the control perimeter.
+ * checks placed them, the governing control perimeter.
  */
 final class DrawingNotes {
 
@@ -23,8 +24,9 @@ final class DrawingNotes {
             final int pile = i;
             reactions.add(ctx.uls.stream().mapToDouble(u -> u.withSelfWeight().reactionsKn()[pile]).max().orElse(0));
         }
-        OptionalDouble perimeter = ctx.section.map(s -> OptionalDouble.of(2 * s.dMean().value()))
-                .orElse(OptionalDouble.empty());
+        OptionalDouble perimeter = outcomes.stream().filter(o -> o.result().id().equals("punching-perimeter"))
+                .map(o -> o.result().values().get("a")).filter(java.util.Objects::nonNull)
+                .mapToDouble(Value::value).findFirst();
         return new PileCapDrawing(ctx.cap, List.copyOf(reactions),
                 outcomes.stream().flatMap(o -> o.sections().stream()).toList(), perimeter);
     }

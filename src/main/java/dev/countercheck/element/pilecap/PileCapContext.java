@@ -9,6 +9,7 @@ import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.submission.ActionCase;
+import dev.countercheck.submission.Column;
 import dev.countercheck.submission.PileCap;
 import dev.countercheck.submission.Point;
 
@@ -102,14 +103,28 @@ final class PileCapContext {
         return points.stream().map(PileCapContext::plan).toList();
     }
 
+    /**
+     * The side of the square that stands for a circular column in one-way shear and the bending method,
+     * {@code circular_column_square}·D (common practice); empty for a rectangular column.
+     */
+    Optional<Step> equivalentSquare() {
+        if (cap.column().shape() != Column.ColumnShape.CIRCULAR) {
+            return Optional.empty();
+        }
+        double factor = rules.number("circular_column_square");
+        return Optional.of(Step.of("c,eq", "(c,eq/D)·D, the square standing for the circular column",
+                Num.f(factor) + "·" + Num.f(cap.column().cxMm()), factor * cap.column().cxMm(), "mm",
+                clauseOf("circular_column_square")));
+    }
+
+    /** Half the column's size along an axis for one-way shear and the bending method, mm. */
+    double columnHalf(Axis axis) {
+        return equivalentSquare().map(s -> s.value() / 2).orElse(axis.columnHalf(cap.column()));
+    }
+
     /** The largest column N over the ULS cases (the cap's own weight is not part of it). */
     double maxColumnN() {
         return uls.stream().mapToDouble(u -> u.action().nKn()).max().orElse(0);
-    }
-
-    boolean anyMoment() {
-        return uls.stream().anyMatch(u -> u.action().mxKnm() != 0 || u.action().myKnm() != 0
-                || u.action().hxKn() != 0 || u.action().hyKn() != 0);
     }
 
     String clauseOf(String parameter) {

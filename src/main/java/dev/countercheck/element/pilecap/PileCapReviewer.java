@@ -38,16 +38,20 @@ final class PileCapReviewer {
             "One-way shear: the critical section lies a share of the pile diameter (ruleset, common practice"
                     + " 0.2φ) inside the face of the nearest pile beyond the column face; each pile's reaction is reduced by its own β = av/2d"
                     + " with av ≥ 0.5d (EN 1992-1-1 6.2.2(6)); the full cap width resists.",
-            "Punching at the column face uses the full column perimeter (an internal column) and β as stated,"
-                    + " else 1.0. At the basic control perimeter only the part of u1 on the cap counts; the"
-                    + " reactions there are those of the column actions alone.",
+            "Punching at the column face uses the full column perimeter (an internal column); β comes from the"
+                    + " column moments Mx, My (EN 1992-1-1 Exp. (6.39), (6.42)), with u and W of the full perimeter"
+                    + " even where a free edge cuts it. Control perimeters are searched from d/50 to 2d from the column face (step from"
+                    + " the ruleset); only the part of a perimeter on the cap counts; a pile relieves the load by"
+                    + " the share of its head area inside the perimeter; the reactions there are those of the"
+                    + " column actions alone.",
             "Pile heads are circular with the stated diameter; node stresses use the largest reaction.",
             "Concrete properties come from the expressions of EN 1992-1-1 Table 3.1, unrounded.");
 
     /** The ruleset parameters the pile-cap checks read. */
     static final Set<String> PARAMETERS = Set.of("gamma_c", "gamma_s", "gamma_g", "alpha_cc",
-            "alpha_cc_shear", "alpha_ct", "c_rdc_factor", "v_min_coefficient", "punching_vrd_max_factor", "node_k1",
-            "node_k2", "node_k3", "k_prime", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
+            "alpha_cc_shear", "alpha_ct", "c_rdc_factor", "v_min_coefficient", "punching_vrd_max_factor",
+            "punching_search_step", "node_k1",
+            "node_k2", "node_k3", "circular_column_square", "stress_block_lambda", "xi_limit", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
             "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
             "shear_section_inside_pile");
 

@@ -18,6 +18,9 @@ import java.util.List;
 /** {@code punching-face} (6.4.5(3)) and {@code punching-perimeter} (6.4.4). */
 final class PunchingChecks {
 
+    /** A reduced load below this share of N is the rounding residue of piles wholly inside the perimeter. */
+    private static final double LOAD_RESIDUE = 1e-9;
+
     private PunchingChecks() {
     }
 
@@ -28,16 +31,27 @@ final class PunchingChecks {
         }
         Step d = b.trace(ctx.section.get().dMean());
         Column c = ctx.cap.column();
-        Step beta = b.trace(ctx.cap.punchingBeta()
-                .map(v -> Step.of("β", "stated by the submission", Num.f(v), v, "-", "EN 1992-1-1 6.4.3(3)"))
-                .orElse(Step.of("β", "no moment transfer assumed", "1.0", 1.0, "-", "EN 1992-1-1 6.4.3(3)")));
-        if (ctx.cap.punchingBeta().isEmpty() && ctx.anyMoment()) {
-            b.caution("Moments act on the column but no punching β was given: β = 1.0 was used at the column face,"
-                    + " which understates vEd (EN 1992-1-1 6.4.3(3)).");
+        Step beta = null;
+        double worst = Double.NEGATIVE_INFINITY;
+        String worstCase = "";
+        for (UlsCase u : ctx.uls) {
+            double n = u.action().nKn();
+            if (n <= 0) {
+                continue;
+            }
+            Step caseBeta = beta(c, 2 * d.value(), n, u.action().mxKnm(), u.action().myKnm());
+            if (caseBeta.value() * n > worst) {
+                worst = caseBeta.value() * n;
+                beta = caseBeta;
+                worstCase = u.action().name();
+            }
         }
-        double nMax = ctx.maxColumnN();
-        Step ved = b.value("ved", Step.of("VEd", "β·N,max", Num.f(beta.value()) + "·" + Num.f(nMax),
-                beta.value() * nMax, "kN", "EN 1992-1-1 6.4.3(3)"));
+        if (beta == null) {
+            return b.notApplicable("no ULS case presses the column onto the cap").build();
+        }
+        b.value("beta", beta);
+        Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
+                + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
         Step u0 = b.value("u0", c.shape() == ColumnShape.CIRCULAR
                 ? Punching.u0Circular(c.cxMm()) : Punching.u0Rectangular(c.cxMm(), c.cyMm()));
         Step nu = b.trace(Shear.nu(ctx.fck.value()));
@@ -50,6 +64,40 @@ final class PunchingChecks {
         return b.build();
     }
 
+    /**
+     * β for the column's moments at the perimeter at distance a (EN 1992-1-1 6.4.3(3), Exp. (6.39) with
+     * W of Exp. (6.41) and k of Table 6.1, summed over both axes; 6.4.4(2), Exp. (6.51) within 2d); a
+     * circular column by Exp. (6.42) with the resultant eccentricity. At the face a = 2d (u1, W1).
+     *
+     * @param vEdKn VEd (VEd,red at a perimeter within 2d), kN, &gt; 0
+     */
+    static Step beta(Column c, double aMm, double vEdKn, double mxKnm, double myKnm) {
+        if (c.shape() == ColumnShape.CIRCULAR) {
+            return Punching.betaCircular(Math.hypot(mxKnm, myKnm) * 1000 / vEdKn, c.cxMm(), aMm);
+        }
+        Step u = Punching.u1Rectangular(c.cxMm(), c.cyMm(), aMm);
+        // My turns about y: the eccentricity lies along x, c1 = cx; Mx: along y, c1 = cy.
+        Step alongX = Punching.betaEccentric(Punching.kEccentricity(c.cxMm(), c.cyMm()).value(), myKnm, vEdKn,
+                u.value(), Punching.w1Rectangular(c.cxMm(), c.cyMm(), aMm).value());
+        Step alongY = Punching.betaEccentric(Punching.kEccentricity(c.cyMm(), c.cxMm()).value(), mxKnm, vEdKn,
+                u.value(), Punching.w1Rectangular(c.cyMm(), c.cxMm(), aMm).value());
+        return Step.of("β", "1 + kx·(|My|/VEd)·(u/Wx) + ky·(|Mx|/VEd)·(u/Wy)", alongX.substituted() + " + "
+                + alongY.substituted().substring(4), alongX.value() + alongY.value() - 1, "-",
+                "EN 1992-1-1 6.4.3(3), Exp. (6.39), (6.41), Table 6.1; 6.4.4(2), Exp. (6.51)");
+    }
+
+    /** One control perimeter at distance a: its length on the cap, the reduced load and the resistance. */
+    private record Perimeter(double aMm, double uMm, double[] shares, double vEdRedKn, Step beta, String caseName,
+                             double vRdMpa, double vRdKn) {
+        double utilisation() {
+            return beta.value() * vEdRedKn / vRdKn;
+        }
+    }
+
+    /**
+     * The control perimeter of greatest VEd,red/VRd among those at a = Δa, 2Δa, ... 2d from the column
+     * face (EN 1992-1-1 6.4.4(2), 6.4.2(4)); not applicable when none carries a reduced load.
+     */
     static CheckOutcome perimeter(PileCapContext ctx) {
         CheckBuilder b = Checks.builder("punching-perimeter");
         if (ctx.section.isEmpty()) {
@@ -57,45 +105,7 @@ final class PunchingChecks {
         }
         CapSection section = ctx.section.get();
         Step d = b.trace(section.dMean());
-        double a = 2 * d.value();
-        Column column = ctx.cap.column();
-        List<Point> piles = ctx.cap.piles().positions();
-        List<Integer> inside = new ArrayList<>();
-        for (int i = 0; i < piles.size(); i++) {
-            if (ControlPerimeter.distanceFromColumn(column, piles.get(i)) <= a) {
-                inside.add(i);
-            }
-        }
-        if (inside.size() == piles.size()) {
-            return b.notApplicable("every pile centre lies within 2d = " + Num.f(a)
-                    + " mm of the column face: the load goes straight to the piles by struts").build();
-        }
-        Step full = ControlPerimeter.full(column, a);
-        double onCap = ControlPerimeter.lengthOnCap(ctx.cap, a);
-        Step u1 = new Step("u1", full.formula() + ", a = 2d", full.substituted(), onCap, "mm", full.clause(),
-                full.remark());
-        if (onCap < full.value() - 1e-6) {
-            u1 = u1.remarked("only the " + Num.f(onCap) + " mm of the " + Num.f(full.value())
-                    + " mm perimeter on the cap counts");
-        }
-        b.value("u1", u1);
-        double worst = Double.NEGATIVE_INFINITY;
-        String worstCase = "";
-        for (UlsCase u : ctx.uls) {
-            double[] p = u.columnOnly().reactionsKn();
-            double v = u.action().nKn();
-            for (int i : inside) {
-                v -= p[i];
-            }
-            if (v > worst) {
-                worst = v;
-                worstCase = u.action().name();
-            }
-        }
-        List<String> names = inside.stream().map(i -> "P" + (i + 1)).toList();
-        Step ved = b.value("ved", Step.of("VEd,red", "N − Σ P_i inside u1 (column actions alone)",
-                worstCase + (names.isEmpty() ? ", no pile inside" : ", inside: " + String.join(", ", names)),
-                Math.max(0, worst), "kN", "EN 1992-1-1 6.4.4(2)"));
+        Step step = b.trace(ctx.rules.parameter("punching_search_step").asStep());
         double rhoX = section.asX().value() / (ctx.cap.planYMm() * section.dx().value());
         double rhoY = section.asY().value() / (ctx.cap.planXMm() * section.dy().value());
         Step rho = b.trace(Punching.rhoMean(rhoX, rhoY));
@@ -103,11 +113,75 @@ final class PunchingChecks {
         double cRdc = ctx.rules.number("c_rdc_factor") / ctx.rules.number("gamma_c");
         Step stress = b.trace(Shear.vRdcStress(cRdc, k.value(), rho.value(), ctx.fck.value()));
         Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), ctx.fck.value()));
-        Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a));
-        Step vrd = b.value("vrd", Step.of("VRd", "vRd·u1·d", Num.f(vRd.value()) + "·" + Num.f(u1.value()) + "·"
-                + Num.f(d.value()) + "/1000", vRd.value() * u1.value() * d.value() / 1000, "kN", "EN 1992-1-1 6.4.4"));
-        b.require(ved.value(), vrd.value(), FindingKind.CAPACITY, "capacity", "VEd,red = " + Num.f(ved.value())
-                + " kN at the basic control perimeter exceeds VRd = " + Num.f(vrd.value()) + " kN.");
+        int count = (int) Math.ceil(2 / step.value() - 1e-9);
+        Perimeter governing = null;
+        for (int j = 1; j <= count; j++) {
+            double a = 2 * d.value() * j / count;
+            Perimeter p = at(ctx, a, d.value(), Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a));
+            if (p.vEdRedKn > 0 && p.uMm > 0 && (governing == null || p.utilisation() > governing.utilisation())) {
+                governing = p;
+            }
+        }
+        if (governing == null) {
+            return b.notApplicable("no control perimeter from the column face to 2d = " + Num.f(2 * d.value())
+                    + " mm carries a load: the piles within it take the whole column load").build();
+        }
+        Perimeter g = governing;
+        b.value("a", Step.of("a", "the distance of greatest VEd,red/VRd, searched in steps of (Δa/d)·d up to 2d",
+                count + " perimeters", g.aMm, "mm", "EN 1992-1-1 6.4.4(2)"));
+        Step full = ControlPerimeter.full(ctx.cap.column(), g.aMm);
+        Step u = new Step("u", full.formula(), full.substituted(), g.uMm, "mm", full.clause(), full.remark());
+        if (g.uMm < full.value() - 1e-6) {
+            u = u.remarked("only the " + Num.f(g.uMm) + " mm of the " + Num.f(full.value())
+                    + " mm perimeter on the cap counts (EN 1992-1-1 6.4.2(4))");
+        }
+        b.value("u", u);
+        List<String> relief = new ArrayList<>();
+        for (int i = 0; i < g.shares.length; i++) {
+            if (g.shares[i] > 0) {
+                relief.add("P" + (i + 1) + "·" + Num.f(g.shares[i]));
+            }
+        }
+        Step reduced = b.trace(Step.of("VEd,red", "N − Σ P_i·(share of the pile head inside u)",
+                g.caseName + (relief.isEmpty() ? ", no pile inside" : ", inside: " + String.join(" + ", relief)),
+                g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2)"));
+        Step beta = b.trace(g.beta);
+        Step ved = b.value("ved", Step.of("β·VEd,red", "β·VEd,red", Num.f(beta.value()) + "·"
+                + Num.f(reduced.value()), beta.value() * reduced.value(), "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.51)"));
+        Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), g.aMm));
+        Step vrd = b.value("vrd", Step.of("VRd", "vRd·u·d", Num.f(vRd.value()) + "·" + Num.f(g.uMm) + "·"
+                + Num.f(d.value()) + "/1000", g.vRdKn, "kN", "EN 1992-1-1 6.4.4(2)"));
+        b.require(ved.value(), vrd.value(), FindingKind.CAPACITY, "capacity", "β·VEd,red = " + Num.f(ved.value()) + " kN at the"
+                + " control perimeter a = " + Num.f(g.aMm) + " mm from the column face exceeds VRd = "
+                + Num.f(vrd.value()) + " kN.");
         return b.build();
+    }
+
+    /** The perimeter at distance a, the worst ULS case (column actions alone) and its resistance. */
+    private static Perimeter at(PileCapContext ctx, double a, double d, Step vRd) {
+        Column column = ctx.cap.column();
+        List<Point> piles = ctx.cap.piles().positions();
+        double u = ControlPerimeter.lengthInPlan(column, a, ctx.cap.planXMm(), ctx.cap.planYMm());
+        double[] shares = new double[piles.size()];
+        for (int i = 0; i < piles.size(); i++) {
+            shares[i] = ControlPerimeter.headShareInside(column, a, piles.get(i), ctx.cap.piles().diameterMm());
+        }
+        Perimeter worst = new Perimeter(a, u, shares, 0, Step.of("β", "no load", "1", 1, "-", ""), "", vRd.value(),
+                vRd.value() * u * d / 1000);
+        for (UlsCase c : ctx.uls) {
+            double[] p = c.columnOnly().reactionsKn();
+            double v = c.action().nKn();
+            for (int i = 0; i < p.length; i++) {
+                v -= p[i] * shares[i];
+            }
+            if (v > LOAD_RESIDUE * c.action().nKn()) {
+                Perimeter here = new Perimeter(a, u, shares, v, beta(column, a, v, c.action().mxKnm(),
+                        c.action().myKnm()), c.action().name(), vRd.value(), vRd.value() * u * d / 1000);
+                if (here.utilisation() > worst.utilisation()) {
+                    worst = here;
+                }
+            }
+        }
+        return worst;
     }
 }

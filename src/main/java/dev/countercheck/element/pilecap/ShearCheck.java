@@ -36,6 +36,7 @@ final class ShearCheck {
         }
         CapSection section = ctx.section.get();
         Step d = b.trace(section.d(axis.bars()));
+        ctx.equivalentSquare().ifPresent(b::trace);
         Side worst = null;
         Side worstUnreduced = null;
         for (UlsCase u : ctx.uls) {
@@ -88,7 +89,7 @@ final class ShearCheck {
      */
     private static void placeSections(PileCapContext ctx, Axis axis, CheckBuilder b) {
         for (int sign : new int[] {1, -1}) {
-            double face = axis.along(ctx.cap.column().position()) + sign * axis.columnHalf(ctx.cap.column());
+            double face = axis.along(ctx.cap.column().position()) + sign * ctx.columnHalf(axis);
             double nearest = Double.POSITIVE_INFINITY;
             for (Point p : ctx.cap.piles().positions()) {
                 double distance = sign * (axis.along(p) - face);
@@ -118,7 +119,7 @@ final class ShearCheck {
 
     /** The side {@code sign} (+1 beyond the +face, −1 beyond the −face) of case {@code u}, or null when empty. */
     private static Side side(PileCapContext ctx, Axis axis, int sign, double dMm, UlsCase u) {
-        double face = axis.along(ctx.cap.column().position()) + sign * axis.columnHalf(ctx.cap.column());
+        double face = axis.along(ctx.cap.column().position()) + sign * ctx.columnHalf(axis);
         double phi = ctx.cap.piles().diameterMm();
         List<Point> piles = ctx.cap.piles().positions();
         double[] p = u.withSelfWeight().reactionsKn();

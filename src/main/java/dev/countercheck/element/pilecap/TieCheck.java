@@ -24,8 +24,14 @@ final class TieCheck {
     private TieCheck() {
     }
 
-    /** The governing side of one case: the sum Σ P_i·l_i (kN·mm) and its terms for the trace. */
-    private record Side(double sumKnMm, String terms, String caseName) {
+    /** The governing side of one case: the sum Σ P_i·l_i (kN·mm), its terms for the trace, the case and its N. */
+    private record Side(double sumKnMm, String terms, String caseName, double nKn) {
+    }
+
+    /** N (kN) of the ULS case that governs this direction's tie (crack control scales σs by it). */
+    static double governingAxialForce(PileCapContext ctx, Axis axis) {
+        boolean bending = ctx.cap.tieMethod() == TieMethod.BENDING;
+        return governing(ctx, axis, bending ? ctx.columnHalf(axis) : 0.0).nKn;
     }
 
     static CheckOutcome run(PileCapContext ctx, Axis axis) {
@@ -37,18 +43,21 @@ final class TieCheck {
         Step d = b.trace(section.d(axis.bars()));
         b.trace(ctx.fyd);
         boolean bending = ctx.cap.tieMethod() == TieMethod.BENDING;
-        double offset = bending ? axis.columnHalf(ctx.cap.column()) : 0.0;
+        double offset = bending ? ctx.columnHalf(axis) : 0.0;
         Side side = governing(ctx, axis, offset);
         Step force;
         Step required;
         if (bending) {
+            ctx.equivalentSquare().ifPresent(b::trace);
             b.caution("Ties of " + ctx.cap.id() + " were designed by the bending method (as declared): moments at the"
                     + " column face, rectangular stress block (EN 1992-1-1 3.1.7(3)).");
             Step moment = b.value("moment", Step.of("M", "Σ P_i·(distance beyond the column face)",
                     side.terms + " (" + side.caseName + ")", side.sumKnMm / 1000, "kNm", "EN 1992-1-1 6.1"));
             double width = axis.capWidth(ctx.cap);
             Step k = b.trace(Bending.kFactor(moment.value(), width, d.value(), ctx.fck.value()));
-            Step kPrime = b.trace(ctx.rules.parameter("k_prime").asStep());
+            Step kPrime = b.trace(Bending.kPrime(ctx.rules.number("alpha_cc"), ctx.rules.number("gamma_c"),
+                    b.trace(ctx.rules.parameter("stress_block_lambda").asStep()).value(),
+                    b.trace(ctx.rules.parameter("xi_limit").asStep()).value()));
             if (k.value() > kPrime.value()) {
                 b.fail(FindingKind.CAPACITY, "k-limit", "K = " + Num.f(k.value()) + " exceeds K' = " + Num.f(kPrime.value())
                         + ": the section needs compression steel or more depth.");
@@ -83,7 +92,8 @@ final class TieCheck {
     private static Side governing(PileCapContext ctx, Axis axis, double offset) {
         double centre = axis.along(ctx.cap.column().position());
         List<Point> piles = ctx.cap.piles().positions();
-        Side best = new Side(0, "no pile beyond the column", ctx.uls.get(0).action().name());
+        Side best = new Side(0, "no pile beyond the column", ctx.uls.get(0).action().name(),
+                ctx.uls.get(0).action().nKn());
         for (UlsCase u : ctx.uls) {
             double[] p = u.withSelfWeight().reactionsKn();
             for (int sign : new int[] {1, -1}) {
@@ -97,7 +107,7 @@ final class TieCheck {
                     }
                 }
                 if (sum > best.sumKnMm) {
-                    best = new Side(sum, String.join(" + ", terms), u.action().name());
+                    best = new Side(sum, String.join(" + ", terms), u.action().name(), u.action().nKn());
                 }
             }
         }

@@ -34,8 +34,15 @@ import static org.assertj.core.api.Assertions.withinPercentage;
  *     vRd,c = 0.34269 MPa &gt; vmin = 0.33884 MPa; VRd,c = 0.34269·2950·937.5 = 947.8 kN.</li>
  * <li>punching-face: u0 = 2·(600 + 550) = 2300 mm; vRd,max·u0·d = 0.4·0.528·20·2300·950 = 9229.4 kN;
  *     VEd = 5400 kN.</li>
- * <li>punching-perimeter: each pile centre is √(600² + 575²) = 831 mm from the column corner, inside
- *     2d = 1900 mm: not applicable.</li>
+ * <li>punching-perimeter (perimeters at a = 19, 38, ... 1900 mm, steps of d/50): each pile centre is
+ *     √(600² + 575²) = 831.0 mm from the column corner, its head's nearest point 556.0 mm. ρl =
+ *     √(6381.4/(2800·962.5)·6872.2/(2950·937.5)) = 0.0024257; k = 1 + √(200/950) = 1.4588;
+ *     vRd,c = 0.12·1.4588·(100·0.0024257·30)^(1/3) = 0.33924 MPa &gt; vmin = 0.33778. At a = 570:
+ *     u = 2·(600 + 550) + 2π·570 = 5881.4 mm (all on the 2950 × 2800 plan); each head's lens inside the
+ *     corner arc (circles r = 275 and R = 570, centres 831.0 apart) is 1334.6 mm², share 0.0056172;
+ *     VEd,red = 5400 − 4·1350·0.0056172 = 5369.7 kN (no moment, β = 1); vRd = 0.33924·1900/570 =
+ *     1.1308 MPa; VRd = 1.1308·5881.4·950 = 6318.1 kN, ratio 0.8499; at a = 551 (no share) 5400/6403.3 =
+ *     0.8433, at a = 589 5290.0/6238.4 = 0.8480: a = 570 governs.</li>
  * <li>node-column: As,starters = 6·π·28²/4 = 3694.5 mm²;
  *     (5400·1000 − 3694.5·434.78)/(600·550) = 11.496 MPa ≤ 1.0·0.88·20 = 17.6 MPa.</li>
  * <li>node-pile: 1350·1000/(π·275²) = 5.682 MPa ≤ 0.75·0.88·20 = 13.2 MPa (CTT);
@@ -78,10 +85,14 @@ class FourPileCapHandCalculationTest {
     }
 
     @Test
-    void punchingAtTheFaceAndNoPerimeterCheckWhenAllPilesAreWithinTwoD() {
+    void punchingAtTheFaceAndAtTheGoverningPerimeterWithinTwoD() {
         assertThat(value(CAP, "punching-face", "u0")).isCloseTo(2300, withinPercentage(0.01)); // hand calculation
         assertThat(value(CAP, "punching-face", "vrd_max")).isCloseTo(9229.4, withinPercentage(0.05)); // hand calc
-        assertThat(check(CAP, "punching-perimeter").status()).isEqualTo(CheckStatus.NOT_APPLICABLE);
+        assertThat(value(CAP, "punching-perimeter", "a")).isCloseTo(570, withinPercentage(0.01)); // hand calc
+        assertThat(value(CAP, "punching-perimeter", "u")).isCloseTo(5881.4, withinPercentage(0.05)); // hand calc
+        assertThat(value(CAP, "punching-perimeter", "ved")).isCloseTo(5369.7, withinPercentage(0.05)); // hand
+        assertThat(value(CAP, "punching-perimeter", "vrd")).isCloseTo(6318.1, withinPercentage(0.05)); // hand
+        assertThat(check(CAP, "punching-perimeter").status()).isEqualTo(CheckStatus.PASS);
     }
 
     @Test

@@ -65,5 +65,7 @@ class TwoAndThreePileCapHandCalculationTest {
         assertThat(value(cap, "tie-y", "as_required")).isCloseTo(3527.6, withinPercentage(0.05)); // hand calculation
         assertThat(value(cap, "tie-y", "as_provided")).isCloseTo(3769.9, withinPercentage(0.01)); // hand calculation
         assertThat(value(cap, "punching-face", "u0")).isCloseTo(Math.PI * 500, withinPercentage(0.01)); // π·D
+        // One-way shear takes the circular column as a square of side 0.8·500 = 400 mm (common practice).
+        assertThat(check(cap, "shear-y").trace()).anyMatch(t -> t.symbol().equals("c,eq") && t.value() == 400);
     }
 }

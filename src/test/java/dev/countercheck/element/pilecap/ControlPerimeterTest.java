@@ -1,0 +1,52 @@
+package dev.countercheck.element.pilecap;
+
+import dev.countercheck.submission.Column;
+import dev.countercheck.submission.Column.ColumnShape;
+import dev.countercheck.submission.Point;
+import org.junit.jupiter.api.Test;
+
+import java.util.Optional;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+import static org.assertj.core.api.Assertions.withinPercentage;
+
+/** The geometry of control perimeters: length on the cap, share of a pile head inside. Invented sizes. */
+class ControlPerimeterTest {
+
+    private static final Column SQUARE = new Column(ColumnShape.RECTANGULAR, 400, 400, new Point(0, 0),
+            Optional.empty());
+    private static final Column ROUND = new Column(ColumnShape.CIRCULAR, 400, 400, new Point(0, 0),
+            Optional.empty());
+
+    @Test
+    void aFreeEdgeCutsThePerimeter() {
+        // Hand calculation: 400 × 400 column, a = 300, plan 800 wide in x. The sides at x = ±500 lie off
+        // the cap; the sides at y = ±500 (x from −200 to 200) are on it: 2·400 = 800 mm. Each corner arc
+        // (centre (±200, ±200), radius 300) is on the cap while 200 + 300·cos φ ≤ 400: φ ≥ acos(2/3) =
+        // 48.19°, i.e. 41.81° = 0.72973 rad of the 90°: 4·300·0.72973 = 875.7 mm. Total 1675.7 mm.
+        assertThat(ControlPerimeter.lengthInPlan(SQUARE, 300, 800, 5000)).isCloseTo(1675.7, withinPercentage(0.01));
+        // On a plan large enough the whole perimeter counts: 4·400 + 2π·300 = 3485.0 mm (EN 1992-1-1 Figure 6.13).
+        assertThat(ControlPerimeter.lengthInPlan(SQUARE, 300, 5000, 5000)).isCloseTo(3485.0, withinPercentage(0.01));
+        // Circular column D = 400: 2π·(200 + 300) = 3141.6 mm; a plan 500 wide in y keeps the part with
+        // |y| ≤ 250, four arcs of asin(250/500) = 30° each: 4·(π/6)·500 = 1047.2 mm.
+        assertThat(ControlPerimeter.lengthInPlan(ROUND, 300, 5000, 5000)).isCloseTo(3141.6, withinPercentage(0.01));
+        assertThat(ControlPerimeter.lengthInPlan(ROUND, 300, 5000, 500)).isCloseTo(1047.2, withinPercentage(0.01));
+    }
+
+    @Test
+    void aPileHeadCountsByTheShareOfItsAreaInside() {
+        // A head wholly inside, wholly outside, and centred on a straight side (half inside by symmetry).
+        assertThat(ControlPerimeter.headShareInside(SQUARE, 300, new Point(250, 0), 200)).isCloseTo(1, within(1e-9));
+        assertThat(ControlPerimeter.headShareInside(SQUARE, 300, new Point(900, 0), 200)).isCloseTo(0, within(1e-9));
+        assertThat(ControlPerimeter.headShareInside(SQUARE, 300, new Point(500, 0), 200))
+                .isCloseTo(0.5, within(0.002));
+        // A head of D = 4000 over the column takes in the whole rounded rectangle at a = 100:
+        // 400² + 4·400·100 + π·100² = 351 416 mm² of π·2000² = 12 566 371 mm²: share 0.027965 (hand calculation).
+        assertThat(ControlPerimeter.headShareInside(SQUARE, 100, new Point(0, 0), 4000))
+                .isCloseTo(0.027965, withinPercentage(0.5));
+        // Circular column, a = 100: the disc of radius 300, π·300²/(π·2000²) = 0.0225 (hand calculation).
+        assertThat(ControlPerimeter.headShareInside(ROUND, 100, new Point(0, 0), 4000))
+                .isCloseTo(0.0225, withinPercentage(0.5));
+    }
+}
