@@ -29,8 +29,9 @@ final class PileCapReviewer {
     /** The assumptions every pile-cap review makes, for the report. */
     static final List<String> ASSUMPTIONS = List.of(
             "Pile caps are rigid: pile reactions vary linearly with position (common practice). The cap's own"
-                    + " weight (γconc × plan area × h, factored by γG) is added at the cap centre unless the"
-                    + " submission says it is included in the actions.",
+                    + " weight (γconc × plan area × h) is added at the cap centre unless the submission says it is"
+                    + " included in the actions, factored by γG,sup for the largest reactions and by γG,inf for"
+                    + " the least (EN 1990 Table A1.2(B)).",
             "Horizontal forces at the top of the cap add H·h to the moment at pile-head level; piles are taken"
                     + " to carry no moment.",
             "Ties: strut-and-tie model with one node under the column centre and lever arm z = (z/d)·d; the tie"
@@ -45,7 +46,7 @@ final class PileCapReviewer {
             "Concrete properties come from the expressions of EN 1992-1-1 Table 3.1, unrounded.");
 
     /** The ruleset parameters the pile-cap checks read. */
-    static final Set<String> PARAMETERS = Set.of("gamma_c", "gamma_s", "gamma_g", "alpha_cc",
+    static final Set<String> PARAMETERS = Set.of("gamma_c", "gamma_s", "gamma_g", "gamma_g_inf", "alpha_cc",
             "alpha_cc_shear", "alpha_ct", "c_rdc_factor", "v_min_coefficient", "punching_vrd_max_factor", "node_k1",
             "node_k2", "node_k3", "k_prime", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
             "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
