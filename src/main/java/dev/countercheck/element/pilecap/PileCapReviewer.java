@@ -90,6 +90,8 @@ final class PileCapReviewer {
                 Map.entry("edge-distance", GeometryChecks::edgeDistance),
                 Map.entry("tie-x", c -> TieCheck.run(c, Axis.X)),
                 Map.entry("tie-y", c -> TieCheck.run(c, Axis.Y)),
+                Map.entry("hogging-x", c -> HoggingCheck.run(c, Axis.X)),
+                Map.entry("hogging-y", c -> HoggingCheck.run(c, Axis.Y)),
                 Map.entry("shear-x", c -> ShearCheck.run(c, Axis.X)),
                 Map.entry("shear-y", c -> ShearCheck.run(c, Axis.Y)),
                 Map.entry("punching-face", PunchingChecks::face),

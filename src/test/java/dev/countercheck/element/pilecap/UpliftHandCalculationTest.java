@@ -1,5 +1,6 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.review.CheckStatus;
 import dev.countercheck.review.ElementReview;
 import org.junit.jupiter.api.Test;
 
@@ -40,5 +41,34 @@ class UpliftHandCalculationTest {
         assertThat(value(cap, "pile-reactions-deviation", "min")).isCloseTo(-144.6, withinPercentage(0.1)); // hand calculation
         assertThat(value(cap, "pile-reactions-deviation", "min"))
                 .isLessThanOrEqualTo(value(cap, "pile-reactions", "min"));
+    }
+
+    /**
+     * hogging-x, top bars 6 φ16 (layer 1): d = 900 − 50 − 8 = 842 mm; As,prov = 6·201.06 = 1206.4 mm².
+     * Tension pile 1 at x = −1000, column face at −200: l = 0.8 m; the cap beyond the face is
+     * 1600 − 200 = 1400 mm long, 1.0 m wide, 0.9 m deep: 25·1.0·0.9 = 22.5 kN/m.
+     * With γG,inf: P1 = −114 kN, M = 114·0.8 + 1.0·22.5·1.4²/2 = 91.2 + 22.05 = 113.25 kNm.
+     * With γG,sup: P1 = −101.4 kN, M = 101.4·0.8 + 1.35·22.05 = 81.12 + 29.77 = 110.89 kNm. γG,inf governs.
+     * K = 113.25e6/(1000·842²·30) = 0.0053246; z = 421·[1 + √(1 − 2·0.0053246/(1/1.5))] = 838.6 mm
+     * > 0.95d = 799.9 mm, so z = 799.9 mm; As,req = 113.25e6/(434.78·799.9) = 325.6 mm² ≤ 1206.4: passes.
+     * Both piles lie on y = 0, within the column's width: no pile lies beyond a face in y, so hogging-y
+     * is not applicable.
+     */
+    @Test
+    void hoggingOverTheTensionPileTakesTheWorseOwnWeightFactor() {
+        assertThat(value(cap, "hogging-x", "moment")).isCloseTo(113.25, withinPercentage(0.05)); // hand calculation
+        assertThat(value(cap, "hogging-x", "as_required")).isCloseTo(325.6, withinPercentage(0.1)); // hand calculation
+        assertThat(value(cap, "hogging-x", "as_provided")).isCloseTo(1206.4, withinPercentage(0.01)); // hand calculation
+        assertThat(CapReviews.check(cap, "hogging-x").status()).isEqualTo(CheckStatus.PASS);
+        assertThat(CapReviews.check(cap, "hogging-y").status()).isEqualTo(CheckStatus.NOT_APPLICABLE);
+    }
+
+    /** The two-pile cap without moment (resources/hand-calcs/two-pile.yaml) has no pile in tension. */
+    @Test
+    void noTensionPileMeansNotApplicableWithTheReason() {
+        ElementReview plain = CapReviews.element("/hand-calcs/two-pile.yaml");
+        assertThat(CapReviews.check(plain, "hogging-x").status()).isEqualTo(CheckStatus.NOT_APPLICABLE);
+        assertThat(CapReviews.check(plain, "hogging-x").reason()).hasValueSatisfying(
+                reason -> assertThat(reason).contains("no pile is in tension"));
     }
 }
