@@ -50,7 +50,7 @@ final class PileCapReviewer {
             "alpha_cc_shear", "alpha_ct", "c_rdc_factor", "v_min_coefficient", "punching_vrd_max_factor", "node_k1",
             "node_k2", "node_k3", "k_prime", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
             "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
-            "shear_section_inside_pile");
+            "shear_section_inside_pile", "band_spacing_limit", "band_half_width");
 
     private final ElementAssembler assembler;
 

@@ -13,6 +13,7 @@ import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * {@code tie-x}, {@code tie-y}: the bottom tie steel of one direction, by the truss method (single
@@ -67,7 +68,26 @@ final class TieCheck {
             force = b.value("force", Truss.tieForce(side.sumKnMm, side.terms + " (" + side.caseName + ")", z.value()));
             required = b.value("as_required", Truss.tieArea(force.value(), ctx.fyd.value()));
         }
-        Step provided = b.value("as_provided", section.as(axis.bars()));
+        Step all = section.as(axis.bars());
+        Optional<TieBands> bands = TieBands.of(ctx, axis, axis == Axis.X ? section.xBars() : section.yBars(),
+                all.value());
+        Step provided;
+        if (bands.isPresent()) {
+            b.trace(ctx.rules.parameter("band_spacing_limit").asStep());
+            b.trace(ctx.rules.parameter("band_half_width").asStep());
+            b.value("as_provided_all", all);
+            provided = b.value("as_provided", bands.get().counted());
+            if (!bands.get().outside().isEmpty()) {
+                b.caution("Piles more than " + Num.f(ctx.rules.number("band_spacing_limit")) + "φ apart: the tie"
+                        + " steel belongs in bands over the piles (EN 1992-1-1 9.8.1(3)). Bottom " + axis.label()
+                        + "-bars " + bands.get().outside().stream().map(String::valueOf)
+                        .collect(java.util.stream.Collectors.joining(", ")) + " of " + bands.get().count()
+                        + " (counted from the −" + (axis == Axis.X ? "y" : "x") + " edge) lie outside the bands and"
+                        + " were not counted as tie steel.");
+            }
+        } else {
+            provided = b.value("as_provided", all);
+        }
         if (force.value() == 0) {
             return b.pass().build();
         }
