@@ -38,7 +38,8 @@ final class PileCapReviewer {
                     + " force uses the full pile reactions, including the cap's own weight (conservative).",
             "One-way shear: the critical section lies a share of the pile diameter (ruleset, common practice"
                     + " 0.2φ) inside the face of the nearest pile beyond the column face; each pile's reaction is reduced by its own β = av/2d"
-                    + " with av ≥ 0.5d (EN 1992-1-1 6.2.2(6)); the full cap width resists.",
+                    + " with av ≥ 0.5d (EN 1992-1-1 6.2.2(6)); the full cap width resists, except over widely spaced"
+                    + " piles, where strips of 3φ about the piles beyond the section do (ruleset, common practice).",
             "Punching at the column face uses the full column perimeter (an internal column) and β as stated,"
                     + " else 1.0. At the basic control perimeter only the part of u1 on the cap counts; the"
                     + " reactions there are those of the column actions alone.",
@@ -50,7 +51,8 @@ final class PileCapReviewer {
             "alpha_cc_shear", "alpha_ct", "c_rdc_factor", "v_min_coefficient", "punching_vrd_max_factor", "node_k1",
             "node_k2", "node_k3", "k_prime", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
             "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
-            "shear_section_inside_pile", "band_spacing_limit", "band_half_width");
+            "shear_section_inside_pile", "band_spacing_limit", "band_half_width",
+            "shear_strip_width");
 
     private final ElementAssembler assembler;
 

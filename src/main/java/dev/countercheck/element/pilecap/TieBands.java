@@ -28,20 +28,17 @@ record TieBands(Step counted, List<Integer> outside, int count) {
         PileCap cap = ctx.cap;
         double phi = cap.piles().diameterMm();
         double limit = ctx.rules.number("band_spacing_limit");
-        if (cap.piles().count() < 2 || sets.isEmpty() || GeometryChecks.minSpacing(cap) <= limit * phi + 1e-6) {
+        if (sets.isEmpty() || !widelySpaced(ctx)) {
             return Optional.empty();
         }
         double halfWidth = ctx.rules.number("band_half_width") * phi;
-        int n = sets.stream().mapToInt(BarSet::count).sum();
-        double barPhi = sets.stream().mapToDouble(BarSet::diameterMm).max().orElse(0);
-        double width = axis.capWidth(cap);
-        double side = cap.reinforcement().orElseThrow().cover().sideMm();
-        double spacing = n < 2 ? 0 : (width - 2 * side - barPhi) / (n - 1);
-        double first = n < 2 ? 0 : -width / 2 + side + barPhi / 2;
+        double[] centres = barCentres(cap, axis, sets);
+        int n = centres.length;
+        double spacing = n < 2 ? 0 : centres[1] - centres[0];
         List<Integer> outside = new ArrayList<>();
         int inside = 0;
         for (int i = 0; i < n; i++) {
-            double at = first + i * spacing;
+            double at = centres[i];
             boolean over = cap.piles().positions().stream().anyMatch(p -> Math.abs(across(axis, p) - at) <= halfWidth + 1e-6);
             if (over) {
                 inside++;
@@ -59,8 +56,33 @@ record TieBands(Step counted, List<Integer> outside, int count) {
         return Optional.of(new TieBands(step, List.copyOf(outside), n));
     }
 
+    /** Whether the piles are widely spaced: least spacing above band_spacing_limit·φ (and two or more piles). */
+    static boolean widelySpaced(PileCapContext ctx) {
+        PileCap cap = ctx.cap;
+        return cap.piles().count() > 1 && GeometryChecks.minSpacing(cap)
+                > ctx.rules.number("band_spacing_limit") * cap.piles().diameterMm() + 1e-6;
+    }
+
+    /**
+     * The centres of the bars of {@code sets} across the cap (y for x-bars, x for y-bars), placed evenly as
+     * for the bar spacing: the first at c_side + φ/2 from the edge, then (W − 2·c_side − φ)/(n − 1) apart.
+     */
+    static double[] barCentres(PileCap cap, Axis axis, List<BarSet> sets) {
+        int n = sets.stream().mapToInt(BarSet::count).sum();
+        double barPhi = sets.stream().mapToDouble(BarSet::diameterMm).max().orElse(0);
+        double width = axis.capWidth(cap);
+        double side = cap.reinforcement().orElseThrow().cover().sideMm();
+        double spacing = n < 2 ? 0 : (width - 2 * side - barPhi) / (n - 1);
+        double first = n < 2 ? 0 : -width / 2 + side + barPhi / 2;
+        double[] centres = new double[n];
+        for (int i = 0; i < n; i++) {
+            centres[i] = first + i * spacing;
+        }
+        return centres;
+    }
+
     /** The coordinate of {@code p} across the bars of {@code axis}: y for x-bars, x for y-bars. */
-    private static double across(Axis axis, Point p) {
+    static double across(Axis axis, Point p) {
         return axis == Axis.X ? p.yMm() : p.xMm();
     }
 }

@@ -49,4 +49,20 @@ class TieBandingHandCalculationTest {
         ElementReview close = CapReviews.element("/hand-calcs/two-pile.yaml");
         assertThat(check(close, "tie-x").values()).doesNotContainKey("as_provided_all");
     }
+
+    /**
+     * Shear width over the same widely spaced piles (strips 3φ = 1200 mm, common practice). Section
+     * across x on the +x side: the piles beyond it lie at y = ±1100; strips [500, 1700] and [−1700, −500]
+     * clipped to the cap (±1600): b = 1100 + 1100 = 2200 mm. Bars within: the 12 banded x-bars,
+     * As = 3769.9 mm²; ρl = 3769.9/(2200·1115) = 0.0015369; k = 1 + √(200/1115) = 1.42352;
+     * vRd,c = 0.12·1.42352·(100·0.0015369·30)^(1/3) = 0.28431 MPa < vmin = 0.035·1.42352^1.5·√30
+     * = 0.32559 MPa; VRd,c = 0.32559·2200·1115 = 798.7 kN (EN 1992-1-1 6.2.2(1)).
+     */
+    @Test
+    void shearWidthIsTheUnionOfStripsAboutThePilesBeyondTheSection() {
+        assertThat(value(cap, "shear-x", "b")).isCloseTo(2200, withinPercentage(0.01)); // hand calculation
+        assertThat(value(cap, "shear-x", "vrdc")).isCloseTo(798.7, withinPercentage(0.05)); // hand calculation
+        assertThat(value(CapReviews.element("/hand-calcs/two-pile.yaml"), "shear-x", "b"))
+                .isCloseTo(900, withinPercentage(0.01)); // full cap width (piles at 3φ, not widely spaced)
+    }
 }
