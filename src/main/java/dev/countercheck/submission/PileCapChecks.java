@@ -25,7 +25,7 @@ public final class PileCapChecks {
             new CheckSpec("pile-spacing", "Pile spacing", "common practice",
                     Kind.DETAILING, List.of(capacity("min_spacing", "mm"))),
             new CheckSpec("edge-distance", "Pile edge distance", "EN 1992-1-1 9.8.1(1); minimum common practice",
-                    Kind.DETAILING, List.of(capacity("min_edge", "mm"))),
+                    Kind.DETAILING, List.of(capacity("min_edge", "mm"), capacity("min_edge_deviated", "mm"))),
             new CheckSpec("tie-x", "Tension tie, bars parallel to x", "EN 1992-1-1 6.5, 9.8.1(2), (3)",
                     Kind.STRENGTH, List.of(demand("force", "kN"), demand("moment", "kNm"), capacity("z", "mm"),
                             demand("as_required", "mm2"), capacity("as_provided", "mm2"),

@@ -26,10 +26,7 @@ final class DeviationCheck {
 
     static CheckOutcome run(PileCapContext ctx) {
         CheckBuilder b = Checks.builder("pile-reactions-deviation");
-        Step delta = ctx.cap.piles().toleranceMm()
-                .map(t -> Step.of("δ", "stated plan tolerance", Num.f(t), t, "mm", "submission"))
-                .orElseGet(() -> ctx.rules.parameter("pile_tolerance").asStep());
-        b.trace(delta);
+        Step delta = b.trace(ctx.planTolerance());
         if (ctx.cap.piles().toleranceMm().isEmpty()) {
             b.caution("No pile positional tolerance was stated; " + Num.f(delta.value())
                     + " mm was assumed (common practice).");

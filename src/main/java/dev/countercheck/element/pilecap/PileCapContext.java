@@ -131,6 +131,16 @@ final class PileCapContext {
         return points.stream().map(PileCapContext::plan).toList();
     }
 
+    /**
+     * δ, the plan positional tolerance of the piles: as stated, else the ruleset's {@code pile_tolerance}
+     * (common practice 75 mm, an assumption the checks using it state).
+     */
+    Step planTolerance() {
+        return cap.piles().toleranceMm()
+                .map(t -> Step.of("δ", "stated plan tolerance", Num.f(t), t, "mm", "submission"))
+                .orElseGet(() -> rules.parameter("pile_tolerance").asStep());
+    }
+
     /** The largest column N over the ULS cases (the cap's own weight is not part of it). */
     double maxColumnN() {
         return uls.stream().mapToDouble(u -> u.action().nKn()).max().orElse(0);
