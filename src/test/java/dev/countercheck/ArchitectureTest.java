@@ -88,4 +88,13 @@ class ArchitectureTest {
                         "dev.countercheck.review..", "dev.countercheck.element..", "dev.countercheck.report..")
                 .check(CLASSES);
     }
+
+    @Test
+    void theReviewRoundPackagesNeverImportReportCliOrReviewers() {
+        noClasses().that().resideInAnyPackage("dev.countercheck.responses..", "dev.countercheck.revision..",
+                        "dev.countercheck.round..", "dev.countercheck.export..")
+                .should().dependOnClassesThat().resideInAnyPackage("dev.countercheck.report..",
+                        "dev.countercheck.cli..", "dev.countercheck.element..", "dev.countercheck.ruleset..")
+                .check(CLASSES);
+    }
 }

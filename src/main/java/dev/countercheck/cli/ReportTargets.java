@@ -1,5 +1,8 @@
 package dev.countercheck.cli;
 
+import dev.countercheck.report.ReportIndex;
+import dev.countercheck.report.ReportMarkers;
+
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -12,7 +15,8 @@ import java.util.List;
  * plan.yaml/reports}); a basename that would lead out of the folder ({@code ..}) or hold a
  * separator or a control character; a report that would replace a submission (reviewing
  * {@code reports/a.json} into {@code reports} would write {@code reports/a.json}), also through
- * a link.
+ * a link; a file of that name that the tool did not write (another submission's {@code .json});
+ * a folder the user cannot write.
  */
 final class ReportTargets {
 
@@ -32,10 +36,19 @@ final class ReportTargets {
      *
      * @throws UsageException naming the first problem found
      */
-    static ReportTargets of(Path outDir, List<Path> submissions, List<String> extensions) {
+    static ReportTargets of(Path outDir, List<Path> submissions, List<String> extensions, boolean withIndex) {
         Path folder = outDir.toAbsolutePath().normalize();
         if (Files.exists(folder) && !Files.isDirectory(folder)) {
             throw new UsageException("--out " + outDir + " is a file, not a folder");
+        }
+        Path existing = folder;
+        while (existing != null && !Files.exists(existing)) {
+            existing = existing.getParent();
+        }
+        if (existing != null && !Files.isWritable(existing)) {
+            throw new UsageException("--out " + outDir + " cannot be written: " + (existing.equals(folder)
+                    ? "the folder is read-only for this user" : "the folder " + existing + ", where it would be"
+                    + " created, is read-only for this user"));
         }
         List<Path> absolute = submissions.stream().map(p -> p.toAbsolutePath().normalize()).toList();
         for (Path submission : absolute) {
@@ -47,8 +60,11 @@ final class ReportTargets {
         ReportTargets targets = new ReportTargets(outDir, folder, absolute);
         for (Path submission : submissions) {
             for (String extension : extensions) {
-                targets.report(submission, extension);
+                targets.owned(targets.report(submission, extension));
             }
+        }
+        if (withIndex) {
+            targets.owned(outDir.resolve(ReportIndex.NAME + ".html"));
         }
         return targets;
     }
@@ -77,6 +93,14 @@ final class ReportTargets {
             }
         }
         return outDir.resolve(basename + extension);
+    }
+
+    /** Refuses a report name held by a file the tool did not write. */
+    private void owned(Path report) {
+        if (!ReportMarkers.replaceable(report)) {
+            throw new UsageException(report + " exists and was not written by countercheck (it bears no report"
+                    + " mark): it is left as it is; choose another --out folder or move the file");
+        }
     }
 
     private static boolean sameFile(Path a, Path b) {

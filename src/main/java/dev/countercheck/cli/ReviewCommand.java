@@ -2,13 +2,15 @@ package dev.countercheck.cli;
 
 import dev.countercheck.element.ElementKinds;
 import dev.countercheck.element.ProjectReviewer;
+import dev.countercheck.input.UnusableInputException;
 import dev.countercheck.report.HtmlReportWriter;
 import dev.countercheck.report.JsonResultWriter;
 import dev.countercheck.report.PdfReportWriter;
-import dev.countercheck.report.ReportFiles;
+import dev.countercheck.report.OutputSet;
 import dev.countercheck.report.ReportIndex;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
+import dev.countercheck.round.ReviewRound;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.ruleset.RulesetException;
 import dev.countercheck.submission.Submission;
@@ -19,11 +21,14 @@ import picocli.CommandLine.Parameters;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
+import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
@@ -33,9 +38,10 @@ import java.util.concurrent.Callable;
         description = "Recompute every check of each submission and write DIR/<name>.json and DIR/<name>.html;"
                 + " for several submissions or a folder, also DIR/index.html.",
         exitCodeListHeading = "%nExit status:%n",
-        exitCodeList = {"0:nothing at or above the --fail-on severity was found",
-                "1:something at or above the --fail-on severity was found",
-                "2:unusable input or wrong usage"})
+        exitCodeList = {"0:nothing at or above the --fail-on severity was found and every element was reviewed",
+                "1:something at or above the --fail-on severity was found, or an element is incomplete",
+                "2:unusable input or wrong usage, or the reports could not be written",
+                "3:internal error (a fault of the tool, never of the input)"})
 public final class ReviewCommand implements Callable<Integer> {
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "Submission files (YAML or JSON) or folders of them.")
@@ -48,6 +54,10 @@ public final class ReviewCommand implements Callable<Integer> {
     @Option(names = "--ruleset", paramLabel = "ID|PATH",
             description = "Ruleset to apply, overriding the submission's basis.ruleset (default en1992-recommended).")
     Optional<String> ruleset;
+
+    @Option(names = "--rulesets-dir", paramLabel = "DIR",
+            description = "The checker's rulesets folder: ids are looked up here before the bundled rulesets.")
+    Optional<Path> rulesetsDir;
 
     @Option(names = "--fail-on", paramLabel = "SEVERITY", defaultValue = "critical",
             description = "Exit 1 when a finding at or above this severity exists: critical, major, minor, note"
@@ -64,8 +74,14 @@ public final class ReviewCommand implements Callable<Integer> {
     @Option(names = "--debug", description = "On an internal error, print where it happened (a stack trace).")
     boolean debug;
 
+    @picocli.CommandLine.Mixin
+    RoundOptions round;
+
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
+
+    /** Where report files are written; tests put a failing disk here. */
+    OutputSet.Sink sink = OutputSet.DISK;
 
     @Override
     public Integer call() {
@@ -81,18 +97,25 @@ public final class ReviewCommand implements Callable<Integer> {
                     Clock.systemUTC());
             inputs = SubmissionFiles.expand(files);
             requireDistinctBasenames(inputs);
+            round.validate(inputs);
             batch = inputs.size() > 1 || files.stream().anyMatch(Files::isDirectory);
             if (batch && inputs.stream().anyMatch(p -> SubmissionFiles.basename(p).equals(ReportIndex.NAME))) {
                 throw new UsageException("a submission named " + ReportIndex.NAME + " would write its report where"
                         + " the index of several submissions goes; rename it or review it on its own");
             }
-            targets = ReportTargets.of(outDir, inputs, pdf ? List.of(".json", ".html", ".pdf")
+            List<String> extensions = new ArrayList<>(pdf ? List.of(".json", ".html", ".pdf")
                     : List.of(".json", ".html"));
+            extensions.addAll(round.extensions());
+            targets = ReportTargets.of(outDir, inputs, extensions, batch);
+            OutputSet.recover(outDir);
         } catch (IllegalArgumentException | UsageException e) {
             err.println("countercheck review: " + e.getMessage());
             return ExitCodes.UNUSABLE;
+        } catch (IOException e) {
+            err.println("countercheck review: cannot use --out " + outDir + ": " + IoReasons.of(e));
+            return ExitCodes.UNUSABLE;
         }
-        Rulesets rulesets = new Rulesets();
+        Rulesets rulesets = new Rulesets(rulesetsDir, err);
         ProjectReviewer reviewer = new ProjectReviewer(Version.tool());
         ReportIndex index = new ReportIndex(Version.tool(), reviewDate);
         int status = ExitCodes.OK;
@@ -103,8 +126,10 @@ public final class ReviewCommand implements Callable<Integer> {
             }
             status = worse(status, reviewOne(file, rulesets, reviewer, reviewDate, targets, threshold, index));
         }
-        if (batch) {
+        if (batch && index.anyReviewed()) {
             status = worse(status, writeIndex(index, inputs.size()));
+        } else if (batch) {
+            err.println("no submission could be reviewed: nothing written");
         }
         return status;
     }
@@ -115,59 +140,76 @@ public final class ReviewCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         try {
             Submission submission = new dev.countercheck.submission.SubmissionReader(ElementKinds.binders()).read(file);
-            Ruleset rules = ruleset.isPresent() ? rulesets.load(ruleset.get())
-                    : rulesets.load(submission.ruleset().orElse(Rulesets.DEFAULT), submission.rulesetAt());
+            Ruleset rules = rulesets.of(submission, ruleset);
             Review review = reviewer.review(submission, rules, reviewDate);
+            ReviewRound context = round.round(file, review, err);
             Path json = targets.report(file, ".json");
             Path html = targets.report(file, ".html");
-            Files.createDirectories(outDir);
-            ReportFiles.writeAtomically(json, new JsonResultWriter().write(review));
-            ReportFiles.writeAtomically(html, new HtmlReportWriter().write(review));
             Optional<Path> pdfFile = pdf ? Optional.of(targets.report(file, ".pdf")) : Optional.empty();
-            if (pdfFile.isPresent()) {
-                ReportFiles.writeAtomically(pdfFile.get(), new PdfReportWriter().write(review));
+            List<Path> written = new ArrayList<>(List.of(json, html));
+            try (OutputSet reports = OutputSet.in(outDir, sink)) {
+                reports.add(json.getFileName().toString(), new JsonResultWriter().write(review));
+                reports.add(html.getFileName().toString(), new HtmlReportWriter().write(review, context));
+                if (pdfFile.isPresent()) {
+                    reports.add(pdfFile.get().getFileName().toString(), new PdfReportWriter().write(review, context));
+                    written.add(pdfFile.get());
+                }
+                for (Map.Entry<String, byte[]> extra : round.files(review, threshold).entrySet()) {
+                    Path target = targets.report(file, extra.getKey());
+                    reports.add(target.getFileName().toString(), extra.getValue());
+                    written.add(target);
+                }
+                reports.commit();
             }
             index.reviewed(review, json, html, pdfFile);
-            spec.commandLine().getOut().println(SummaryLine.of(file, review, json, html));
-            boolean found = review.elements().stream().flatMap(e -> e.findings().stream())
-                    .anyMatch(f -> f.severity().atLeast(threshold));
-            return found ? ExitCodes.FINDINGS : ExitCodes.OK;
+            spec.commandLine().getOut().println(round.summary(file, review, context, written));
+            return review.passesGate(threshold) ? ExitCodes.OK : ExitCodes.FINDINGS;
         } catch (SubmissionException e) {
             e.errors().forEach(err::println);
             err.println(file + ": not reviewed (" + e.errors().size() + " input error"
                     + (e.errors().size() == 1 ? "" : "s") + ")");
             index.notReviewed(file.toString(), "input errors");
+        } catch (UnusableInputException e) {
+            e.problems().forEach(err::println);
+            err.println(file + ": not reviewed (the responses, previous result or review settings cannot be used)");
+            index.notReviewed(file.toString(), "its responses, previous result or review settings cannot be used");
         } catch (RulesetException e) {
             e.errors().forEach(err::println);
             err.println(file + ": not reviewed (the ruleset cannot be used)");
             index.notReviewed(file.toString(), "the ruleset cannot be used");
         } catch (IOException e) {
-            err.println(file + ": cannot write the reports to " + outDir + ": " + e.getMessage());
-            index.notReviewed(file.toString(), "its reports could not be written");
-        } catch (RuntimeException e) {
-            err.println(file + ": not reviewed: internal error (" + e.getClass().getSimpleName() + ")."
-                    + " Please report it with the submission" + (debug ? ":" : "; --debug shows where it happened."));
+            notWritten(file, "cannot write the reports to " + outDir + ": " + IoReasons.of(e), index);
+        } catch (UncheckedIOException e) {
+            notWritten(file, "cannot write the reports: " + e.getMessage() + ": " + IoReasons.of(e.getCause()), index);
+        } catch (RuntimeException | StackOverflowError | OutOfMemoryError e) {
+            err.println(file + ": not reviewed: " + InternalFailure.line(e, debug));
             if (debug) {
                 e.printStackTrace(err);
             }
             index.notReviewed(file.toString(), "internal error");
+            return ExitCodes.INTERNAL;
         }
         return ExitCodes.UNUSABLE;
     }
 
+    private void notWritten(Path file, String why, ReportIndex index) {
+        spec.commandLine().getErr().println(file + ": " + why + "; the previous reports, if any, are left as they were");
+        index.notReviewed(file.toString(), "its reports could not be written");
+    }
+
     private int writeIndex(ReportIndex index, int submissions) {
         Path indexFile = outDir.resolve(ReportIndex.NAME + ".html");
-        try {
-            ReportFiles.writeAtomically(indexFile, index.html());
+        try (OutputSet set = OutputSet.in(outDir, sink)) {
+            set.add(indexFile.getFileName().toString(), index.html()).commit();
             spec.commandLine().getOut().println("index of " + submissions + " submissions -> " + indexFile);
             return ExitCodes.OK;
         } catch (IOException e) {
-            spec.commandLine().getErr().println("cannot write " + indexFile + ": " + e.getMessage());
+            spec.commandLine().getErr().println("cannot write " + indexFile + ": " + IoReasons.of(e));
             return ExitCodes.UNUSABLE;
         }
     }
 
-    /** The more serious of two exit statuses (unusable input over findings over none). */
+    /** The more serious of two exit statuses (internal error over unusable input over findings over none). */
     private static int worse(int a, int b) {
         return Math.max(a, b);
     }

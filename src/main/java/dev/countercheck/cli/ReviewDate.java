@@ -9,7 +9,8 @@ import java.util.Optional;
 
 /**
  * The date a review states: {@code --date} when given, else SOURCE_DATE_EPOCH (seconds since
- * 1970, UTC) when set, else today (UTC). Fixing either makes reruns byte-identical.
+ * 1970, UTC) when set, else today (UTC). Fixing either makes reruns byte-identical. Years have four
+ * digits: a date such as {@code +10000-01-01} is refused.
  */
 final class ReviewDate {
 
@@ -19,6 +20,9 @@ final class ReviewDate {
     static String resolve(Optional<String> option, Optional<String> sourceDateEpoch, Clock clock) {
         if (option.isPresent()) {
             try {
+                if (!option.get().matches("\\d{4}-\\d{2}-\\d{2}")) {
+                    throw new DateTimeParseException("not YYYY-MM-DD", option.get(), 0);
+                }
                 return LocalDate.parse(option.get()).toString();
             } catch (DateTimeParseException e) {
                 throw new UsageException("--date '" + option.get() + "' is not a date of the form YYYY-MM-DD");
@@ -27,7 +31,11 @@ final class ReviewDate {
         if (sourceDateEpoch.isPresent() && !sourceDateEpoch.get().isBlank()) {
             try {
                 long seconds = Long.parseLong(sourceDateEpoch.get().trim());
-                return Instant.ofEpochSecond(seconds).atZone(ZoneOffset.UTC).toLocalDate().toString();
+                LocalDate date = Instant.ofEpochSecond(seconds).atZone(ZoneOffset.UTC).toLocalDate();
+                if (date.getYear() < 1000 || date.getYear() > 9999) {
+                    throw new NumberFormatException("not a four-digit year");
+                }
+                return date.toString();
             } catch (NumberFormatException | java.time.DateTimeException e) {
                 throw new UsageException("SOURCE_DATE_EPOCH '" + sourceDateEpoch.get()
                         + "' is not a number of seconds since 1970-01-01");

@@ -4,6 +4,7 @@ import dev.countercheck.eurocode.Num;
 import dev.countercheck.ruleset.CheckDef;
 import dev.countercheck.ruleset.Parameter;
 import dev.countercheck.ruleset.Ruleset;
+import dev.countercheck.ruleset.SeverityDef;
 import dev.countercheck.ruleset.RulesetException;
 import dev.countercheck.ruleset.TableDef;
 import picocli.CommandLine.Command;
@@ -27,6 +28,10 @@ public final class RulesCommand implements Callable<Integer> {
             description = "Ruleset id or path (default: ${DEFAULT-VALUE}).")
     String ruleset;
 
+    @Option(names = "--rulesets-dir", paramLabel = "DIR",
+            description = "The checker's rulesets folder: ids are looked up here before the bundled rulesets.")
+    java.util.Optional<java.nio.file.Path> rulesetsDir;
+
     @Option(names = "--format", defaultValue = "text", description = "text or markdown (default: ${DEFAULT-VALUE}).")
     Format format;
 
@@ -38,7 +43,7 @@ public final class RulesCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         Ruleset r;
         try {
-            r = new Rulesets().load(ruleset);
+            r = new Rulesets(rulesetsDir, spec.commandLine().getErr()).load(ruleset);
         } catch (RulesetException e) {
             e.errors().forEach(spec.commandLine().getErr()::println);
             return ExitCodes.UNUSABLE;
@@ -62,6 +67,11 @@ public final class RulesCommand implements Callable<Integer> {
                     p.clause(), p.origin());
         }
         out.println();
+        out.println("SEVERITIES");
+        for (SeverityDef v : r.severities().values()) {
+            out.printf("%-22s %-9s %s  [%s]%n", v.kind(), v.severity(), v.meaning(), v.origin());
+        }
+        out.println();
         out.println("TABLES");
         for (TableDef t : r.tables().values()) {
             out.printf("%-26s %-10s %-4s %s  [%s]%n", t.name(), t.symbol(), t.unit(), t.clause(), t.origin());
@@ -75,7 +85,7 @@ public final class RulesCommand implements Callable<Integer> {
                 out.printf("  %-14s = %s  [%s] %s%n", d.symbol(), d.formula(), d.unit(), d.clause());
             }
             for (CheckDef.RequirementDef q : c.requirements()) {
-                out.printf("  requires %s  (%s, %s)%n", q.that(), q.severity(), q.clause());
+                out.printf("  requires %s  (%s %s, %s)%n", q.that(), q.finding(), q.severity(), q.clause());
             }
         }
     }
@@ -93,6 +103,16 @@ public final class RulesCommand implements Callable<Integer> {
         for (Parameter p : r.parameters().values()) {
             out.println("| `" + p.name() + "` | " + p.symbol() + " | " + Num.f(p.value()) + " | " + p.unit() + " | "
                     + p.clause() + " | " + p.note() + " | " + p.origin() + " |");
+        }
+        out.println();
+        out.println("## Severities");
+        out.println();
+        out.println("The severity of each kind of finding the review raises (a requirement below states its own).");
+        out.println();
+        out.println("| kind | severity | meaning | set in |");
+        out.println("|---|---|---|---|");
+        for (SeverityDef v : r.severities().values()) {
+            out.println("| `" + v.kind() + "` | " + v.severity() + " | " + v.meaning() + " | " + v.origin() + " |");
         }
         out.println();
         out.println("## Tables");
@@ -127,8 +147,8 @@ public final class RulesCommand implements Callable<Integer> {
             }
             out.println();
             for (CheckDef.RequirementDef q : c.requirements()) {
-                out.println("- requires `" + q.that().replace("|", "\\|") + "` (" + q.severity() + ", " + q.clause()
-                        + ")");
+                out.println("- requires `" + q.that().replace("|", "\\|") + "` (finding `" + q.finding() + "`, "
+                        + q.severity() + ", " + q.clause() + ")");
             }
         }
     }

@@ -19,10 +19,15 @@ final class SubmissionFiles {
         for (Path p : given) {
             if (Files.isDirectory(p)) {
                 try (Stream<Path> children = Files.list(p)) {
-                    children.filter(Files::isRegularFile).filter(SubmissionFiles::looksLikeSubmission).sorted()
-                            .forEach(files::add);
+                    List<Path> found = children.filter(Files::isRegularFile).filter(SubmissionFiles::looksLikeSubmission)
+                            .sorted().toList();
+                    if (found.isEmpty()) {
+                        throw new UsageException("the folder " + p + " holds no submission (no .yaml, .yml or .json"
+                                + " file)");
+                    }
+                    files.addAll(found);
                 } catch (IOException e) {
-                    throw new UsageException("cannot list folder " + p + ": " + e.getMessage());
+                    throw new UsageException("cannot list folder " + p + ": " + IoReasons.of(e));
                 }
             } else {
                 files.add(p);

@@ -4,6 +4,7 @@ import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 
 import java.nio.file.Path;
+import java.util.List;
 
 /** The one line printed per reviewed submission. */
 final class SummaryLine {
@@ -11,7 +12,8 @@ final class SummaryLine {
     private SummaryLine() {
     }
 
-    static String of(Path file, Review review, Path json, Path html) {
+    /** The verdict, the counts and every file written. */
+    static String of(Path file, Review review, List<Path> written) {
         StringBuilder s = new StringBuilder();
         s.append(file).append(": ").append(review.verdict().label()).append(", ")
                 .append(review.summary().elements()).append(" element")
@@ -19,7 +21,7 @@ final class SummaryLine {
         for (Severity sev : Severity.values()) {
             s.append(' ').append(sev.label()).append(' ').append(review.summary().findings().get(sev));
         }
-        s.append(" -> ").append(json).append(", ").append(html);
+        s.append(" -> ").append(String.join(", ", written.stream().map(Path::toString).toList()));
         return s.toString();
     }
 }

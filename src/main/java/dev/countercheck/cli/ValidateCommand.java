@@ -18,11 +18,15 @@ import java.util.concurrent.Callable;
 /** {@code validate FILE...}: reads and validates submissions, writes nothing. */
 @Command(name = "validate", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Read and validate submissions, and the ruleset each names, without reviewing them."
-                + " Exit 0 when all are usable, 2 otherwise.")
+                + " Exit 0 when all are usable, 2 otherwise, 3 on an internal error.")
 public final class ValidateCommand implements Callable<Integer> {
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "Submission files (YAML or JSON) or folders of them.")
     List<Path> files;
+
+    @picocli.CommandLine.Option(names = "--rulesets-dir", paramLabel = "DIR",
+            description = "The checker's rulesets folder: ids are looked up here before the bundled rulesets.")
+    java.util.Optional<Path> rulesetsDir;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -39,11 +43,11 @@ public final class ValidateCommand implements Callable<Integer> {
             err.println("countercheck validate: " + e.getMessage());
             return ExitCodes.UNUSABLE;
         }
-        Rulesets rulesets = new Rulesets();
+        Rulesets rulesets = new Rulesets(rulesetsDir, err);
         for (Path file : inputs) {
             try {
                 Submission s = new SubmissionReader(ElementKinds.binders()).read(file);
-                rulesets.load(s.ruleset().orElse(Rulesets.DEFAULT), s.rulesetAt());
+                rulesets.of(s, java.util.Optional.empty());
                 long incomplete = s.elements().stream().filter(e -> e instanceof IncompleteElement).count();
                 out.println(file + ": valid, " + s.elements().size() + " element" + (s.elements().size() == 1 ? "" : "s")
                         + (incomplete > 0 ? " (" + incomplete + " incomplete)" : ""));

@@ -31,10 +31,10 @@ public final class ElementKinds {
         return ALL.stream().filter(k -> k.type().equals(type)).findFirst();
     }
 
-    /** What the rules of every kind may use and define, and {@code requiredParameters}. */
-    static RuleVocabulary vocabulary(Set<String> requiredParameters) {
+    /** What the rules of every kind may use and define, {@code requiredParameters} and the {@code findingKinds}. */
+    static RuleVocabulary vocabulary(Set<String> requiredParameters, Set<String> findingKinds) {
         Map<String, ElementRules> types = new LinkedHashMap<>();
         ALL.forEach(k -> types.put(k.type(), k.ruleVocabulary()));
-        return new RuleVocabulary(Collections.unmodifiableMap(types), requiredParameters);
+        return new RuleVocabulary(Collections.unmodifiableMap(types), requiredParameters, findingKinds);
     }
 }

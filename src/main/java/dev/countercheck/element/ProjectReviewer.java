@@ -4,8 +4,10 @@ import dev.countercheck.review.ClaimComparer;
 import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
+import dev.countercheck.review.FindingKind;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
+import dev.countercheck.review.SeverityPolicy;
 import dev.countercheck.review.Verdict;
 import dev.countercheck.ruleset.RuleVocabulary;
 import dev.countercheck.ruleset.Ruleset;
@@ -14,12 +16,14 @@ import dev.countercheck.submission.IncompleteElement;
 import dev.countercheck.submission.Submission;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.stream.Collectors;
 
 /** Reviews a whole submission: each element by the kind of its type, then the summary. */
 public final class ProjectReviewer {
@@ -28,11 +32,18 @@ public final class ProjectReviewer {
     public static final String GENERAL_CAUTION = "This review assists a competent engineer and does not replace one."
             + " Local codes, the applicable National Annex and licensed engineering practice govern.";
 
+    /** What the tool does not review at all, stated in every report beside the checks it did not do. */
+    public static final String OUT_OF_SCOPE = "This tool reviews pile caps only. It does not review other foundation"
+            + " elements (pad and strip footings, ground beams, rafts), the piles themselves (their design resistances"
+            + " are taken as submitted), the ground (bearing, settlement, pile group effects), or the columns and walls"
+            + " above; nothing about them is checked here.";
+
     /** Every ruleset parameter a review reads in Java; the ruleset loader refuses a chain that lacks one. */
     public static final Set<String> REQUIRED_PARAMETERS = requiredParameters();
 
     /** What a ruleset's rules may use and define, and the parameters the engine reads. */
-    public static final RuleVocabulary RULE_VOCABULARY = ElementKinds.vocabulary(REQUIRED_PARAMETERS);
+    public static final RuleVocabulary RULE_VOCABULARY = ElementKinds.vocabulary(REQUIRED_PARAMETERS,
+            Arrays.stream(FindingKind.values()).map(FindingKind::key).collect(Collectors.toUnmodifiableSet()));
 
     private final Review.ToolInfo tool;
 
@@ -41,12 +52,15 @@ public final class ProjectReviewer {
     }
 
     public Review review(Submission submission, Ruleset rules, String reviewDate) {
-        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance")));
+        SeverityPolicy severities = new SeverityPolicy(rules::severity);
+        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance")),
+                severities);
         List<ElementReview> elements = new ArrayList<>();
         for (ElementInput e : submission.elements()) {
             ElementKind<?> kind = ElementKinds.of(e.type()).orElseThrow(
                     () -> new IllegalStateException("no element kind of type " + e.type()));
-            elements.add(e instanceof IncompleteElement inc ? incomplete(inc) : review(kind, e, rules, assembler));
+            elements.add(e instanceof IncompleteElement inc ? incomplete(inc, severities)
+                    : review(kind, e, rules, assembler));
         }
         List<String> assumptions = new ArrayList<>();
         assumptions.add(GENERAL_CAUTION);
@@ -69,8 +83,10 @@ public final class ProjectReviewer {
         return kind.review(kind.elementClass().cast(element), rules, assembler);
     }
 
-    private static ElementReview incomplete(IncompleteElement e) {
-        Finding f = new Finding(e.id() + "/input/1", Severity.MINOR, "input",
+    /** An element that could not be reviewed: a finding of its own kind (major as recommended), never a pass. */
+    private static ElementReview incomplete(IncompleteElement e, SeverityPolicy severities) {
+        Finding f = new Finding(e.id() + "/input/" + FindingKind.NOT_REVIEWED.key(),
+                severities.of(FindingKind.NOT_REVIEWED), "input",
                 "The element could not be reviewed; missing: " + String.join(", ", e.missing()) + ".",
                 "submission format");
         return new ElementReview(e.id(), e.type(), e.description(), Verdict.INCOMPLETE, List.of(), List.of(f),

@@ -15,8 +15,11 @@ import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.ruleset.Variable;
 import dev.countercheck.submission.CheckCatalogue;
 
+import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -29,6 +32,9 @@ public final class RuleChecks {
 
     private static final Pattern NAME = Pattern.compile("(?<![\\w.\"])([A-Za-z_][A-Za-z0-9_]*)(?![\\w\"(])");
     private static final Pattern PLACEHOLDER = Pattern.compile("\\{([A-Za-z_][A-Za-z0-9_]*)}");
+    /** Formulas and messages split once at their names: the rulesets' texts are few, the elements many. */
+    private static final Map<String, String[]> FORMULAS = new ConcurrentHashMap<>();
+    private static final Map<String, String[]> MESSAGES = new ConcurrentHashMap<>();
 
     private RuleChecks() {
     }
@@ -75,7 +81,8 @@ public final class RuleChecks {
                 if (ex.bool(r.that(), values)) {
                     b.pass();
                 } else {
-                    b.fail(Severity.fromLabel(r.severity()), fill(r.message(), values) + " (" + r.clause() + ")");
+                    b.failRequirement(Severity.fromLabel(r.severity()), r.finding(),
+                            fill(r.message(), values) + " (" + r.clause() + ")");
                 }
             }
             for (CheckDef.CautionDef c : def.cautions()) {
@@ -92,14 +99,36 @@ public final class RuleChecks {
 
     /** The formula with each known value put in for its name (names of no value stay as written). */
     static String substitute(String formula, Map<String, Object> values) {
-        return NAME.matcher(formula).replaceAll(m -> Matcher.quoteReplacement(
-                show(values.get(m.group(1)), m.group(1), true)));
+        String[] parts = FORMULAS.computeIfAbsent(formula, f -> split(f, NAME));
+        StringBuilder out = new StringBuilder(formula.length() + 16);
+        for (int i = 0; i < parts.length; i++) {
+            out.append(i % 2 == 0 ? parts[i] : show(values.get(parts[i]), parts[i], true));
+        }
+        return out.toString();
     }
 
     /** A message with each {name} replaced by its value. */
     static String fill(String template, Map<String, Object> values) {
-        return PLACEHOLDER.matcher(template).replaceAll(m -> Matcher.quoteReplacement(
-                show(values.get(m.group(1)), "{" + m.group(1) + "}", false)));
+        String[] parts = MESSAGES.computeIfAbsent(template, t -> split(t, PLACEHOLDER));
+        StringBuilder out = new StringBuilder(template.length() + 16);
+        for (int i = 0; i < parts.length; i++) {
+            out.append(i % 2 == 0 ? parts[i] : show(values.get(parts[i]), "{" + parts[i] + "}", false));
+        }
+        return out.toString();
+    }
+
+    /** The text around each match of {@code pattern} (even places) and the names it matched (odd places). */
+    private static String[] split(String text, Pattern pattern) {
+        List<String> parts = new ArrayList<>();
+        Matcher m = pattern.matcher(text);
+        int last = 0;
+        while (m.find()) {
+            parts.add(text.substring(last, m.start()));
+            parts.add(m.group(1));
+            last = m.end();
+        }
+        parts.add(text.substring(last));
+        return parts.toArray(new String[0]);
     }
 
     /** A value as a trace or a message shows it: numbers to four figures, text quoted in formulas. */

@@ -256,7 +256,32 @@ public final class TreeParser {
             problems.add(at, path, tooLong("text", value.length(), MAX_TEXT_CHARS));
             return Optional.empty();
         }
+        int hidden = hiddenCharacter(value);
+        if (hidden >= 0) {
+            problems.add(at, path, String.format("the text holds the character U+%04X, a control or"
+                    + " direction-changing character, which a submission does not accept (it could hide or reorder"
+                    + " what a report shows): remove it", value.codePointAt(hidden)));
+        }
         return Optional.of(new ScalarNode(at, Kind.TEXT, value));
+    }
+
+    /**
+     * Where {@code text} holds a character that no text of a submission needs and that could hide
+     * or reorder what a report or terminal shows: a control character other than tab, line feed and
+     * carriage return (written as an escape in JSON, {@code \\u001b}, or in double-quoted YAML,
+     * {@code \e}), or a bidirectional control; -1 when it holds none.
+     */
+    static int hiddenCharacter(String text) {
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            boolean control = Character.isISOControl(c) && c != '\t' && c != '\n' && c != '\r';
+            boolean bidi = c == '\u061C' || c == '\u200E' || c == '\u200F' || (c >= '\u202A' && c <= '\u202E')
+                    || (c >= '\u2066' && c <= '\u2069');
+            if (control || bidi) {
+                return i;
+            }
+        }
+        return -1;
     }
 
     private static String tooLong(String what, int length, int limit) {

@@ -1,6 +1,8 @@
 package dev.countercheck.report;
 
 import dev.countercheck.eurocode.Step;
+import dev.countercheck.responses.Response;
+import dev.countercheck.responses.ResponseStatus;
 import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.CheckStatus;
 import dev.countercheck.review.ClaimComparison;
@@ -12,8 +14,12 @@ import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 import dev.countercheck.review.Value;
 import dev.countercheck.review.Verdict;
+import dev.countercheck.revision.FindingChange;
+import dev.countercheck.revision.RevisionComparison;
+import dev.countercheck.round.ReviewRound;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -32,10 +38,11 @@ import java.util.stream.IntStream;
  *
  * @param pageHeading the running head of printed pages, already a quoted CSS string
  * @param cautions    the elements' cautions, for the closing section, elements without any left out
+ * @param round       the sign-off, the comparison with the previous revision, and what was not checked
  */
 public record HtmlModel(Header header, String pageHeading, List<Count> verdictCounts, List<Count> severityCounts,
                         List<String> assumptions, List<FindingRow> register, List<ElementView> elements,
-                        List<ElementCautions> cautions) {
+                        List<ElementCautions> cautions, RoundView round) {
 
     public record Header(String title, String reference, String revision, String preparedBy, String submissionDate,
                          String file, String sha256, String rulesetId, String rulesetTitle, String rulesetSha256,
@@ -46,9 +53,45 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     public record Count(String label, int count) {
     }
 
-    /** A finding; {@code checkAnchor} is its check's place in the report, or empty when the check is not listed. */
+    /** Every critical and major finding, in the register's order: page one lists them. */
+    public List<FindingRow> problems() {
+        return elements.stream().flatMap(e -> e.problems().stream()).toList();
+    }
+
+    /**
+     * A finding; {@code checkAnchor} is its check's place in the report, or empty when the check is not listed.
+     *
+     * @param response       the designer's response read from the sheet, or empty
+     * @param responseStatus agreed, disputed or will-revise, or empty
+     * @param change         new, still-open or changed against the previous revision, or empty without one
+     */
     public record FindingRow(String id, String elementId, String elementAnchor, String severity, String checkAnchor,
-                             String basis, String message) {
+                             String basis, String message, String response, String responseStatus, String change) {
+    }
+
+    /**
+     * What the round adds to page one and to the closing sections.
+     *
+     * @param previous     the previous revision's label, or empty when there was no comparison
+     * @param changeCounts closed, still-open, changed, new
+     * @param closed       the findings of the previous revision that are closed now
+     * @param orphans      responses whose finding this review no longer raises
+     * @param notChecked   every check not performed or not applicable, with its reason
+     * @param outOfScope   what the tool does not review at all, in words (empty: not stated)
+     */
+    public record RoundView(String checker, String reviewRef, String previous, List<Count> changeCounts,
+                            List<ClosedRow> closed, List<OrphanRow> orphans, List<NotCheckedRow> notChecked,
+                            String outOfScope) {
+    }
+
+    public record ClosedRow(String id, String elementId, String severity, String message) {
+    }
+
+    public record OrphanRow(String id, String where, String response, String status) {
+    }
+
+    public record NotCheckedRow(String elementId, String elementAnchor, String checkId, String checkAnchor,
+                                String status, String reason) {
     }
 
     /**
@@ -60,14 +103,40 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     public record ElementView(String anchor, String number, String id, String type, String description,
                               String verdict, List<CheckView> checks, List<FindingRow> findings, int cautionCount,
                               List<DrawingView> drawings) {
+
+        /** The checks with a utilisation, largest first, then the others in their order. */
+        public List<CheckView> checksByUtilisation() {
+            List<CheckView> sorted = new ArrayList<>(checks);
+            sorted.sort(Comparator.comparing((CheckView c) -> c.utilisationValue().isEmpty())
+                    .thenComparing(c -> -c.utilisationValue().orElse(0.0)));
+            return sorted;
+        }
+
+        /** The check with the largest utilisation, as a list of one, or none when no check has one. */
+        public List<CheckView> governing() {
+            return checksByUtilisation().stream().filter(c -> c.utilisationValue().isPresent()).limit(1).toList();
+        }
+
+        /** Every critical and major finding of the element, for page one. */
+        public List<FindingRow> problems() {
+            return findings.stream().filter(f -> f.severity().equals(Severity.CRITICAL.label())
+                    || f.severity().equals(Severity.MAJOR.label())).toList();
+        }
     }
 
     /**
      * @param failing     whether the check failed (to mark its row)
      * @param utilisation two decimals rounded up, or empty
+     * @param bar         the utilisation bar's width in percent of its track, or empty
+     * @param over        whether the utilisation exceeds 1 (the bar is then full and marked)
      */
     public record CheckView(String anchor, String id, String title, String basis, String status, boolean failing,
-                            String utilisation, String reason, List<QuantityView> quantities, List<StepView> trace) {
+                            String utilisation, String bar, boolean over, String reason, List<QuantityView> quantities,
+                            List<StepView> trace) {
+
+        Optional<Double> utilisationValue() {
+            return utilisation.isEmpty() ? Optional.empty() : Optional.of(Double.parseDouble(utilisation));
+        }
     }
 
     /**
@@ -99,9 +168,9 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     public record ElementCautions(String elementId, String anchor, List<String> cautions) {
     }
 
-    static HtmlModel of(Review review) {
+    static HtmlModel of(Review review, ReviewRound round) {
         List<ElementView> elements = IntStream.range(0, review.elements().size())
-                .mapToObj(i -> element(review.elements().get(i), i + 1))
+                .mapToObj(i -> element(review.elements().get(i), i + 1, round))
                 .toList();
         List<FindingRow> register = elements.stream().flatMap(e -> e.findings().stream()).toList();
         List<ElementCautions> cautions = IntStream.range(0, review.elements().size())
@@ -110,7 +179,29 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                         review.elements().get(i).cautions()))
                 .toList();
         return new HtmlModel(header(review), PageHeading.css(review), verdictCounts(review.summary()),
-                severityCounts(review.summary()), review.assumptions(), register, elements, cautions);
+                severityCounts(review.summary()), review.assumptions(), register, elements, cautions,
+                roundView(round, elements));
+    }
+
+    private static RoundView roundView(ReviewRound round, List<ElementView> elements) {
+        List<Count> counts = round.revision().map(r -> r.counts().entrySet().stream()
+                .map(c -> new Count(c.getKey().label(), c.getValue())).toList()).orElse(List.of());
+        List<ClosedRow> closed = round.revision().map(r -> r.entries().stream()
+                .filter(e -> e.change() == FindingChange.CLOSED)
+                .map(e -> new ClosedRow(e.id(), e.latest().element(), e.latest().severity(), e.latest().message()))
+                .toList()).orElse(List.of());
+        List<OrphanRow> orphans = round.responses().orphans().stream()
+                .map(r -> new OrphanRow(r.findingId(), r.where(), r.text(),
+                        r.status().map(ResponseStatus::label).orElse("")))
+                .toList();
+        List<NotCheckedRow> notChecked = elements.stream().flatMap(e -> e.checks().stream()
+                .filter(c -> c.status().equals(CheckStatus.NOT_CHECKED.label())
+                        || c.status().equals(CheckStatus.NOT_APPLICABLE.label()))
+                .map(c -> new NotCheckedRow(e.id(), e.anchor(), c.id(), c.anchor(), c.status(), c.reason())))
+                .toList();
+        return new RoundView(round.signOff().checker().orElse(""), round.signOff().reviewRef().orElse(""),
+                round.revision().map(RevisionComparison::previous).orElse(""), counts, closed, orphans, notChecked,
+                round.outOfScope());
     }
 
     private static Header header(Review review) {
@@ -135,13 +226,13 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 .toList();
     }
 
-    private static ElementView element(ElementReview element, int position) {
+    private static ElementView element(ElementReview element, int position, ReviewRound round) {
         String anchor = "e" + position;
         List<CheckView> checks = IntStream.range(0, element.checks().size())
                 .mapToObj(i -> check(element.checks().get(i), anchor + "-c" + (i + 1)))
                 .toList();
         List<FindingRow> findings = element.findings().stream()
-                .map(f -> findingRow(f, element.id(), anchor, checks))
+                .map(f -> findingRow(f, element.id(), anchor, checks, round))
                 .toList();
         List<DrawingView> drawings = element.drawing().map(d -> List.of(drawing(anchor, element, d)))
                 .orElse(List.of());
@@ -162,14 +253,17 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     }
 
     private static FindingRow findingRow(Finding finding, String elementId, String elementAnchor,
-                                         List<CheckView> checks) {
+                                         List<CheckView> checks, ReviewRound round) {
         String checkAnchor = checks.stream()
                 .filter(c -> c.id().equals(finding.check()))
                 .map(CheckView::anchor)
                 .findFirst()
                 .orElse("");
+        Optional<Response> response = round.responses().to(finding.id());
         return new FindingRow(finding.id(), elementId, elementAnchor, finding.severity().label(), checkAnchor,
-                finding.basis(), finding.message());
+                finding.basis(), finding.message(), response.map(Response::text).orElse(""),
+                response.flatMap(Response::status).map(ResponseStatus::label).orElse(""),
+                round.revision().flatMap(r -> r.entry(finding.id())).map(e -> e.change().label()).orElse(""));
     }
 
     private static CheckView check(CheckResult check, String anchor) {
@@ -179,9 +273,11 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
         List<StepView> trace = IntStream.range(0, check.trace().size())
                 .mapToObj(i -> step(check.trace().get(i), anchor + "-s" + (i + 1), i + 1))
                 .toList();
+        String bar = check.utilisation().isPresent() ? ReportNumbers.barPercent(check.utilisation().getAsDouble()) : "";
+        boolean over = check.utilisation().isPresent() && check.utilisation().getAsDouble() > 1;
         return new CheckView(anchor, check.id(), check.title(), check.basis(), check.status().label(),
-                check.status() == CheckStatus.FAIL, utilisation, text(check.reason()), quantities(check, trace),
-                trace);
+                check.status() == CheckStatus.FAIL, utilisation, bar, over, text(check.reason()),
+                quantities(check, trace), trace);
     }
 
     /**

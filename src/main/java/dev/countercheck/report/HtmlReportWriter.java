@@ -1,6 +1,7 @@
 package dev.countercheck.report;
 
 import dev.countercheck.review.Review;
+import dev.countercheck.round.ReviewRound;
 import freemarker.core.HTMLOutputFormat;
 import freemarker.core.TemplateClassResolver;
 import freemarker.template.Configuration;
@@ -24,11 +25,13 @@ public final class HtmlReportWriter {
     static final String TEMPLATE = "review.ftlh";
     static final String INDEX_TEMPLATE = "index.ftlh";
 
-    private final Configuration freemarker;
+    /** Configured once; it keeps each template compiled after its first use (safe to share between threads). */
+    private static final Configuration FREEMARKER = configuration();
 
-    public HtmlReportWriter() {
-        freemarker = new Configuration(Configuration.VERSION_2_3_34);
+    private static Configuration configuration() {
+        Configuration freemarker = new Configuration(Configuration.VERSION_2_3_34);
         freemarker.setClassForTemplateLoading(HtmlReportWriter.class, "/templates");
+        freemarker.setTemplateUpdateDelayMilliseconds(Long.MAX_VALUE);
         freemarker.setDefaultEncoding("UTF-8");
         freemarker.setOutputFormat(HTMLOutputFormat.INSTANCE);
         freemarker.setLocale(Locale.ROOT);
@@ -39,18 +42,24 @@ public final class HtmlReportWriter {
         freemarker.setWrapUncheckedExceptions(true);
         freemarker.setFallbackOnNullLoopVariable(false);
         freemarker.setNewBuiltinClassResolver(TemplateClassResolver.ALLOWS_NOTHING_RESOLVER);
+        return freemarker;
     }
 
-    /** The HTML page for {@code review}. */
+    /** The HTML page for {@code review} on its own: no sign-off names, responses or previous revision. */
     public String write(Review review) {
-        return render(TEMPLATE, HtmlModel.of(review));
+        return write(review, ReviewRound.none(""));
+    }
+
+    /** The HTML page for {@code review} in its round: sign-off, responses, comparison with the previous revision. */
+    public String write(Review review, ReviewRound round) {
+        return render(TEMPLATE, HtmlModel.of(review, round));
     }
 
     /** The page of template {@code name} for {@code model}. */
     String render(String name, Object model) {
         StringWriter out = new StringWriter();
         try {
-            Template template = freemarker.getTemplate(name);
+            Template template = FREEMARKER.getTemplate(name);
             template.process(model, out);
         } catch (IOException | TemplateException e) {
             // The templates ship inside the jar and their models are built here: failing is a bug in this package.

@@ -10,6 +10,7 @@ import com.openhtmltopdf.svgsupport.BatikSVGDrawer.SvgExternalResourceMode;
 import com.openhtmltopdf.svgsupport.BatikSVGDrawer.SvgScriptMode;
 import com.openhtmltopdf.util.XRLog;
 import dev.countercheck.review.Review;
+import dev.countercheck.round.ReviewRound;
 import org.apache.pdfbox.cos.COSArray;
 import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.cos.COSString;
@@ -84,13 +85,23 @@ public final class PdfReportWriter {
         return render(html.write(review), review);
     }
 
+    /** The PDF bytes of the report of {@code review} in its round. */
+    public byte[] write(Review review, ReviewRound round) {
+        return render(html.write(review, round), review);
+    }
+
     byte[] render(String page, Review review) {
         Document html = Jsoup.parse(page);
         addBookmarks(html);
         org.w3c.dom.Document dom = new W3CDom().fromJsoup(html);
-        Path font = null;
+        Path font;
         try {
             font = fontFile();
+        } catch (IOException e) {
+            // the machine's temporary folder is full or unusable: a condition to report, not a fault of the tool
+            throw new UncheckedIOException("the temporary folder cannot be used for the PDF's font", e);
+        }
+        try {
             PdfRendererBuilder builder = new PdfRendererBuilder()
                     .withW3cDocument(dom, null)
                     .useSVGDrawer(new BatikSVGDrawer(SvgScriptMode.SECURE, SvgExternalResourceMode.SECURE))

@@ -68,6 +68,11 @@ public final class ReportIndex {
         entries.add(new Entry(row, Optional.empty(), Map.of()));
     }
 
+    /** Whether any submission was reviewed; an index of none is not written. */
+    public boolean anyReviewed() {
+        return entries.stream().anyMatch(e -> e.verdict().isPresent());
+    }
+
     /** The index page. */
     public String html() {
         return new HtmlReportWriter().render(HtmlReportWriter.INDEX_TEMPLATE, view());

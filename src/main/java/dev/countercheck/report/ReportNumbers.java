@@ -109,4 +109,14 @@ final class ReportNumbers {
     static String utilisation(double value) {
         return BigDecimal.valueOf(value).setScale(UTILISATION_DECIMALS, RoundingMode.CEILING).toPlainString();
     }
+
+    /**
+     * The width of a utilisation bar in percent of its track (the track stands for 0 to 1): the utilisation as
+     * printed, times 100, at most 100 (a bar past its track is marked as over, not drawn longer).
+     */
+    static String barPercent(double value) {
+        BigDecimal printed = BigDecimal.valueOf(value).setScale(UTILISATION_DECIMALS, RoundingMode.CEILING);
+        return printed.min(BigDecimal.ONE).max(BigDecimal.ZERO).movePointRight(2).stripTrailingZeros()
+                .toPlainString();
+    }
 }

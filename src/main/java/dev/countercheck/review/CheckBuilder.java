@@ -66,12 +66,12 @@ public final class CheckBuilder {
 
     /**
      * Sets pass or fail from {@code demand ≤ capacity} (equality passes), with the utilisation
-     * demand/capacity. A failure raises a finding of {@code failSeverity} with {@code failMessage}.
+     * demand/capacity. A failure raises a finding of {@code kind} named {@code slug} with {@code failMessage}.
      */
-    public CheckBuilder require(double demand, double capacity, Severity failSeverity, String failMessage) {
+    public CheckBuilder require(double demand, double capacity, FindingKind kind, String slug, String failMessage) {
         utilisation(capacity > 0 ? demand / capacity : (demand > 0 ? Double.POSITIVE_INFINITY : 0));
         if (demand > capacity) {
-            fail(failSeverity, failMessage);
+            fail(kind, slug, failMessage);
         } else if (status != CheckStatus.FAIL) {
             status = CheckStatus.PASS;
             reason = Optional.empty();
@@ -88,10 +88,20 @@ public final class CheckBuilder {
     }
 
     /** Marks the check failed with a finding; a later {@link #require} cannot turn it back to pass. */
-    public CheckBuilder fail(Severity severity, String message) {
+    public CheckBuilder fail(FindingKind kind, String slug, String message) {
+        return failWith(new DraftFinding(slug, kind, Optional.empty(), spec.id(), message, spec.basis()));
+    }
+
+    /** Marks the check failed by a ruleset requirement, with the severity the requirement declares. */
+    public CheckBuilder failRequirement(Severity declared, String slug, String message) {
+        return failWith(new DraftFinding(slug, FindingKind.RULE, Optional.of(declared), spec.id(), message,
+                spec.basis()));
+    }
+
+    private CheckBuilder failWith(DraftFinding finding) {
         status = CheckStatus.FAIL;
-        failures.add(message);
-        findings.add(new DraftFinding(severity, spec.id(), message, spec.basis()));
+        failures.add(finding.message());
+        findings.add(finding);
         return this;
     }
 
@@ -116,9 +126,13 @@ public final class CheckBuilder {
         return this;
     }
 
-    /** A finding that does not change the status (a note, a remark on geometry). */
-    public CheckBuilder finding(Severity severity, String message) {
-        findings.add(new DraftFinding(severity, spec.id(), message, spec.basis()));
+    /**
+     * A finding beside the comparison: a remark leaves the status as it is; a rule not met or a
+     * capacity exceeded fails a check that would otherwise pass (a check never reads pass while it
+     * raises a serious finding about its own subject).
+     */
+    public CheckBuilder finding(FindingKind kind, String slug, String message) {
+        findings.add(new DraftFinding(slug, kind, Optional.empty(), spec.id(), message, spec.basis()));
         return this;
     }
 
@@ -138,7 +152,18 @@ public final class CheckBuilder {
         return Num.f(value) + ("-".equals(unit) ? "" : " " + unit);
     }
 
+    private static boolean failsItsCheck(DraftFinding f) {
+        return f.kind() == FindingKind.CAPACITY || f.kind() == FindingKind.RULE
+                || f.declared().map(s -> s.atLeast(Severity.MAJOR)).orElse(false);
+    }
+
     public CheckOutcome build() {
+        if (status == CheckStatus.PASS) {
+            findings.stream().filter(CheckBuilder::failsItsCheck).forEach(f -> {
+                status = CheckStatus.FAIL;
+                failures.add(f.message());
+            });
+        }
         Map<String, Value> ordered = new LinkedHashMap<>();
         spec.quantities().stream().filter(q -> values.containsKey(q.name()))
                 .forEach(q -> ordered.put(q.name(), values.get(q.name())));

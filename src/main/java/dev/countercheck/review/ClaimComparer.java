@@ -1,7 +1,6 @@
 package dev.countercheck.review;
 
 import dev.countercheck.submission.CheckCatalogue.CheckSpec;
-import dev.countercheck.submission.CheckCatalogue.Kind;
 import dev.countercheck.submission.CheckCatalogue.QuantitySpec;
 import dev.countercheck.submission.CheckCatalogue.SafeSide;
 import dev.countercheck.submission.Claim;
@@ -39,19 +38,28 @@ public final class ClaimComparer {
         return new ClaimComparison(claim.quantity(), claim.value(), computed, diff, verdict);
     }
 
-    /** The finding a disagreeing claim raises, or none when it agrees. */
+    /** The slug of every finding about a claim of {@code quantity}: {@code claim-} and the quantity's name. */
+    public static String slug(String quantity) {
+        return "claim-" + Slugs.of(quantity);
+    }
+
+    /**
+     * The finding a disagreeing claim raises, or none when it agrees: unconservative or conservative, each
+     * with the severity the ruleset gives that kind (whether the check itself passes does not matter: a
+     * failing check raises its own finding).
+     */
     public java.util.Optional<DraftFinding> findingFor(ClaimComparison c, CheckSpec check, QuantitySpec q) {
         if (c.verdict() == ClaimVerdict.AGREES) {
             return java.util.Optional.empty();
         }
         boolean unsafe = c.verdict() == ClaimVerdict.DIFFERS_UNCONSERVATIVE;
-        Severity severity = !unsafe ? Severity.MINOR
-                : check.kind() == Kind.STRENGTH ? Severity.CRITICAL : Severity.MAJOR;
         String percent = String.format(java.util.Locale.ROOT, "%.1f %%", Math.abs(c.difference()) * 100);
         String direction = c.claimed() > c.computed() ? "above" : "below";
         String message = "Claimed " + check.id() + "." + q.name() + " = " + CheckBuilder.show(c.claimed(), q.unit())
                 + " is " + percent + " " + direction + " the recomputed " + CheckBuilder.show(c.computed(), q.unit())
                 + (unsafe ? " (unconservative)." : " (conservative).");
-        return java.util.Optional.of(new DraftFinding(severity, check.id(), message, check.basis()));
+        return java.util.Optional.of(new DraftFinding(slug(q.name()),
+                unsafe ? FindingKind.CLAIM_UNCONSERVATIVE : FindingKind.CLAIM_CONSERVATIVE,
+                java.util.Optional.empty(), check.id(), message, check.basis()));
     }
 }

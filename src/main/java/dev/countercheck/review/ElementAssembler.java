@@ -8,22 +8,26 @@ import dev.countercheck.submission.Claim;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 
 
 /**
  * Turns the outcomes of an element's checks and the designer's claims into the element's review:
- * claims compared, findings numbered with stable ids, verdict decided. Shared by every element type.
+ * claims compared, findings given stable ids and their severities, verdict decided. Shared by every element type.
  */
 public final class ElementAssembler {
 
     private final ClaimComparer comparer;
+    private final SeverityPolicy severities;
 
-    public ElementAssembler(ClaimComparer comparer) {
+    public ElementAssembler(ClaimComparer comparer, SeverityPolicy severities) {
         this.comparer = comparer;
+        this.severities = severities;
     }
 
     /** @param catalogue the checks of the element's type, which its claims name */
@@ -31,7 +35,8 @@ public final class ElementAssembler {
                                   List<Claim> claims, List<String> elementCautions, Optional<Drawing> drawing) {
         Map<String, CheckResult> results = new LinkedHashMap<>();
         Map<String, List<DraftFinding>> drafts = new LinkedHashMap<>();
-        List<String> cautions = new ArrayList<>(elementCautions);
+        List<String> cautions = new ArrayList<>();
+        elementCautions.stream().filter(c -> !cautions.contains(c)).forEach(cautions::add);
         for (CheckOutcome o : outcomes) {
             results.put(o.result().id(), o.result());
             drafts.computeIfAbsent(o.result().id(), k -> new ArrayList<>()).addAll(o.findings());
@@ -45,7 +50,8 @@ public final class ElementAssembler {
             Value computed = r == null ? null : r.values().get(claim.quantity());
             List<DraftFinding> list = drafts.computeIfAbsent(claim.checkId(), k -> new ArrayList<>());
             if (computed == null) {
-                list.add(new DraftFinding(Severity.NOTE, claim.checkId(), "Claimed " + claim.checkId() + "."
+                list.add(new DraftFinding(ClaimComparer.slug(claim.quantity()), FindingKind.CLAIM_NOT_COMPARED,
+                        Optional.empty(), claim.checkId(), "Claimed " + claim.checkId() + "."
                         + claim.quantity() + " = " + CheckBuilder.show(claim.value(), q.unit())
                         + " was not compared: " + notComparedReason(r), spec.basis()));
                 continue;
@@ -56,7 +62,7 @@ public final class ElementAssembler {
         }
         List<CheckResult> checks = results.values().stream()
                 .map(r -> withClaims(r, compared.getOrDefault(r.id(), List.of()))).toList();
-        List<Finding> findings = number(id, drafts);
+        List<Finding> findings = identify(id, drafts);
         return new ElementReview(id, catalogue.elementType(), description, verdict(checks, findings), checks, findings,
                 List.copyOf(cautions), drawing);
     }
@@ -74,14 +80,21 @@ public final class ElementAssembler {
                 List.copyOf(claims), r.trace());
     }
 
-    /** Ids {@code <element>/<check>/<n>}, n counting from 1 within a check in the order raised. */
-    private static List<Finding> number(String elementId, Map<String, List<DraftFinding>> drafts) {
+    /**
+     * Ids {@code <element>/<check>/<slug>}: the slug names what is wrong, so that fixing one finding never
+     * renames another. Two findings with one id are a fault of the reviewer, never of the input.
+     */
+    private List<Finding> identify(String elementId, Map<String, List<DraftFinding>> drafts) {
         List<Finding> out = new ArrayList<>();
+        Set<String> ids = new HashSet<>();
         drafts.forEach((check, list) -> {
-            for (int i = 0; i < list.size(); i++) {
-                DraftFinding d = list.get(i);
-                out.add(new Finding(elementId + "/" + check + "/" + (i + 1), d.severity(), check, d.message(),
-                        d.basis()));
+            for (DraftFinding d : list) {
+                String findingId = elementId + "/" + check + "/" + d.slug();
+                if (!ids.add(findingId)) {
+                    throw new IllegalStateException("two findings of " + elementId + " are both " + findingId);
+                }
+                out.add(new Finding(findingId, d.declared().orElseGet(() -> severities.of(d.kind())), check,
+                        d.message(), d.basis()));
             }
         });
         out.sort(Comparator.comparing(Finding::severity));

@@ -3,7 +3,8 @@ package dev.countercheck.review;
 /**
  * Something the designer must answer.
  *
- * @param id    stable across runs of the same element and check: {@code <element>/<check>/<n>}
+ * @param id    stable across runs and revisions: {@code <element>/<check>/<slug>}, the slug naming what is
+ *              wrong, never a running number
  * @param check the check id it belongs to
  * @param basis the clause (or "common practice") it rests on
  */

@@ -13,6 +13,15 @@ import java.util.Optional;
 public record Review(ToolInfo tool, SubmissionInfo submission, RulesetInfo ruleset, String reviewDate,
                      Verdict verdict, List<ElementReview> elements, Summary summary, List<String> assumptions) {
 
+    /**
+     * Whether a gate at {@code threshold} passes: no finding at or above it and every element reviewed
+     * (an incomplete element fails the gate whatever the threshold: a gate never passes what it did not check).
+     */
+    public boolean passesGate(Severity threshold) {
+        return elements.stream().noneMatch(e -> e.verdict() == Verdict.INCOMPLETE
+                || e.findings().stream().anyMatch(f -> f.severity().atLeast(threshold)));
+    }
+
     public record ToolInfo(String name, String version) {
     }
 

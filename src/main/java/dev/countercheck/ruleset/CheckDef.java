@@ -36,10 +36,12 @@ public record CheckDef(String id, List<String> elementTypes, String scope, Optio
      * A requirement: {@code that} must be true. When it is not, the check fails with a finding of
      * {@code severity} and {@code message}, in which {@code {name}} is replaced by the value of name.
      *
+     * @param finding     what is wrong when it fails, the last part of the finding's id ({@code cover-bottom}):
+     *                    the requirement's {@code finding}, else the first name in {@code that}, hyphenated
      * @param utilisation a number expression (demand/capacity) to report, when given
      */
-    public record RequirementDef(String that, String severity, Optional<String> utilisation, String message,
-                                 String clause, SourceLocation location) {
+    public record RequirementDef(String that, String finding, String severity, Optional<String> utilisation,
+                                 String message, String clause, SourceLocation location) {
     }
 
     /** The id for one subject: {@code {dir}} replaced. */

@@ -6,6 +6,7 @@ import dev.countercheck.input.Node.ListNode;
 import dev.countercheck.input.Node.MapNode;
 import dev.countercheck.input.Node.ScalarNode;
 import dev.countercheck.input.Problems;
+import dev.countercheck.input.Shown;
 import dev.countercheck.input.Suggestions;
 import dev.countercheck.ruleset.CheckDef.DerivedDef;
 import dev.countercheck.ruleset.CheckDef.RequirementDef;
@@ -13,8 +14,11 @@ import dev.countercheck.ruleset.CheckDef.RequirementDef;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /** Reads the {@code tables:} and {@code checks:} blocks of one ruleset file into definitions. */
 final class RuleDefinitions {
@@ -25,8 +29,9 @@ final class RuleDefinitions {
             "values", "requirements", "cautions");
     private static final List<String> CAUTION_KEYS = List.of("when", "text");
     private static final List<String> DERIVED_KEYS = List.of("symbol", "formula", "unit", "clause");
-    private static final List<String> REQUIREMENT_KEYS = List.of("that", "severity", "utilisation", "message",
-            "clause");
+    private static final List<String> REQUIREMENT_KEYS = List.of("that", "finding", "severity", "utilisation",
+            "message", "clause");
+    private static final Pattern FIRST_NAME = Pattern.compile("[A-Za-z_][A-Za-z0-9_]*");
 
     private final Problems problems;
     private final String origin;
@@ -91,7 +96,7 @@ final class RuleDefinitions {
                 String dPath = path + ".derived." + d.key();
                 mapping(d.value(), dPath).ifPresent(m -> {
                     unknownKeys(m, dPath, DERIVED_KEYS);
-                    derived.add(new DerivedDef(d.key(), text(m, "symbol").orElse(d.key()), required(m, "formula", dPath),
+                    derived.add(new DerivedDef(d.key(), text(m, "symbol").orElse(d.key()), expression(m, "formula", dPath),
                             required(m, "unit", dPath), required(m, "clause", dPath), d.keyLocation()));
                 });
             }
@@ -102,9 +107,10 @@ final class RuleDefinitions {
                     String rPath = path + ".requirements[" + i + "]";
                     mapping(list.items().get(i), rPath).ifPresent(m -> {
                         unknownKeys(m, rPath, REQUIREMENT_KEYS);
-                        requirements.add(new RequirementDef(required(m, "that", rPath), required(m, "severity", rPath),
-                                text(m, "utilisation"), required(m, "message", rPath), required(m, "clause", rPath),
-                                m.location()));
+                        String that = expression(m, "that", rPath);
+                        requirements.add(new RequirementDef(that, text(m, "finding").orElseGet(() -> firstName(that)),
+                                required(m, "severity", rPath), optionalExpression(m, "utilisation", rPath),
+                                required(m, "message", rPath), required(m, "clause", rPath), m.location()));
                     });
                 }
             } else if (reqs.isPresent()) {
@@ -117,7 +123,7 @@ final class RuleDefinitions {
                     String cPath = path + ".cautions[" + i + "]";
                     mapping(list.items().get(i), cPath).ifPresent(m -> {
                         unknownKeys(m, cPath, CAUTION_KEYS);
-                        cautions.add(new CheckDef.CautionDef(required(m, "when", cPath), required(m, "text", cPath),
+                        cautions.add(new CheckDef.CautionDef(expression(m, "when", cPath), required(m, "text", cPath),
                                 m.location()));
                     });
                 }
@@ -129,7 +135,8 @@ final class RuleDefinitions {
                 problems.add(c.location(), path, "'applies_to' is missing: every check names the element types it"
                         + " applies to, e.g. [pile-cap]");
             }
-            into.put(e.key(), new CheckDef(e.key(), types, required(c, "scope", path), text(c, "applies_when"),
+            into.put(e.key(), new CheckDef(e.key(), types, required(c, "scope", path),
+                    optionalExpression(c, "applies_when", path),
                     text(c, "not_applicable").orElse("the rule's applies_when condition is false"), derived,
                     texts(c.entry("values").map(Entry::value), path + ".values"), requirements, cautions, origin,
                     e.keyLocation()));
@@ -147,7 +154,7 @@ final class RuleDefinitions {
     private void unknownKeys(MapNode map, String path, List<String> known) {
         for (Entry e : map.entries()) {
             if (!known.contains(e.key())) {
-                problems.add(e.keyLocation(), path + "." + e.key(), "unknown key '" + e.key() + "'"
+                problems.add(e.keyLocation(), path + "." + e.key(), "unknown key '" + Shown.text(e.key()) + "'"
                         + Suggestions.hint(e.key(), known));
             }
         }
@@ -165,6 +172,23 @@ final class RuleDefinitions {
                     + ("clause".equals(key) ? ": every rule names the clause it rests on" : ""));
         }
         return value.orElse("");
+    }
+
+    /** A required expression, refused at its place when it exceeds {@link ExpressionBounds}. */
+    private String expression(MapNode map, String key, String path) {
+        String text = required(map, key, path);
+        bounded(map, key, path);
+        return text;
+    }
+
+    private Optional<String> optionalExpression(MapNode map, String key, String path) {
+        bounded(map, key, path);
+        return text(map, key);
+    }
+
+    private void bounded(MapNode map, String key, String path) {
+        map.entry(key).ifPresent(e -> text(map, key).flatMap(ExpressionBounds::problem)
+                .ifPresent(why -> problems.add(e.value().location(), path + "." + key, why)));
     }
 
     private List<String> texts(Optional<Node> node, String path) {
@@ -205,4 +229,10 @@ final class RuleDefinitions {
         return out;
     }
 
+
+    /** The default finding name of a requirement: the first name its condition tests, hyphenated. */
+    private static String firstName(String that) {
+        Matcher m = FIRST_NAME.matcher(that);
+        return m.find() ? m.group().toLowerCase(Locale.ROOT).replace('_', '-') : "requirement";
+    }
 }

@@ -5,6 +5,7 @@ import com.ezylang.evalex.Expression;
 import com.ezylang.evalex.config.ExpressionConfiguration;
 import com.ezylang.evalex.data.EvaluationValue;
 import com.ezylang.evalex.functions.FunctionIfc;
+import com.ezylang.evalex.parser.ParseException;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -13,16 +14,21 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * The expressions of a ruleset, evaluated by EvalEx 3: arithmetic, comparisons, logic and the
  * library's standard functions (MAX, MIN, SQRT, IF, ABS ...), plus one function per table of the
  * ruleset. No access to Java objects: values in are numbers, text, booleans and lists of text.
+ *
+ * <p>Each expression is parsed once, the first time it is used, and evaluated with only the values
+ * of the names it uses (names are case-insensitive, as EvalEx reads them).
  */
 public final class RuleExpressions {
 
     private final ExpressionConfiguration configuration;
     private final Set<String> tables;
+    private final Map<String, Parsed> parsed = new ConcurrentHashMap<>();
 
     RuleExpressions(Map<String, TableDef> tables) {
         List<Map.Entry<String, FunctionIfc>> functions = new ArrayList<>();
@@ -43,19 +49,51 @@ public final class RuleExpressions {
     Set<String> variablesOf(String expression) throws BaseException {
         Expression e = new Expression(expression, configuration);
         e.validate();
-        Set<String> used = new TreeSet<>(e.getUsedVariables());
+        Set<String> used = new TreeSet<>(parse(expression).variables());
         used.removeAll(tables);
         return used;
     }
 
     /** Evaluates {@code expression} with {@code values} (Double, String, Boolean, or List of String). */
     public EvaluationValue evaluate(String expression, Map<String, Object> values) throws BaseException {
-        Expression e = new Expression(expression, configuration);
-        for (Map.Entry<String, Object> v : values.entrySet()) {
-            Object value = v.getValue() instanceof Double d ? BigDecimal.valueOf(d) : v.getValue();
-            e.with(v.getKey(), value);
+        Parsed p = parse(expression);
+        Expression e = p.expression().copy();
+        for (String name : p.variables()) {
+            String key = keyOf(name, values);
+            if (key != null) {
+                Object value = values.get(key);
+                e.with(name, value instanceof Double d ? BigDecimal.valueOf(d) : value);
+            }
         }
         return e.evaluate();
+    }
+
+    private Parsed parse(String expression) throws ParseException {
+        Parsed p = parsed.get(expression);
+        if (p == null) {
+            Expression e = new Expression(expression, configuration);
+            e.getAbstractSyntaxTree();
+            p = new Parsed(e, List.copyOf(e.getUsedVariables()));
+            parsed.put(expression, p);
+        }
+        return p;
+    }
+
+    /** The key of {@code values} that {@code name} stands for, as written or else ignoring case; null when none. */
+    private static String keyOf(String name, Map<String, Object> values) {
+        if (values.containsKey(name)) {
+            return name;
+        }
+        for (String key : values.keySet()) {
+            if (key.equalsIgnoreCase(name)) {
+                return key;
+            }
+        }
+        return null;
+    }
+
+    /** A parsed expression (its syntax tree is shared by every copy) and the variable names it uses. */
+    private record Parsed(Expression expression, List<String> variables) {
     }
 
     /** A number result, or an exception naming the expression when it is not one. */

@@ -10,6 +10,7 @@ import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -29,6 +30,8 @@ final class RuleValidator {
 
     private static final Pattern PLACEHOLDER = Pattern.compile("\\{([A-Za-z_][A-Za-z0-9_]*)}");
     private static final Set<String> SEVERITIES = Set.of("critical", "major", "minor", "note");
+    /** A finding name ends a finding id: lower-case letters and digits joined by single hyphens. */
+    private static final Pattern FINDING = Pattern.compile("[a-z0-9]+(-[a-z0-9]+)*");
 
     private final RuleVocabulary vocabulary;
     private final Map<String, Parameter> parameters;
@@ -149,8 +152,16 @@ final class RuleValidator {
                 }
             }
         }
+        Set<String> findings = new HashSet<>();
         for (RequirementDef r : check.requirements()) {
             String path = check.id() + ".requirements";
+            if (!FINDING.matcher(r.finding()).matches() || r.finding().startsWith("claim-")) {
+                error(r.location(), path + ".finding", "finding '" + r.finding() + "' is not a finding name (lower-case"
+                        + " letters and digits joined by hyphens, not starting with claim-, which names claims)");
+            } else if (!findings.add(r.finding())) {
+                error(r.location(), path + ".finding", "two requirements of " + check.id() + " raise finding '"
+                        + r.finding() + "'; give each its own 'finding' name");
+            }
             namesIn(r.that(), r.location(), path, known);
             typeOf(r.that(), values, r.location(), path + ".that", false);
             r.utilisation().ifPresent(u -> {

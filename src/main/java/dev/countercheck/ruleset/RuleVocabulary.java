@@ -13,8 +13,10 @@ import java.util.Set;
  *
  * @param elementTypes       what the rules of each element type may use and define, by type ({@code pile-cap})
  * @param requiredParameters parameters the engine reads in Java
+ * @param findingKinds       the kinds of finding the engine raises, each of which the ruleset gives a severity
  */
-public record RuleVocabulary(Map<String, ElementRules> elementTypes, Set<String> requiredParameters) {
+public record RuleVocabulary(Map<String, ElementRules> elementTypes, Set<String> requiredParameters,
+                             Set<String> findingKinds) {
 
     /**
      * What the rules of one element type may use and define.

@@ -17,11 +17,13 @@ import java.util.Optional;
  * @param tables      every table by name, with the file that set it
  * @param checks      the checks the ruleset defines, by id template, in file order
  * @param rules       the rule of each check a ruleset defines, by element type and check id
+ * @param severities  the severity of each kind of finding the engine raises, by kind
  * @param expressions the evaluator for the rules' expressions, with the tables as functions
  */
 public record Ruleset(String id, String title, String standard, String version, String sha256, List<String> files,
                       Map<String, Parameter> parameters, Map<String, TableDef> tables, Map<String, CheckDef> checks,
-                      Map<String, Map<String, Rule>> rules, RuleExpressions expressions) {
+                      Map<String, Map<String, Rule>> rules, Map<String, SeverityDef> severities,
+                      RuleExpressions expressions) {
 
     /** The rule for check {@code checkId} of {@code elementType}, when the ruleset defines one. */
     public Optional<Rule> rule(String elementType, String checkId) {
@@ -36,6 +38,16 @@ public record Ruleset(String id, String title, String standard, String version, 
                     + "' (the loader should have refused it)");
         }
         return p;
+    }
+
+    /** The severity label of findings of {@code kind}; every kind the engine raises is validated at load. */
+    public String severity(String kind) {
+        SeverityDef s = severities.get(kind);
+        if (s == null) {
+            throw new IllegalStateException("ruleset " + id + " gives no severity to '" + kind
+                    + "' (the loader should have refused it)");
+        }
+        return s.severity();
     }
 
     public double number(String name) {

@@ -6,23 +6,27 @@ import dev.countercheck.input.Node.Entry;
 import dev.countercheck.input.Node.MapNode;
 import dev.countercheck.input.Node.ScalarNode;
 import dev.countercheck.input.Problems;
+import dev.countercheck.input.Shown;
 import dev.countercheck.input.SourceLocation;
 import dev.countercheck.input.Suggestions;
 import dev.countercheck.input.TreeParser;
 
 import java.io.IOException;
 import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
 import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Pattern;
 
 /**
  * Reads a ruleset and everything it {@code extends}, validating it completely before any review:
@@ -30,47 +34,86 @@ import java.util.Optional;
  * loops, an override of a parameter the parent does not have, and any parameter the engine needs
  * but the chain does not define. Every error carries file, line and column.
  *
- * <p>A reference that ends in {@code .yaml}/{@code .yml} or contains a path separator is a path;
- * otherwise it is an id, looked up as {@code <id>.yaml} in the local rulesets folder first, then
- * among the rulesets bundled with the tool.
+ * <p>Where a ruleset comes from: a submission names one by id only; the checker may also give a
+ * path on the command line. An id is looked up as {@code <id>.yaml} in the checker's rulesets folder
+ * (when one is given), then among the rulesets bundled with the tool; a local file that replaces a
+ * bundled ruleset with different content says so in its name, which the report shows. An {@code
+ * extends} resolves against the file that says it: a path relative to that file's folder, an id in
+ * that folder first, then among the bundled rulesets (a bundled ruleset extends bundled ones only).
+ * A chain holds at most {@link #MAX_CHAIN} files.
  */
 public final class RulesetLoader {
 
     private static final List<String> TOP_KEYS = List.of("ruleset", "id", "extends", "title", "standard", "version",
-            "parameters", "tables", "checks");
+            "parameters", "severities", "tables", "checks");
     private static final List<String> PARAMETER_KEYS = List.of("symbol", "value", "unit", "clause", "note");
+    private static final List<String> SEVERITY_KEYS = List.of("severity", "meaning");
+    private static final List<String> SEVERITIES = List.of("critical", "major", "minor", "note");
 
     /** A ruleset is a short text file; anything larger is refused before it is read. */
     private static final long MAX_FILE_BYTES = 1024 * 1024;
+    /**
+     * The most files in an {@code extends} chain. The shipped chains have three (standard, annex,
+     * house rules); a chain longer than this is a mistake or an attack (common practice).
+     */
+    public static final int MAX_CHAIN = 8;
+    /** What a ruleset id may hold: no separator, so that an id never leads out of its folder. */
+    private static final Pattern ID = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]{0,99}");
+    private static final Pattern FORMAT_LINE = Pattern.compile("ruleset:\\s*1\\s*(#.*)?");
+    /** The folder of a bundled file, which is not on disk: its parents are bundled rulesets too. */
+    private static final Path BUNDLED = Path.of("(bundled)");
+    /** Added to the name of a local ruleset file that replaces a bundled ruleset of the same id. */
+    public static final String SHADOWS = " (in place of the bundled ruleset ";
 
-    private final Path localFolder;
+    private final Optional<Path> localFolder;
     private final RuleVocabulary vocabulary;
 
     /**
-     * @param localFolder where ids are looked up first (normally {@code ./rulesets})
+     * @param localFolder the checker's rulesets folder, where ids are looked up before the bundled
+     *                    rulesets; empty for the bundled rulesets only
      * @param vocabulary  what the engine offers the rules and the parameters it reads itself
      */
-    public RulesetLoader(Path localFolder, RuleVocabulary vocabulary) {
+    public RulesetLoader(Optional<Path> localFolder, RuleVocabulary vocabulary) {
         this.localFolder = localFolder;
         this.vocabulary = vocabulary;
     }
 
-    /** One file of a chain, parsed. */
-    private record RulesetFile(String name, byte[] bytes, MapNode root, Problems problems) {
+    /** A loader that looks ids up in {@code localFolder} first, then among the bundled rulesets. */
+    public RulesetLoader(Path localFolder, RuleVocabulary vocabulary) {
+        this(Optional.of(localFolder), vocabulary);
     }
 
+    /** One file of a chain, parsed; {@code folder} is where the files it extends are looked up. */
+    private record RulesetFile(String name, byte[] bytes, MapNode root, Problems problems, Path folder) {
+        RulesetFile named(String newName) {
+            return new RulesetFile(newName, bytes, root, problems, folder);
+        }
+    }
+
+    /** A ruleset named by the checker (the command line): an id, or the path of a ruleset file. */
     public Ruleset load(String reference) throws RulesetException {
-        return load(reference, Optional.empty());
+        return load(reference, Optional.empty(), true);
     }
 
     /**
-     * @param referencedAt where the reference was written (a submission's {@code basis.ruleset}), so that an
-     *                     error about it points there; empty for a reference given on the command line
+     * A ruleset named in a submission: by id only, so that a file sent by another firm cannot
+     * make the review read a file of the checker's machine.
+     *
+     * @param referencedAt where the id was written, so that an error about it points there
      */
-    public Ruleset load(String reference, Optional<SourceLocation> referencedAt) throws RulesetException {
+    public Ruleset loadId(String id, SourceLocation referencedAt) throws RulesetException {
+        return load(id, Optional.of(referencedAt), false);
+    }
+
+    private Ruleset load(String reference, Optional<SourceLocation> referencedAt, boolean pathAllowed)
+            throws RulesetException {
         List<RulesetFile> chain = new ArrayList<>();
         List<InputError> errors = new ArrayList<>();
-        Optional<RulesetFile> current = open(reference, referencedAt, errors);
+        if (localFolder.isPresent() && !Files.isDirectory(localFolder.get())) {
+            throw new RulesetException(List.of(new InputError(new SourceLocation("--rulesets-dir", 1, 1), "",
+                    "the rulesets folder " + localFolder.get() + " is not a folder")));
+        }
+        Optional<RulesetFile> current = open(reference, referencedAt, Optional.empty(), pathAllowed, errors);
         while (current.isPresent()) {
             RulesetFile file = current.get();
             if (chain.stream().anyMatch(f -> f.name().equals(file.name()))) {
@@ -83,8 +126,14 @@ public final class RulesetLoader {
             if (parent.isEmpty()) {
                 break;
             }
+            if (chain.size() == MAX_CHAIN) {
+                errors.add(new InputError(parent.get().value().location(), "extends", "the extends chain is longer"
+                        + " than " + MAX_CHAIN + " rulesets: a ruleset extends a standard's, an annex's and a firm's"
+                        + " rules, not more"));
+                break;
+            }
             current = open(text(parent.get().value(), file.problems(), "extends"),
-                    Optional.of(parent.get().value().location()), errors);
+                    Optional.of(parent.get().value().location()), Optional.of(file.folder()), true, errors);
         }
         if (!errors.isEmpty()) {
             throw new RulesetException(errors);
@@ -96,6 +145,7 @@ public final class RulesetLoader {
         Map<String, Parameter> parameters = new LinkedHashMap<>();
         Map<String, TableDef> tables = new LinkedHashMap<>();
         Map<String, CheckDef> checks = new LinkedHashMap<>();
+        Map<String, SeverityDef> severities = new LinkedHashMap<>();
         List<InputError> errors = new ArrayList<>();
         for (int i = 0; i < chain.size(); i++) {
             RulesetFile file = chain.get(i);
@@ -111,6 +161,7 @@ public final class RulesetLoader {
                 problems.add(params.get().value().location(), "parameters",
                         "expected a mapping of parameter names to their values");
             }
+            readSeverities(file, severities);
             RuleDefinitions definitions = new RuleDefinitions(problems, file.name());
             file.root().entry("tables").ifPresent(t -> definitions.readTables(t.value(), tables));
             file.root().entry("checks").ifPresent(c -> definitions.readChecks(c.value(), checks));
@@ -121,6 +172,11 @@ public final class RulesetLoader {
         if (!missing.isEmpty()) {
             errors.add(new InputError(top.root().location(), "parameters", "the ruleset chain does not define "
                     + String.join(", ", missing) + ", which the review needs"));
+        }
+        List<String> unset = vocabulary.findingKinds().stream().filter(k -> !severities.containsKey(k)).sorted().toList();
+        if (!unset.isEmpty()) {
+            errors.add(new InputError(top.root().location(), "severities", "the ruleset chain gives no severity to "
+                    + String.join(", ", unset) + ", which the review raises"));
         }
         if (!errors.isEmpty()) {
             throw new RulesetException(errors);
@@ -136,14 +192,14 @@ public final class RulesetLoader {
                 optionalText(root, "standard").orElse(""), optionalText(root, "version").orElse(""), hash(chain),
                 chain.stream().map(RulesetFile::name).toList(), Collections.unmodifiableMap(parameters),
                 Collections.unmodifiableMap(tables), Collections.unmodifiableMap(validated), validator.rules(),
-                expressions);
+                Collections.unmodifiableMap(severities), expressions);
     }
 
     private void checkTop(RulesetFile file) {
         Problems problems = file.problems();
         for (Entry e : file.root().entries()) {
             if (!TOP_KEYS.contains(e.key())) {
-                problems.add(e.keyLocation(), e.key(), "unknown key '" + e.key() + "'"
+                problems.add(e.keyLocation(), e.key(), "unknown key '" + Shown.text(e.key()) + "'"
                         + Suggestions.hint(e.key(), TOP_KEYS));
             }
         }
@@ -164,7 +220,7 @@ public final class RulesetLoader {
         String path = "parameters." + e.key();
         Parameter inherited = parameters.get(e.key());
         if (!base && inherited == null) {
-            problems.add(e.keyLocation(), path, "'" + e.key() + "' is not a parameter of the ruleset this one extends"
+            problems.add(e.keyLocation(), path, "'" + Shown.text(e.key()) + "' is not a parameter of the ruleset this one extends"
                     + Suggestions.hint(e.key(), parameters.keySet()));
             return;
         }
@@ -174,7 +230,7 @@ public final class RulesetLoader {
         }
         for (Entry f : map.entries()) {
             if (!PARAMETER_KEYS.contains(f.key())) {
-                problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + f.key() + "'"
+                problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + Shown.text(f.key()) + "'"
                         + Suggestions.hint(f.key(), PARAMETER_KEYS));
             }
         }
@@ -194,11 +250,66 @@ public final class RulesetLoader {
             problems.add(map.entry("unit").get().value().location(), path + ".unit", "an override cannot change the"
                     + " unit of '" + e.key() + "' (" + inherited.unit() + ")");
         }
+        String unit = optionalText(map, "unit").orElse(base ? "-" : inherited.unit());
+        Node written = map.entry("value").get().value();
+        Optional<String> implausible = ParameterRanges.problem(e.key(), unit, value.get(),
+                Shown.text(((ScalarNode) written).text()));
+        if (implausible.isPresent()) {
+            problems.add(written.location(), path + ".value", implausible.get());
+            return;
+        }
         parameters.put(e.key(), new Parameter(e.key(),
                 optionalText(map, "symbol").orElse(base ? e.key() : inherited.symbol()), value.get(),
-                optionalText(map, "unit").orElse(base ? "-" : inherited.unit()),
-                optionalText(map, "clause").orElse(""),
+                unit, optionalText(map, "clause").orElse(""),
                 optionalText(map, "note").orElse(base ? "" : inherited.note()), origin));
+    }
+
+    /**
+     * The {@code severities} section: each kind of finding with its severity and meaning. A ruleset that
+     * extends another may move a kind's severity; the meaning stays the one first declared unless restated.
+     */
+    private void readSeverities(RulesetFile file, Map<String, SeverityDef> severities) {
+        Problems problems = file.problems();
+        Optional<Entry> section = file.root().entry("severities");
+        if (section.isEmpty()) {
+            return;
+        }
+        if (!(section.get().value() instanceof MapNode map)) {
+            problems.add(section.get().value().location(), "severities",
+                    "expected a mapping of finding kinds to their severity and meaning");
+            return;
+        }
+        for (Entry e : map.entries()) {
+            String path = "severities." + e.key();
+            SeverityDef inherited = severities.get(e.key());
+            if (!vocabulary.findingKinds().contains(e.key())) {
+                problems.add(e.keyLocation(), path, "'" + e.key() + "' is not a kind of finding the review raises"
+                        + Suggestions.hint(e.key(), vocabulary.findingKinds()));
+                continue;
+            }
+            if (!(e.value() instanceof MapNode m)) {
+                problems.add(e.value().location(), path, "expected a mapping with " + String.join(", ", SEVERITY_KEYS));
+                continue;
+            }
+            for (Entry f : m.entries()) {
+                if (!SEVERITY_KEYS.contains(f.key())) {
+                    problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + f.key() + "'"
+                            + Suggestions.hint(f.key(), SEVERITY_KEYS));
+                }
+            }
+            Optional<String> severity = optionalText(m, "severity");
+            Optional<String> meaning = optionalText(m, "meaning").or(() -> Optional.ofNullable(inherited)
+                    .map(SeverityDef::meaning));
+            if (severity.isEmpty() || meaning.isEmpty()) {
+                problems.add(m.location(), path, "'" + e.key() + "' needs a severity"
+                        + (inherited == null ? " and its meaning" : ""));
+            } else if (!SEVERITIES.contains(severity.get())) {
+                problems.add(m.entry("severity").get().value().location(), path + ".severity", "severity '"
+                        + severity.get() + "' is not one of " + String.join(", ", SEVERITIES));
+            } else {
+                severities.put(e.key(), new SeverityDef(e.key(), severity.get(), meaning.get(), file.name()));
+            }
+        }
     }
 
     private static Optional<Double> number(Node node, Problems problems, String path) {
@@ -229,59 +340,109 @@ public final class RulesetLoader {
                 && s.kind() != ScalarNode.Kind.NULL).map(v -> ((ScalarNode) v).text());
     }
 
-    /** Opens a ruleset by id or path; problems go into {@code errors} located at {@code referencedAt}. */
-    private Optional<RulesetFile> open(String reference, Optional<SourceLocation> referencedAt,
-                                       List<InputError> errors) {
-        boolean isPath = reference.endsWith(".yaml") || reference.endsWith(".yml") || reference.contains("/")
-                || reference.contains("\\");
+    /**
+     * Opens a ruleset by id or path; problems go into {@code errors} located at {@code referencedAt}.
+     *
+     * @param from the folder of the file that names it (empty for the command line or a
+     *             submission; {@link #BUNDLED} for a bundled file, whose parents are bundled too)
+     */
+    private Optional<RulesetFile> open(String reference, Optional<SourceLocation> referencedAt, Optional<Path> from,
+                                       boolean pathAllowed, List<InputError> errors) {
         try {
-            byte[] bytes;
-            String name;
-            if (isPath) {
-                Path p = Path.of(reference);
-                if (!Files.isRegularFile(p)) {
-                    return notFound("no ruleset file " + reference, referencedAt, errors);
+            if (!isId(reference)) {
+                if (!pathAllowed) {
+                    return notFound("'" + Shown.text(reference) + "' is not a ruleset id: a submission names its"
+                            + " ruleset by id only (letters, digits, '.', '-', '_'); a ruleset file is given on the"
+                            + " command line with --ruleset", referencedAt, errors);
                 }
-                if (Files.size(p) > MAX_FILE_BYTES) {
-                    return notFound(reference + " is larger than " + MAX_FILE_BYTES / 1024
-                            + " KiB: not a ruleset", referencedAt, errors);
+                if (from.isPresent() && from.get().equals(BUNDLED)) {
+                    return notFound("a bundled ruleset extends bundled rulesets by id only", referencedAt, errors);
                 }
-                bytes = Files.readAllBytes(p);
-                name = reference;
-            } else {
-                Path local = localFolder.resolve(reference + ".yaml");
-                if (Files.isRegularFile(local)) {
-                    bytes = Files.readAllBytes(local);
-                    name = local.toString();
-                } else {
-                    try (InputStream in = RulesetLoader.class.getResourceAsStream("/rulesets/" + reference + ".yaml")) {
-                        if (in == null || !reference.matches("[A-Za-z0-9._-]+")) {
-                            return notFound("no ruleset with id '" + reference + "' in " + localFolder
-                                    + " or among the bundled rulesets", referencedAt, errors);
-                        }
-                        bytes = in.readAllBytes();
-                        name = "rulesets/" + reference + ".yaml (bundled)";
-                    }
-                }
+                Path p = from.map(f -> f.resolve(reference)).orElse(Path.of(reference)).toAbsolutePath().normalize();
+                return readFile(p, p.toString(), referencedAt, errors);
             }
-            Problems problems = new Problems(name);
-            Optional<Node> root = new TreeParser(problems).parse(bytes, name.replace(" (bundled)", ""));
-            if (root.isPresent() && !(root.get() instanceof MapNode)) {
-                problems.add(root.get().location(), "", "a ruleset is a mapping that starts with 'ruleset: 1'");
+            Optional<byte[]> bundled = bundled(reference);
+            Optional<Path> folder = from.isPresent() ? from.filter(f -> !f.equals(BUNDLED)) : localFolder;
+            Path local = folder.map(f -> f.resolve(reference + ".yaml")).orElse(BUNDLED);
+            if (folder.isPresent() && Files.isRegularFile(local)) {
+                Optional<RulesetFile> file = readFile(local, local.toString(), referencedAt, errors);
+                boolean shadows = bundled.isPresent() && file.isPresent()
+                        && !Arrays.equals(bundled.get(), file.get().bytes());
+                return shadows ? file.map(f -> f.named(f.name() + SHADOWS + reference + ")")) : file;
             }
-            if (problems.any()) {
-                errors.addAll(problems.sorted());
-                return Optional.empty();
+            if (bundled.isEmpty()) {
+                return notFound("no ruleset with id '" + reference + "'"
+                        + folder.map(f -> " in " + f + " or").orElse("")
+                        + " among the bundled rulesets", referencedAt, errors);
             }
-            return Optional.of(new RulesetFile(name, bytes, (MapNode) root.get(), problems));
+            String name = "rulesets/" + reference + ".yaml";
+            return parse(bundled.get(), name, name, BUNDLED, errors);
         } catch (IOException e) {
-            return notFound("cannot read ruleset " + reference + ": " + e.getMessage(), referencedAt, errors);
+            return notFound("cannot read ruleset " + Shown.text(reference) + ": " + e.getMessage(), referencedAt,
+                    errors);
         }
     }
 
+    /** An id: a name without a path or an extension, e.g. {@code en1992-uk-na}. */
+    static boolean isId(String reference) {
+        return ID.matcher(reference).matches() && !reference.endsWith(".yaml") && !reference.endsWith(".yml");
+    }
+
+    private static Optional<byte[]> bundled(String id) throws IOException {
+        try (InputStream in = RulesetLoader.class.getResourceAsStream("/rulesets/" + id + ".yaml")) {
+            return in == null ? Optional.empty() : Optional.of(in.readAllBytes());
+        }
+    }
+
+    /**
+     * A ruleset file the checker named: refused unread when it is not a regular file or is too
+     * large, and refused without a word of its content when it does not start as a ruleset does,
+     * so that naming a file that is not a ruleset never shows what it holds.
+     */
+    private Optional<RulesetFile> readFile(Path p, String name, Optional<SourceLocation> referencedAt,
+                                           List<InputError> errors) throws IOException {
+        if (!Files.isRegularFile(p)) {
+            return notFound("no ruleset file " + name, referencedAt, errors);
+        }
+        if (Files.size(p) > MAX_FILE_BYTES) {
+            return notFound(name + " is larger than " + MAX_FILE_BYTES / 1024 + " KiB: not a ruleset", referencedAt,
+                    errors);
+        }
+        byte[] bytes = Files.readAllBytes(p);
+        if (!startsAsARuleset(bytes)) {
+            return notFound(name + " is not a ruleset: a ruleset file starts with the line 'ruleset: 1' (its"
+                    + " content is not shown)", referencedAt, errors);
+        }
+        return parse(bytes, name, name, p.getParent(), errors);
+    }
+
+    /** The first line that is not blank, a comment or a document start is {@code ruleset: 1}. */
+    private static boolean startsAsARuleset(byte[] bytes) {
+        int length = Math.min(bytes.length, 64 * 1024);
+        String head = new String(bytes, 0, length, StandardCharsets.UTF_8);
+        if (head.startsWith("\uFEFF")) {
+            head = head.substring(1);
+        }
+        return head.lines().map(String::strip).filter(l -> !l.isEmpty() && !l.startsWith("#") && !l.equals("---"))
+                .findFirst().filter(FORMAT_LINE.asMatchPredicate()).isPresent();
+    }
+
+    private static Optional<RulesetFile> parse(byte[] bytes, String name, String parsedAs, Path folder,
+                                               List<InputError> errors) {
+        Problems problems = new Problems(name);
+        Optional<Node> root = new TreeParser(problems).parse(bytes, parsedAs);
+        if (root.isPresent() && !(root.get() instanceof MapNode)) {
+            problems.add(root.get().location(), "", "a ruleset is a mapping that starts with 'ruleset: 1'");
+        }
+        if (problems.any()) {
+            errors.addAll(problems.sorted());
+            return Optional.empty();
+        }
+        return Optional.of(new RulesetFile(name, bytes, (MapNode) root.get(), problems, folder));
+    }
+
     private static Optional<RulesetFile> notFound(String message, Optional<SourceLocation> at, List<InputError> errors) {
-        errors.add(new InputError(at.orElse(new SourceLocation("--ruleset", 1, 1)), at.isPresent() ? "extends" : "",
-                message));
+        errors.add(new InputError(at.orElse(SourceLocation.unpositioned("--ruleset")), "", message));
         return Optional.empty();
     }
 

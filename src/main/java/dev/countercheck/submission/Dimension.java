@@ -56,6 +56,25 @@ enum Dimension {
         return limit;
     }
 
+    /**
+     * The smallest magnitude other than zero a value of this kind may have, in the default unit: a
+     * value closer to zero (a pile of 1e-200 mm) is a slip, and as a divisor it would make a
+     * formula divide by zero. The bounds lie far below any dimension, load or stress of a
+     * foundation (common practice): 0.1 mm, 1 N, 1 Nm, 1 kPa, 0.1 mm², 0.01°, and 10⁻⁶ for a plain
+     * number.
+     */
+    double least() {
+        return switch (this) {
+            case LENGTH -> 0.1;
+            case FORCE -> 1e-3;
+            case MOMENT -> 1e-3;
+            case STRESS -> 1e-3;
+            case AREA -> 0.1;
+            case ANGLE -> 0.01;
+            case NUMBER -> 1e-6;
+        };
+    }
+
     /** The limit for a message: "100 m (100000 mm)". */
     String limitText() {
         return limitText;

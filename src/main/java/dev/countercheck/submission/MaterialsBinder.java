@@ -154,7 +154,11 @@ final class MaterialsBinder {
         return false;
     }
 
+    /** Exposure classes: a list, or one class written alone ({@code exposure: XC2}). */
     private Optional<List<String>> exposure(Node node, String path) {
+        if (node instanceof Node.ScalarNode scalar && scalar.kind() == Node.ScalarNode.Kind.TEXT) {
+            return values.choice(node, path, "exposure class", EXPOSURE).map(List::of);
+        }
         return values.nonEmptyList(node, path, EXPOSURE.size(), "exposure classes",
                 "exposure class (e.g. XC2)").flatMap(items -> values.each(items, path,
                 (item, itemPath) -> values.choice(item, itemPath, "exposure class", EXPOSURE)));

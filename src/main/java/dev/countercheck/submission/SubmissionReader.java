@@ -16,7 +16,7 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * Reads a submission file (YAML or JSON, see {@code spec/submission.md}) into a validated
+ * Reads a submission file (YAML or JSON, see {@code docs/submission.md}) into a validated
  * {@link Submission}.
  *
  * <p>The file is only read. It is parsed with Jackson's streaming parser into a tree that knows

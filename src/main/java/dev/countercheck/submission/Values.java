@@ -7,8 +7,10 @@ import dev.countercheck.input.Node.MapNode;
 import dev.countercheck.input.Node.ScalarNode;
 import dev.countercheck.input.Node.ScalarNode.Kind;
 import dev.countercheck.input.Problems;
+import dev.countercheck.eurocode.Num;
 import dev.countercheck.input.Shown;
 import dev.countercheck.input.Suggestions;
+import dev.countercheck.input.TreeParser;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
@@ -112,6 +114,11 @@ final class Values {
                     + ", or a number and a unit (" + dimension.unitList() + ")"));
             return Optional.empty();
         }
+        if (m.group(1).length() > TreeParser.MAX_NUMBER_CHARS) {
+            error(scalar, path, "reading limit exceeded: a number of " + m.group(1).length() + " characters, longer"
+                    + " than the " + TreeParser.MAX_NUMBER_CHARS + " allowed");
+            return Optional.empty();
+        }
         double number = Double.parseDouble(m.group(1));
         String symbol = m.group(2);
         if (symbol == null) {
@@ -144,16 +151,23 @@ final class Values {
         return false;
     }
 
-    /** Within the magnitude no submission exceeds: a larger value is a slip of unit or of keyboard. */
+    /**
+     * Within the magnitudes of a foundation review, both ways: a larger value, or one other than
+     * zero that is smaller, is a slip of unit or of keyboard.
+     */
     private boolean plausible(Node node, String path, double value, Dimension dimension) {
-        if (Math.abs(value) <= dimension.limit()) {
+        boolean tooLarge = Math.abs(value) > dimension.limit();
+        if (!tooLarge && (value == 0 || Math.abs(value) >= dimension.least())) {
             return true;
         }
         boolean bare = node instanceof ScalarNode scalar && scalar.kind() == Kind.NUMBER;
         String check = dimension == Dimension.NUMBER ? "check the number"
                 : "check the number and its unit" + (bare ? " (a bare number is in " + dimension.defaultUnit() + ")" : "");
-        error(node, path, source(node) + " is too large for " + dimension.noun() + ": no value of a foundation"
-                + " review exceeds " + dimension.limitText() + "; " + check);
+        error(node, path, tooLarge
+                ? source(node) + " is too large for " + dimension.noun() + ": no value of a foundation review exceeds "
+                        + dimension.limitText() + "; " + check
+                : source(node) + " is too small for " + dimension.noun() + ": no value of a foundation review other"
+                        + " than 0 is below " + Num.f(dimension.least()) + " " + dimension.defaultUnit() + "; " + check);
         return false;
     }
 

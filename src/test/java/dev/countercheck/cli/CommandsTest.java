@@ -1,5 +1,9 @@
 package dev.countercheck.cli;
 
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -18,6 +22,20 @@ class CommandsTest {
         SampleSubmissionsTest.Run r = run("--version");
         assertThat(r.exit()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).startsWith("countercheck ");
+    }
+
+    @Test
+    void withoutArgumentsTheHelpIsPrintedAsAUsageError() {
+        SampleSubmissionsTest.Run r = run();
+        assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(r.err()).contains("Usage: countercheck").contains("review").contains("validate");
+    }
+
+    @Test
+    void anUnknownRulesetIsNamedWithoutAnInventedFilePosition() {
+        SampleSubmissionsTest.Run r = run("rules", "--ruleset", "nosuch");
+        assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(r.err()).contains("--ruleset: no ruleset with id 'nosuch'").doesNotContain("--ruleset:1:1");
     }
 
     @Test
@@ -66,14 +84,32 @@ class CommandsTest {
     }
 
     @Test
-    void failOnMinorTurnsMinorFindingsIntoExitOne(@TempDir Path dir) {
-        // quayside-annex has only minor findings (its comment says so): exit 0 by default, 1 with --fail-on minor.
-        assertThat(run("review", "sample-submissions/quayside-annex.yaml", "--out", dir.toString()).exit())
-                .isEqualTo(ExitCodes.OK);
+    void failOnMinorTurnsMinorFindingsIntoExitOne(@TempDir Path dir) throws IOException {
+        // quayside-annex less its element that could not be reviewed (PC-Q3) has only minor findings (its
+        // comment says so): exit 0 by default, 1 with --fail-on minor.
+        ObjectNode sample = (ObjectNode) new ObjectMapper(new YAMLFactory())
+                .readTree(Path.of("sample-submissions/quayside-annex.yaml").toFile());
+        ArrayNode elements = (ArrayNode) sample.get("elements");
+        for (int i = elements.size() - 1; i >= 0; i--) {
+            if (elements.get(i).get("id").asText().equals("PC-Q3")) {
+                elements.remove(i);
+            }
+        }
+        Path reviewed = dir.resolve("quayside-reviewed.json");
+        Files.writeString(reviewed, new ObjectMapper().writeValueAsString(sample));
+        Path out = dir.resolve("out");
+        assertThat(run("review", reviewed.toString(), "--out", out.toString()).exit()).isEqualTo(ExitCodes.OK);
+        assertThat(run("review", reviewed.toString(), "--out", out.toString(), "--fail-on", "minor").exit())
+                .isEqualTo(ExitCodes.FINDINGS);
+        assertThat(run("review", reviewed.toString(), "--out", out.toString(), "--fail-on", "severe").exit())
+                .isEqualTo(ExitCodes.UNUSABLE);
+    }
+
+    @Test
+    void anElementThatCouldNotBeReviewedFailsTheGateWhateverFailOnSays(@TempDir Path dir) {
+        // quayside-annex's PC-Q3 has no actions: its only finding is major, yet --fail-on critical exits 1.
         assertThat(run("review", "sample-submissions/quayside-annex.yaml", "--out", dir.toString(),
-                "--fail-on", "minor").exit()).isEqualTo(ExitCodes.FINDINGS);
-        assertThat(run("review", "sample-submissions/quayside-annex.yaml", "--out", dir.toString(),
-                "--fail-on", "severe").exit()).isEqualTo(ExitCodes.UNUSABLE);
+                "--fail-on", "critical").exit()).isEqualTo(ExitCodes.FINDINGS);
     }
 
     @Test

@@ -1,5 +1,6 @@
 package dev.countercheck.cli;
 
+import dev.countercheck.report.OutputSet;
 import org.assertj.core.api.SoftAssertions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -155,16 +156,20 @@ class HostileInputCliTest {
         Run run = run("review", SAMPLE.toString(), "--out", out.toString(), "--date", DATE);
 
         assertThat(run.code()).as(run.err()).isIn(ExitCodes.OK, ExitCodes.FINDINGS);
-        assertThat(names(out)).containsExactly("harbour-lane.html", "harbour-lane.json");
+        assertThat(names(out)).containsExactly("harbour-lane.html", "harbour-lane.json",
+                "harbour-lane.responses.csv", "harbour-lane.responses.xlsx");
     }
 
     /**
      * Kills a run at every step of writing its reports and checks what the folder then holds. The
      * run is a separate Java process (see {@link HaltingRun}) that halts, as a kill would, just
-     * before its n-th write step: before a temporary report is created, and before a written one
-     * is moved into place; n runs from 1 until a run completes. The folder starts with the reports
-     * of the previous revision; after every halt each report is byte for byte the previous one or
-     * the new one, and anything else left is a hidden temporary file.
+     * before its n-th write step: before a temporary report or the set's journal is created, and
+     * before one of them is moved into place; n runs from 1 until a run completes. The folder
+     * starts with the reports of the previous revision; after every halt each report is byte for
+     * byte the previous one or the new one, and anything else left is a hidden temporary file or
+     * journal. Once the next run has tidied the folder ({@link OutputSet#recover}, the first thing
+     * a review does), the set of reports is wholly the previous one or wholly the new one, and no
+     * hidden file is left.
      */
     @Test
     void aRunKilledWhileWritingLeavesThePreviousReportOrTheNewOneNeverATruncatedOne() throws Exception {
@@ -180,11 +185,11 @@ class HostileInputCliTest {
         assertThat(run("review", newSubmission.toString(), "--out", expected.toString(), "--date", DATE).code())
                 .isNotEqualTo(ExitCodes.UNUSABLE);
         List<String> reports = names(expected);
-        assertThat(reports).containsExactly("plan.html", "plan.json");
+        assertThat(reports).containsExactly("plan.html", "plan.json", "plan.responses.csv", "plan.responses.xlsx");
 
         int halted = 0;
         for (int n = 1; ; n++) {
-            assertThat(n).as("a run of two reports ends within a few write steps").isLessThan(10);
+            assertThat(n).as("a run of four reports ends within a few write steps").isLessThan(20);
             Path out = temp.resolve("killed-at-" + n);
             Files.createDirectories(out);
             for (String report : reports) {
@@ -200,8 +205,20 @@ class HostileInputCliTest {
                         .satisfiesAnyOf(b -> assertThat(b).isEqualTo(Files.readAllBytes(previous.resolve(report))),
                                 b -> assertThat(b).isEqualTo(Files.readAllBytes(expected.resolve(report))));
             }
-            assertThat(names(out)).as("besides the reports, only hidden temporary files")
-                    .allMatch(name -> reports.contains(name) || (name.startsWith(".") && name.endsWith(".tmp")));
+            assertThat(names(out)).as("besides the reports, only hidden temporary files and journals")
+                    .allMatch(name -> reports.contains(name) || (name.startsWith(".")
+                            && (name.endsWith(".tmp") || name.endsWith(".set"))));
+            OutputSet.recover(out);
+            assertThat(names(out)).as("after the next run's tidying, the reports only").isEqualTo(reports);
+            boolean allPrevious = true;
+            boolean allNew = true;
+            for (String report : reports) {
+                byte[] left = Files.readAllBytes(out.resolve(report));
+                allPrevious &= java.util.Arrays.equals(left, Files.readAllBytes(previous.resolve(report)));
+                allNew &= java.util.Arrays.equals(left, Files.readAllBytes(expected.resolve(report)));
+            }
+            assertThat(allPrevious || allNew).as("after a halt at write %d the set is the previous or the new one", n)
+                    .isTrue();
             if (code != HaltingRun.HALTED) {
                 assertThat(names(out)).as("a completed run leaves the new reports only").isEqualTo(reports);
                 for (String report : reports) {
@@ -211,8 +228,8 @@ class HostileInputCliTest {
             }
             halted++;
         }
-        assertThat(halted).as("runs halted before each temporary file and each move of the two reports")
-                .isEqualTo(4);
+        assertThat(halted).as("runs halted before each temporary file, the journal, and each move")
+                .isGreaterThanOrEqualTo(2 * reports.size());
     }
 
     /**

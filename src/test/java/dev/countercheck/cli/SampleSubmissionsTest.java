@@ -96,7 +96,9 @@ class SampleSubmissionsTest {
                 String elementId = words[1].substring(0, words[1].indexOf('/'));
                 List<String> matching = new ArrayList<>();
                 element(result, elementId).get("findings").forEach(f -> {
-                    if (f.get("id").asText().startsWith(words[1] + "/") && f.get("severity").asText().equals(words[2])) {
+                    String id = f.get("id").asText();
+                    boolean named = id.equals(words[1]) || id.startsWith(words[1] + "/");
+                    if (named && f.get("severity").asText().equals(words[2])) {
                         matching.add(f.get("id").asText());
                     }
                 });

@@ -38,7 +38,7 @@ class BendingTest {
 
     @Test
     void leverArmMatchesTheFamiliarUkForm() {
-        // Source: pile-cap-method.md / UK design-guide form z = (d/2)·[1 + √(1 − 3.53·K)] for αcc = 0.85, γc = 1.5
+        // Source: UK design-guide form z = (d/2)·[1 + √(1 − 3.53·K)] for αcc = 0.85, γc = 1.5
         // (common practice); 3.53 is 2/0.5667 rounded, so agreement is to about 0.01 mm here:
         // hand calculation 250·(1 + √(1 − 0.353)) = 451.09 mm
         assertThat(Bending.leverArm(0.1, 500, 0.85, 1.5).value()).isCloseTo(451.09, within(0.02));

@@ -23,6 +23,29 @@ class NumTest {
         assertThat(Num.f(value)).isEqualTo(expected);
     }
 
+    /**
+     * The fast path gives exactly what exact decimal rounding of the binary value gives: across
+     * magnitudes, signs and values at or next to a half in the fifth figure (where double arithmetic
+     * alone would decide wrongly).
+     */
+    @Test
+    void fastFormattingAgreesWithExactRounding() {
+        java.util.Random random = new java.util.Random(20260101);
+        for (int i = 0; i < 20_000; i++) {
+            double magnitude = Math.pow(10, random.nextInt(40) - 20);
+            double value = (random.nextBoolean() ? 1 : -1) * magnitude * (1 + 9 * random.nextDouble());
+            assertThat(Num.f(value)).as("%s", value).isEqualTo(Num.exact(value));
+            double half = Math.floor(value / magnitude * 1000) / 1000 * magnitude + magnitude / 2000;
+            for (double v : new double[] {half, Math.nextUp(half), Math.nextDown(half)}) {
+                assertThat(Num.f(v)).as("%s", v).isEqualTo(Num.exact(v));
+            }
+        }
+        for (double v : new double[] {999.95, 9999.5, 0.00012345, 1234.5, 12345, 99995, 1e22, 1e-22, 5e-324,
+            Double.MAX_VALUE, 0.5, 1.5, 2.5}) {
+            assertThat(Num.f(v)).as("%s", v).isEqualTo(Num.exact(v));
+        }
+    }
+
     /** Error messages may quote a bad input that is not a finite number; formatting must not throw. */
     @Test
     void printsNonFiniteValuesInsteadOfThrowing() {

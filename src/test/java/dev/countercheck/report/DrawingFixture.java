@@ -78,12 +78,12 @@ final class DrawingFixture {
                 check("tie-y", CheckStatus.FAIL), check("cover", CheckStatus.FAIL),
                 check("max-steel", CheckStatus.FAIL));
         List<Finding> findings = List.of(
-                new Finding(id + "/pile-reactions/1", Severity.CRITICAL, "pile-reactions", "Pile 2 overloaded.",
+                new Finding(id + "/pile-reactions/compression", Severity.CRITICAL, "pile-reactions", "Pile 2 overloaded.",
                         "common practice"),
-                new Finding(id + "/shear-x/1", Severity.CRITICAL, "shear-x", "VEd exceeds VRd,c.", "EN 1992-1-1 6.2.2"),
-                new Finding(id + "/tie-y/1", Severity.CRITICAL, "tie-y", "Too few y-bars.", "EN 1992-1-1 6.5"),
-                new Finding(id + "/cover/1", Severity.MAJOR, "cover", "Cover too small.", "EN 1992-1-1 4.4.1"),
-                new Finding(id + "/max-steel/1", Severity.MAJOR, "max-steel", "Too much steel.",
+                new Finding(id + "/shear-x/capacity", Severity.CRITICAL, "shear-x", "VEd exceeds VRd,c.", "EN 1992-1-1 6.2.2"),
+                new Finding(id + "/tie-y/capacity", Severity.CRITICAL, "tie-y", "Too few y-bars.", "EN 1992-1-1 6.5"),
+                new Finding(id + "/cover/cover-bottom", Severity.MAJOR, "cover", "Cover too small.", "EN 1992-1-1 4.4.1"),
+                new Finding(id + "/max-steel/as-max", Severity.MAJOR, "max-steel", "Too much steel.",
                         "EN 1992-1-1 9.2.1.1(3)"));
         return new ElementReview(id, "pile-cap", "Four-pile cap (invented)", Verdict.DOES_NOT_CONFORM, checks,
                 findings, List.of(), Optional.of(drawing(id)));

@@ -58,7 +58,7 @@ class DrawingsTest {
         assertThat(DrawingLegend.marks(marks)).filteredOn(m -> m.checkId().equals("pile-reactions"))
                 .singleElement().satisfies(m -> {
                     assertThat(m.where()).isEqualTo("pile 2");
-                    assertThat(m.findingIds()).containsExactly("PC-T1/pile-reactions/1");
+                    assertThat(m.findingIds()).containsExactly("PC-T1/pile-reactions/compression");
                 });
     }
 

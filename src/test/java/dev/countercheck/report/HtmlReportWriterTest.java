@@ -32,9 +32,9 @@ class HtmlReportWriterTest {
 
     @Test
     void sectionsComeInTheOrderASignedReviewNeeds() {
-        // Cover, findings register, elements, assumptions and cautions, in document order.
+        // Cover (with the problems), findings register, elements, assumptions and cautions, calculations.
         List<String> ids = page.select("body > header, body > section").eachAttr("id");
-        assertThat(ids).containsExactly("cover", "register", "elements", "assumptions");
+        assertThat(ids).containsExactly("cover", "register", "elements", "assumptions", "calculations");
         assertThat(page.select("#elements > section.element").eachAttr("aria-label")).containsExactly("PC-D1", "PF-A2");
     }
 
@@ -92,7 +92,7 @@ class HtmlReportWriterTest {
         assertThat(pileCap.select("table.legend tr")).isNotEmpty();
         assertThat(pileCap.select("table.marks tbody tr").eachText())
                 .as("shear-x fails in the fixture: its sections carry tag F1")
-                .containsExactly("F1 shear-x One-way shear, sections parallel to y shear sections across x PC-D1/shear-x/1");
+                .containsExactly("F1 shear-x One-way shear, sections parallel to y shear sections across x PC-D1/shear-x/capacity");
         Element footing = page.selectFirst("section.element[aria-label=PF-A2]");
         assertThat(footing.select("svg.drawing")).as("the pad footing of the fixture has no drawing").isEmpty();
         for (ElementReview e : review.elements()) {

@@ -53,7 +53,7 @@ class JsonResultWriterTest {
 
         JsonNode finding = element.get("findings").get(0);
         assertThat(keys(finding)).containsExactly("id", "severity", "check", "message", "basis");
-        assertThat(finding.get("id").asText()).isEqualTo("PC-D1/shear-x/1");
+        assertThat(finding.get("id").asText()).isEqualTo("PC-D1/shear-x/capacity");
         assertThat(finding.get("severity").asText()).isEqualTo("critical");
     }
 

@@ -72,7 +72,8 @@ class PdfReportWriterTest {
             var outline = document.getDocumentCatalog().getDocumentOutline();
             List<String> top = new ArrayList<>();
             outline.children().forEach(item -> top.add(item.getTitle()));
-            assertThat(top).containsExactly(HOSTILE, "1 Findings register", "2 Elements", "3 Assumptions and cautions");
+            assertThat(top).containsExactly(HOSTILE, "1 Findings register", "2 Elements", "3 Assumptions and cautions",
+                    "4 Calculations");
             List<String> elements = new ArrayList<>();
             outline.children().forEach(item -> {
                 if (item.getTitle().equals("2 Elements")) {

@@ -88,11 +88,11 @@ final class ReviewFixture {
                         "k capped at 2.0")));
         return new ElementReview("PC-D1", "pile-cap", "Four-pile cap under column D1", Verdict.DOES_NOT_CONFORM,
                 List.of(tie, shear),
-                List.of(new Finding("PC-D1/shear-x/1", Severity.CRITICAL, "shear-x",
+                List.of(new Finding("PC-D1/shear-x/capacity", Severity.CRITICAL, "shear-x",
                                 "VEd exceeds VRd,c; the claimed VRd,c is unconservative", "EN 1992-1-1 6.2.2"),
-                        new Finding("PC-D1/anchorage-x/1", Severity.MAJOR, "anchorage-x",
+                        new Finding("PC-D1/anchorage-x/length", Severity.MAJOR, "anchorage-x",
                                 "Anchorage length beyond the pile not shown", "EN 1992-1-1 8.4.4"),
-                        new Finding("PC-D1/tie-x/1", Severity.MINOR, "tie-x",
+                        new Finding("PC-D1/tie-x/claim-as-required", Severity.MINOR, "tie-x",
                                 "Claimed As,req is conservative", "EN 1992-1-1 6.5.4")),
                 List.of("Pile spacing exceeds three diameters: concentrate tie bars over the piles."),
                 Optional.of(DrawingFixture.drawing("PC-D1")));
@@ -110,9 +110,9 @@ final class ReviewFixture {
                 values(), List.of(), List.of());
         return new ElementReview("PF-A2", "pad-footing", "Pad footing under column A2",
                 Verdict.CONFORMS_WITH_REMARKS, List.of(bearing, shearY),
-                List.of(new Finding("PF-A2/bearing/1", Severity.MINOR, "bearing",
+                List.of(new Finding("PF-A2/bearing/capacity", Severity.MINOR, "bearing",
                                 "Allowable bearing pressure not referenced to a ground report", "common practice"),
-                        new Finding("PF-A2/shear-y/1", Severity.NOTE, "shear-y",
+                        new Finding("PF-A2/shear-y/claim-ved", Severity.NOTE, "shear-y",
                                 "Shear in y not checked: not applicable to this geometry", "EN 1992-1-1 6.2.2")),
                 List.of(), Optional.empty());
     }

@@ -28,7 +28,43 @@ class RulesetLoaderTest {
             """;
 
     private static RulesetLoader loader(Path dir) {
-        return new RulesetLoader(dir, new RuleVocabulary(Map.of(), Set.of("gamma_c", "gamma_s")));
+        return new RulesetLoader(dir, new RuleVocabulary(Map.of(), Set.of("gamma_c", "gamma_s"), Set.of()));
+    }
+
+    private static RulesetLoader loaderRaising(Path dir, Set<String> findingKinds) {
+        return new RulesetLoader(dir, new RuleVocabulary(Map.of(), Set.of("gamma_c", "gamma_s"), findingKinds));
+    }
+
+    @Test
+    void aFirmMovesASeverityAndKeepsItsMeaning(@TempDir Path dir) throws Exception {
+        Files.writeString(dir.resolve("base.yaml"), BASE + """
+                severities:
+                  claim-conservative: {severity: minor, meaning: a claim on the safe side}
+                """);
+        Files.writeString(dir.resolve("firm.yaml"), """
+                ruleset: 1
+                id: firm
+                extends: base
+                title: Firm
+                severities:
+                  claim-conservative: {severity: note}
+                """);
+        Ruleset r = loaderRaising(dir, Set.of("claim-conservative")).load("firm");
+        assertThat(r.severity("claim-conservative")).isEqualTo("note");
+        assertThat(r.severities().get("claim-conservative").meaning()).isEqualTo("a claim on the safe side");
+        assertThat(r.severities().get("claim-conservative").origin()).endsWith("firm.yaml");
+    }
+
+    @Test
+    void aChainThatGivesARaisedKindNoSeverityIsRefused(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("base.yaml"), BASE + """
+                severities:
+                  capacity: {severity: urgent, meaning: a capacity exceeded}
+                """);
+        List<InputError> errors = catchThrowableOfType(RulesetException.class,
+                () -> loaderRaising(dir, Set.of("capacity", "not-reviewed")).load("base")).errors();
+        assertThat(errors).anySatisfy(e -> assertThat(e.message()).contains("'urgent' is not one of"));
+        assertThat(errors).anySatisfy(e -> assertThat(e.message()).contains("no severity to").contains("not-reviewed"));
     }
 
     private static List<InputError> errors(Path dir, String reference) {

@@ -231,6 +231,16 @@ class SubmissionReaderTest {
     }
 
     @Test
+    void aSingleExposureClassMayBeWrittenWithoutAList(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("single-exposure.yaml");
+        String good = Files.readString(GOOD.resolve("harbour-lane.yaml"), StandardCharsets.UTF_8);
+        assertThat(good).contains("exposure: [XC4]");
+        Files.writeString(file, good.replace("exposure: [XC4]", "exposure: XC4"), StandardCharsets.UTF_8);
+
+        assertThat(pileCap(reader.read(file), 1).materials().exposure()).containsExactly("XC4");
+    }
+
+    @Test
     void aMissingFileIsAnInputErrorNotACrash(@TempDir Path dir) {
         Path missing = dir.resolve("nowhere.yaml");
         assertThatThrownBy(() -> reader.read(missing))

@@ -12,7 +12,7 @@ import java.util.Optional;
 
 /**
  * The cap's bottom steel in each direction and the effective depths it gives
- * (pile-cap-method.md, "Effective depths"): d of layer 1 = h − c − φ1/2, of layer 2 = h − c − φ1 − φ2/2.
+ * (docs/pile-cap.md, "Effective depths"): d of layer 1 = h − c − φ1/2, of layer 2 = h − c − φ1 − φ2/2.
  *
  * @param xBars       the bottom sets running in x
  * @param yBars       the bottom sets running in y
@@ -24,7 +24,7 @@ import java.util.Optional;
  */
 record CapSection(List<BarSet> xBars, List<BarSet> yBars, Step dx, Step dy, Step dMean, Step asX, Step asY) {
 
-    private static final String BASIS = "pile-cap-method.md, effective depths (layer 1 nearest the soffit)";
+    private static final String BASIS = "common practice: layer 1 nearest the soffit (docs/pile-cap.md, effective depths)";
 
     /** The section, or empty when the cap has no reinforcement or no bottom bars at all. */
     static Optional<CapSection> of(PileCap cap) {

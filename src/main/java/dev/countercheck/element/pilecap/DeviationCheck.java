@@ -5,7 +5,7 @@ import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
-import dev.countercheck.review.Severity;
+import dev.countercheck.review.FindingKind;
 import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
@@ -72,11 +72,11 @@ final class DeviationCheck {
         b.value("min", Step.of("P,min,δ", "min P_i with one pile off position by δ (own weight × γG,inf)",
                 whereLeast, least, "kN", BASIS));
         double rc = ctx.cap.piles().compressionKn();
-        b.require(worst, rc, Severity.CRITICAL, capitalised(where) + " carries " + Num.f(worst)
+        b.require(worst, rc, FindingKind.CAPACITY, "capacity", capitalised(where) + " carries " + Num.f(worst)
                 + " kN, more than its design resistance " + Num.f(rc) + " kN.");
         if (least < 0) {
             double rt = ctx.cap.piles().tensionKn();
-            b.require(-least, rt, Severity.CRITICAL, capitalised(whereLeast) + " is in tension, " + Num.f(-least)
+            b.require(-least, rt, FindingKind.CAPACITY, "tension", capitalised(whereLeast) + " is in tension, " + Num.f(-least)
                     + " kN, beyond its tension resistance " + Num.f(rt) + " kN.");
         }
         double rise = (worst - nominalMax) / nominalMax;

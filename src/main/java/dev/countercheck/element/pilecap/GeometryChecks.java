@@ -4,7 +4,7 @@ import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
-import dev.countercheck.review.Severity;
+import dev.countercheck.review.FindingKind;
 import dev.countercheck.submission.PileCap;
 import dev.countercheck.submission.Point;
 
@@ -41,11 +41,11 @@ final class GeometryChecks {
         Step endBearing = b.trace(ctx.rules.parameter("pile_spacing_factor_end_bearing").asStep());
         b.pass();
         if (s < endBearing.value() * phi) {
-            b.fail(Severity.MAJOR, "Piles are " + Num.f(s) + " mm apart, less than " + Num.f(endBearing.value())
+            b.fail(FindingKind.RULE, "spacing", "Piles are " + Num.f(s) + " mm apart, less than " + Num.f(endBearing.value())
                     + "φ = " + Num.f(endBearing.value() * phi) + " mm, the least spacing even for end-bearing piles"
                     + " (common practice).");
         } else if (s < friction.value() * phi) {
-            b.finding(Severity.NOTE, "Piles are " + Num.f(s) + " mm apart, less than " + Num.f(friction.value())
+            b.finding(FindingKind.REMARK, "spacing-friction", "Piles are " + Num.f(s) + " mm apart, less than " + Num.f(friction.value())
                     + "φ = " + Num.f(friction.value() * phi) + " mm: acceptable for end-bearing piles; friction"
                     + " piles this close interact (common practice).");
         } else if (s > friction.value() * phi + 1e-6) {
@@ -78,11 +78,11 @@ final class GeometryChecks {
         b.value("min_edge_deviated", Step.of("e,min,δ", "e,min − δ", Num.f(min) + " − " + Num.f(delta.value()),
                 deviated, "mm", "EN 1992-1-1 9.8.1(1)"));
         Step limit = b.trace(ctx.rules.parameter("min_edge_distance").asStep());
-        b.require(limit.value(), min, Severity.MAJOR, "Pile " + governing + " face is " + Num.f(min)
+        b.require(limit.value(), min, FindingKind.RULE, "edge", "Pile " + governing + " face is " + Num.f(min)
                 + " mm from the cap edge, less than " + Num.f(limit.value()) + " mm (" + limit.clause()
                 + "): the ties may not anchor over the pile.");
         if (min >= limit.value() && deviated < limit.value()) {
-            b.finding(Severity.NOTE, "With pile " + governing + " " + Num.f(delta.value()) + " mm off position"
+            b.finding(FindingKind.REMARK, "edge-deviated", "With pile " + governing + " " + Num.f(delta.value()) + " mm off position"
                     + " towards the edge its face would be " + Num.f(deviated) + " mm from the cap edge, less than "
                     + Num.f(limit.value()) + " mm: check the as-built position.");
         }

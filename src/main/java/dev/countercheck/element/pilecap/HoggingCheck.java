@@ -7,7 +7,7 @@ import dev.countercheck.eurocode.OutOfRangeException;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
-import dev.countercheck.review.Severity;
+import dev.countercheck.review.FindingKind;
 import dev.countercheck.statics.PileGroupReactions.Distribution;
 import dev.countercheck.submission.Point;
 import dev.countercheck.submission.Reinforcement;
@@ -63,7 +63,7 @@ final class HoggingCheck {
         Step k = b.trace(Bending.kFactor(moment.value(), width, d.value(), ctx.fck.value()));
         Step kPrime = b.trace(ctx.rules.parameter("k_prime").asStep());
         if (k.value() > kPrime.value()) {
-            b.fail(Severity.CRITICAL, "K = " + Num.f(k.value()) + " exceeds K' = " + Num.f(kPrime.value())
+            b.fail(FindingKind.CAPACITY, "k-limit", "K = " + Num.f(k.value()) + " exceeds K' = " + Num.f(kPrime.value())
                     + " for the hogging moment: the section needs compression steel or more depth.");
         }
         Step z;
@@ -71,10 +71,10 @@ final class HoggingCheck {
             z = b.trace(Bending.leverArm(k.value(), d.value(), ctx.rules.number("alpha_cc"),
                     ctx.rules.number("gamma_c")));
         } catch (OutOfRangeException e) {
-            return b.fail(Severity.CRITICAL, e.getMessage()).build();
+            return b.fail(FindingKind.CAPACITY, "lever-arm", e.getMessage()).build();
         }
         Step required = b.value("as_required", Bending.asRequired(moment.value(), ctx.fyd.value(), z.value()));
-        b.require(required.value(), provided.value(), Severity.CRITICAL, "Top " + axis.label() + "-bars give "
+        b.require(required.value(), provided.value(), FindingKind.CAPACITY, "capacity", "Top " + axis.label() + "-bars give "
                 + Num.f(provided.value()) + " mm2, less than the " + Num.f(required.value())
                 + " mm2 the hogging moment over the piles in tension needs.");
         return b.build();

@@ -7,7 +7,7 @@ import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
-import dev.countercheck.review.Severity;
+import dev.countercheck.review.FindingKind;
 import dev.countercheck.submission.Column;
 import dev.countercheck.statics.PileGroupReactions;
 import dev.countercheck.submission.Point;
@@ -35,7 +35,7 @@ final class NodeChecks {
                 "(" + Num.f(nMax) + "·1000 − " + Num.f(as) + "·" + Num.f(ctx.fyd.value()) + ")/" + Num.f(area.value()),
                 sigma, "MPa", "EN 1992-1-1 6.5.4; starter bars' share common practice"));
         Step limit = b.value("limit", limit(ctx, b, NodeType.CCC, "node_k1"));
-        b.require(stress.value(), limit.value(), Severity.CRITICAL, "Column node stress " + Num.f(stress.value())
+        b.require(stress.value(), limit.value(), FindingKind.CAPACITY, "capacity", "Column node stress " + Num.f(stress.value())
                 + " MPa exceeds σRd,max = " + Num.f(limit.value()) + " MPa.");
         return b.build();
     }
@@ -52,7 +52,7 @@ final class NodeChecks {
         NodeType type = n >= 3 ? NodeType.CTT : n == 2 ? NodeType.CCT : NodeType.CCC;
         String k = n >= 3 ? "node_k3" : n == 2 ? "node_k2" : "node_k1";
         Step limit = b.value("limit", limit(ctx, b, type, k));
-        b.require(stress.value(), limit.value(), Severity.CRITICAL, "Pile node stress " + Num.f(stress.value())
+        b.require(stress.value(), limit.value(), FindingKind.CAPACITY, "capacity", "Pile node stress " + Num.f(stress.value())
                 + " MPa exceeds σRd,max = " + Num.f(limit.value()) + " MPa (" + type + " node).");
         if (ctx.section.isPresent()) {
             Point col = ctx.cap.column().position();

@@ -7,7 +7,7 @@ import dev.countercheck.eurocode.Shear;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
-import dev.countercheck.review.Severity;
+import dev.countercheck.review.FindingKind;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.Column.ColumnShape;
 import dev.countercheck.submission.Point;
@@ -45,7 +45,7 @@ final class PunchingChecks {
         Step factor = b.trace(ctx.rules.parameter("punching_vrd_max_factor").asStep());
         Step vrdMax = b.value("vrd_max", Punching.vRdMax(factor.value(), nu.value(), ctx.fcdShear.value(),
                 u0.value(), d.value()));
-        b.require(ved.value(), vrdMax.value(), Severity.CRITICAL, "VEd = " + Num.f(ved.value())
+        b.require(ved.value(), vrdMax.value(), FindingKind.CAPACITY, "capacity", "VEd = " + Num.f(ved.value())
                 + " kN at the column face exceeds vRd,max·u0·d = " + Num.f(vrdMax.value()) + " kN.");
         return b.build();
     }
@@ -106,7 +106,7 @@ final class PunchingChecks {
         Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a));
         Step vrd = b.value("vrd", Step.of("VRd", "vRd·u1·d", Num.f(vRd.value()) + "·" + Num.f(u1.value()) + "·"
                 + Num.f(d.value()) + "/1000", vRd.value() * u1.value() * d.value() / 1000, "kN", "EN 1992-1-1 6.4.4"));
-        b.require(ved.value(), vrd.value(), Severity.CRITICAL, "VEd,red = " + Num.f(ved.value())
+        b.require(ved.value(), vrd.value(), FindingKind.CAPACITY, "capacity", "VEd,red = " + Num.f(ved.value())
                 + " kN at the basic control perimeter exceeds VRd = " + Num.f(vrd.value()) + " kN.");
         return b.build();
     }

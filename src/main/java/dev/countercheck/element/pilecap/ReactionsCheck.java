@@ -7,7 +7,8 @@ import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
-import dev.countercheck.review.Severity;
+import dev.countercheck.review.FindingKind;
+import dev.countercheck.review.Slugs;
 
 /**
  * {@code pile-reactions}: the largest and least pile reactions over the ULS cases, against the
@@ -41,20 +42,22 @@ final class ReactionsCheck {
                 "pile " + min.pile + " in " + min.caseName, min.value, "kN", BASIS));
         double rc = ctx.cap.piles().compressionKn();
         double rt = ctx.cap.piles().tensionKn();
-        b.require(max.value, rc, Severity.CRITICAL, "Pile " + max.pile + " carries " + show(max.value) + " in "
+        b.require(max.value, rc, FindingKind.CAPACITY, "compression", "Pile " + max.pile + " carries " + show(max.value) + " in "
                 + max.caseName + ", more than its design resistance " + show(rc) + ".");
         if (min.value < 0) {
-            b.require(-min.value, rt, Severity.CRITICAL, "Pile " + min.pile + " is in tension, " + show(-min.value)
+            b.require(-min.value, rt, FindingKind.CAPACITY, "tension", "Pile " + min.pile + " is in tension, " + show(-min.value)
                     + " in " + min.caseName + ", beyond its tension resistance " + show(rt) + ".");
         }
         for (UlsCase u : ctx.uls) {
             double m = u.withSelfWeight().unresistedKnm();
             if (m > 0.5) {
-                b.finding(Severity.MAJOR, "The piles lie on one line: in " + u.action().name() + " a moment of "
+                b.finding(FindingKind.RULE, "unrestrained-" + Slugs.of(u.action().name()), "The piles lie on one line: in " + u.action().name() + " a moment of "
                         + CheckBuilder.show(m, "kNm") + " about that line is not resisted by the pile group. "
                         + "It needs tie beams or another restraint, which this review did not check.");
             }
         }
+        ForcePlausibility.meganewtonSlips(ctx.cap).forEach(slip -> b.finding(FindingKind.REMARK,
+                "force-unit-" + Slugs.of(slip.caseName()), slip.message()));
         return b.build();
     }
 

@@ -7,7 +7,7 @@ import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.Drawing.SectionLine;
-import dev.countercheck.review.Severity;
+import dev.countercheck.review.FindingKind;
 import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
@@ -77,9 +77,9 @@ final class ShearCheck {
         Step stress = b.trace(Shear.vRdcStress(cRdc.value(), k.value(), rho.value(), ctx.fck.value()));
         Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), ctx.fck.value()));
         Step vrdc = b.value("vrdc", Shear.vRdc(stress, vMin, width, d.value()));
-        b.require(ved.value(), vrdc.value(), Severity.CRITICAL, "VEd = " + Num.f(ved.value()) + " kN exceeds VRd,c = "
+        b.require(ved.value(), vrdc.value(), FindingKind.CAPACITY, "capacity", "VEd = " + Num.f(ved.value()) + " kN exceeds VRd,c = "
                 + Num.f(vrdc.value()) + " kN on the section across " + axis.label() + " (" + worst.caseName + ").");
-        b.require(unreduced.value(), vMax.value(), Severity.CRITICAL, "Unreduced VEd = " + Num.f(unreduced.value())
+        b.require(unreduced.value(), vMax.value(), FindingKind.CAPACITY, "strut-crushing", "Unreduced VEd = " + Num.f(unreduced.value())
                 + " kN exceeds 0.5·b·d·ν·fcd = " + Num.f(vMax.value()) + " kN (EN 1992-1-1 6.2.2(6)).");
         return b.build();
     }

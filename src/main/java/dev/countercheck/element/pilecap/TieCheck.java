@@ -7,7 +7,7 @@ import dev.countercheck.eurocode.OutOfRangeException;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
-import dev.countercheck.review.Severity;
+import dev.countercheck.review.FindingKind;
 import dev.countercheck.submission.PileCap.TieMethod;
 import dev.countercheck.submission.Point;
 
@@ -51,7 +51,7 @@ final class TieCheck {
             Step k = b.trace(Bending.kFactor(moment.value(), width, d.value(), ctx.fck.value()));
             Step kPrime = b.trace(ctx.rules.parameter("k_prime").asStep());
             if (k.value() > kPrime.value()) {
-                b.fail(Severity.CRITICAL, "K = " + Num.f(k.value()) + " exceeds K' = " + Num.f(kPrime.value())
+                b.fail(FindingKind.CAPACITY, "k-limit", "K = " + Num.f(k.value()) + " exceeds K' = " + Num.f(kPrime.value())
                         + ": the section needs compression steel or more depth.");
             }
             Step z;
@@ -59,7 +59,7 @@ final class TieCheck {
                 z = b.value("z", Bending.leverArm(k.value(), d.value(), ctx.rules.number("alpha_cc"),
                         ctx.rules.number("gamma_c")));
             } catch (OutOfRangeException e) {
-                return b.fail(Severity.CRITICAL, e.getMessage()).build();
+                return b.fail(FindingKind.CAPACITY, "lever-arm", e.getMessage()).build();
             }
             force = b.value("force", Truss.forceFromMoment(moment.value(), z.value()));
             required = b.value("as_required", Bending.asRequired(moment.value(), ctx.fyd.value(), z.value()));
@@ -91,7 +91,7 @@ final class TieCheck {
         if (force.value() == 0) {
             return b.pass().build();
         }
-        b.require(required.value(), provided.value(), Severity.CRITICAL, "Bottom " + axis.label() + "-bars give "
+        b.require(required.value(), provided.value(), FindingKind.CAPACITY, "capacity", "Bottom " + axis.label() + "-bars give "
                 + Num.f(provided.value()) + " mm2, less than the " + Num.f(required.value()) + " mm2 the tie needs.");
         return b.build();
     }

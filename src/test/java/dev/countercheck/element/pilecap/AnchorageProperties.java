@@ -1,8 +1,6 @@
 package dev.countercheck.element.pilecap;
 
 import dev.countercheck.element.pilecap.PileCapProperties.Layout;
-import dev.countercheck.review.ClaimComparer;
-import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Value;
 import dev.countercheck.ruleset.Ruleset;
@@ -21,9 +19,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 /** Moving a pile outward (the cap unchanged) never lengthens the anchorage available beyond the piles. */
 class AnchorageProperties {
 
-    private static final Ruleset RULES = CapReviews.ruleset("en1992-recommended");
-    private static final PileCapReviewer REVIEWER =
-            new PileCapReviewer(new ElementAssembler(new ClaimComparer(RULES.number("claim_tolerance"))));
+    private static final Ruleset RULES = PileCapProperties.RULES;
+    private static final PileCapReviewer REVIEWER = PileCapProperties.REVIEWER;
 
     @Property(tries = 30)
     void movingAPileOutwardNeverLengthensTheAvailableAnchorage(@ForAll("layouts") Layout layout,

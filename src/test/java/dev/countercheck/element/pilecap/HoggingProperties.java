@@ -2,8 +2,6 @@ package dev.countercheck.element.pilecap;
 
 import dev.countercheck.element.pilecap.PileCapProperties.Layout;
 import dev.countercheck.review.CheckResult;
-import dev.countercheck.review.ClaimComparer;
-import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Value;
 import dev.countercheck.ruleset.Ruleset;
@@ -22,9 +20,8 @@ import static org.assertj.core.api.Assertions.assertThat;
  */
 class HoggingProperties {
 
-    private static final Ruleset RULES = CapReviews.ruleset("en1992-recommended");
-    private static final PileCapReviewer REVIEWER =
-            new PileCapReviewer(new ElementAssembler(new ClaimComparer(RULES.number("claim_tolerance"))));
+    private static final Ruleset RULES = PileCapProperties.RULES;
+    private static final PileCapReviewer REVIEWER = PileCapProperties.REVIEWER;
 
     @Provide
     Arbitrary<Layout> upliftLayouts() {

@@ -4,6 +4,7 @@ import dev.countercheck.review.ClaimComparer;
 import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.CheckStatus;
 import dev.countercheck.review.ElementAssembler;
+import dev.countercheck.review.SeverityPolicy;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Value;
 import dev.countercheck.ruleset.Ruleset;
@@ -40,9 +41,10 @@ import static org.assertj.core.api.Assertions.within;
  */
 class PileCapProperties {
 
-    private static final Ruleset RULES = CapReviews.ruleset("en1992-recommended");
-    private static final PileCapReviewer REVIEWER =
-            new PileCapReviewer(new ElementAssembler(new ClaimComparer(RULES.number("claim_tolerance"))));
+    static final Ruleset RULES = CapReviews.ruleset("en1992-recommended");
+    static final PileCapReviewer REVIEWER =
+            new PileCapReviewer(new ElementAssembler(new ClaimComparer(RULES.number("claim_tolerance")),
+                    new SeverityPolicy(RULES::severity)));
     private static final SourceLocation HERE = new SourceLocation("generated", 1, 1);
 
     /** A generated cap: a grid of nx × ny piles with its column, loads and bottom bars. */

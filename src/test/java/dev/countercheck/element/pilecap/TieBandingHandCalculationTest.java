@@ -43,10 +43,10 @@ class TieBandingHandCalculationTest {
         assertThat(cap.cautions()).anySatisfy(c -> assertThat(c).contains("y-bars 7, 8, 9, 10 of 16"));
     }
 
-    /** Piles at 3φ or closer (the two-pile hand calculation: 1800 mm = 3·600) are not banded. */
+    /** Piles at 3φ or closer (resources/hand-calcs/two-pile-close.yaml: 1400 mm ≤ 3·500) are not banded. */
     @Test
     void closelySpacedPilesAreNotBanded() {
-        ElementReview close = CapReviews.element("/hand-calcs/two-pile.yaml");
+        ElementReview close = CapReviews.element("/hand-calcs/two-pile-close.yaml");
         assertThat(check(close, "tie-x").values()).doesNotContainKey("as_provided_all");
     }
 
@@ -62,7 +62,7 @@ class TieBandingHandCalculationTest {
     void shearWidthIsTheUnionOfStripsAboutThePilesBeyondTheSection() {
         assertThat(value(cap, "shear-x", "b")).isCloseTo(2200, withinPercentage(0.01)); // hand calculation
         assertThat(value(cap, "shear-x", "vrdc")).isCloseTo(798.7, withinPercentage(0.05)); // hand calculation
-        assertThat(value(CapReviews.element("/hand-calcs/two-pile.yaml"), "shear-x", "b"))
-                .isCloseTo(900, withinPercentage(0.01)); // full cap width (piles at 3φ, not widely spaced)
+        assertThat(value(CapReviews.element("/hand-calcs/two-pile-close.yaml"), "shear-x", "b"))
+                .isCloseTo(850, withinPercentage(0.01)); // full cap width (piles 2.8φ apart, not widely spaced)
     }
 }

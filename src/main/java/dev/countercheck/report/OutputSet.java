@@ -1,0 +1,178 @@
+package dev.countercheck.report;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.DirectoryStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ThreadLocalRandom;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * The files of one submission's review (JSON result, HTML report, PDF, and whatever joins them
+ * with one more {@link #add}), replaced together or not at all. Each file is first written to a
+ * hidden temporary name in the target folder and forced to disk; then an empty journal file is
+ * moved into place, which commits the set; then each temporary file is renamed onto its report and
+ * the journal removed. A run that stops before the journal leaves the previous reports; one killed
+ * after it is completed by the next run in the folder ({@link #recover}), which also removes the
+ * temporary files of runs that died. A file that is not the tool's own report (see {@link
+ * ReportMarkers}) is never replaced.
+ *
+ * <p>Names carry the writing process's id and a set id: {@code .<report>.<pid>.<set>.tmp} and
+ * {@code .countercheck.<pid>.<set>.set}; a process still running keeps its files.
+ */
+public final class OutputSet implements AutoCloseable {
+
+    /** Writes the bytes of a new file and forces them to disk; replaceable in tests (a full disk). */
+    @FunctionalInterface
+    public interface Sink {
+        void write(Path file, byte[] content) throws IOException;
+    }
+
+    /** The disk as it is. */
+    public static final Sink DISK = ReportFiles::write;
+
+    private static final Pattern TEMPORARY = Pattern.compile("\\.(.+)\\.(\\d+)\\.([0-9a-f]{16})\\.tmp");
+    private static final Pattern JOURNAL = Pattern.compile("\\.countercheck\\.(\\d+)\\.([0-9a-f]{16})\\.set");
+
+    /** The journal of a set while it is written; its move to {@code .countercheck.<pid>.<set>.set} commits the set. */
+    private static final String PENDING = "countercheck-set";
+
+    private final Path folder;
+    private final Sink sink;
+    private final String id = ProcessHandle.current().pid() + "." + HexFormat.of().toHexDigits(
+            ThreadLocalRandom.current().nextLong());
+    private final Map<Path, byte[]> files = new LinkedHashMap<>();
+    private final List<Path> written = new ArrayList<>();
+    private boolean committed;
+
+    private OutputSet(Path folder, Sink sink) {
+        this.folder = folder;
+        this.sink = sink;
+    }
+
+    /** A set of files to write into {@code folder}, on disk. */
+    public static OutputSet in(Path folder) {
+        return in(folder, DISK);
+    }
+
+    public static OutputSet in(Path folder, Sink sink) {
+        return new OutputSet(folder.toAbsolutePath().normalize(), sink);
+    }
+
+    /** Adds a file of the set, by its name in the folder. */
+    public OutputSet add(String name, byte[] content) {
+        if (name.contains("/") || name.contains("\\") || name.startsWith(".")) {
+            throw new IllegalArgumentException("a report's name is a plain file name: " + name);
+        }
+        files.put(folder.resolve(name), content);
+        return this;
+    }
+
+    public OutputSet add(String name, String content) {
+        return add(name, content.getBytes(StandardCharsets.UTF_8));
+    }
+
+    /**
+     * Writes every file of the set and replaces the reports together.
+     *
+     * @throws IOException when a file cannot be written (nothing is replaced then), or a report
+     *                     exists that the tool did not write
+     */
+    public void commit() throws IOException {
+        for (Path target : files.keySet()) {
+            if (!ReportMarkers.replaceable(target)) {
+                throw new IOException(target + " exists and was not written by " + ReportMarkers.TOOL
+                        + ": it is left as it is");
+            }
+        }
+        Files.createDirectories(folder);
+        for (Map.Entry<Path, byte[]> file : files.entrySet()) {
+            Path temporary = temporary(file.getKey());
+            written.add(temporary);
+            sink.write(temporary, file.getValue());
+        }
+        Path pending = folder.resolve("." + PENDING + "." + id + ".tmp");
+        written.add(pending);
+        sink.write(pending, new byte[0]);
+        Path journal = folder.resolve(".countercheck." + id + ".set");
+        ReportFiles.move(pending, journal);
+        committed = true;
+        complete(folder, id);
+    }
+
+    /** Removes the temporary files of a set that was not committed. */
+    @Override
+    public void close() throws IOException {
+        if (!committed) {
+            for (Path file : written) {
+                Files.deleteIfExists(file);
+            }
+        }
+    }
+
+    private Path temporary(Path target) {
+        return folder.resolve("." + target.getFileName() + "." + id + ".tmp");
+    }
+
+    /**
+     * Finishes what runs that died in {@code folder} left: a committed set is completed (its
+     * reports replaced), and temporary files of sets that were not committed are removed. Files
+     * of a process still running are left alone. Does nothing when the folder does not exist.
+     */
+    public static void recover(Path folder) throws IOException {
+        if (!Files.isDirectory(folder)) {
+            return;
+        }
+        List<String> names = new ArrayList<>();
+        try (DirectoryStream<Path> listing = Files.newDirectoryStream(folder, ".*")) {
+            listing.forEach(p -> names.add(p.getFileName().toString()));
+        }
+        for (String name : names) {
+            Matcher journal = JOURNAL.matcher(name);
+            if (journal.matches() && !alive(journal.group(1))) {
+                complete(folder, journal.group(1) + "." + journal.group(2));
+            }
+        }
+        for (String name : names) {
+            Matcher temporary = TEMPORARY.matcher(name);
+            if (temporary.matches() && !alive(temporary.group(2))) {
+                Files.deleteIfExists(folder.resolve(name));
+            }
+        }
+    }
+
+    /** Renames every temporary file of committed set {@code id} onto its report, then removes the journal. */
+    private static void complete(Path folder, String id) throws IOException {
+        String suffix = "." + id + ".tmp";
+        List<Path> temporaries = new ArrayList<>();
+        try (DirectoryStream<Path> listing = Files.newDirectoryStream(folder, ".*" + suffix)) {
+            listing.forEach(temporaries::add);
+        }
+        temporaries.sort(null);
+        for (Path temporary : temporaries) {
+            String name = temporary.getFileName().toString();
+            String report = name.substring(1, name.length() - suffix.length());
+            if (!report.equals(PENDING)) {
+                ReportFiles.move(temporary, folder.resolve(report));
+            } else {
+                Files.deleteIfExists(temporary);
+            }
+        }
+        Files.deleteIfExists(folder.resolve(".countercheck." + id + ".set"));
+    }
+
+    private static boolean alive(String pid) {
+        try {
+            return ProcessHandle.of(Long.parseLong(pid)).map(ProcessHandle::isAlive).orElse(false);
+        } catch (NumberFormatException e) {
+            return false;
+        }
+    }
+}
