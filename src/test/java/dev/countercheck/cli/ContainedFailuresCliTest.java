@@ -200,7 +200,8 @@ class ContainedFailuresCliTest {
         assertThat(err.toString()).contains("cannot write the reports")
                 .contains("full".equals(failure) ? "No space left on device" : "permission denied")
                 .contains("previous reports, if any, are left as they were");
-        assertThat(names(out)).containsExactly("harbour-lane.html", "harbour-lane.json");
+        assertThat(names(out)).containsExactly("harbour-lane.html", "harbour-lane.json", "harbour-lane.responses.csv",
+                "harbour-lane.responses.xlsx");
         assertThat(Files.readAllBytes(out.resolve("harbour-lane.json"))).isEqualTo(json);
         assertThat(Files.readAllBytes(out.resolve("harbour-lane.html"))).isEqualTo(html);
     }
@@ -221,7 +222,8 @@ class ContainedFailuresCliTest {
         assertThat(p.waitFor()).isEqualTo(ExitCodes.UNUSABLE);
         assertThat(Files.readString(temp.resolve("log.txt"))).contains("the temporary folder cannot be used for the PDF")
                 .doesNotContain("internal error").doesNotContain("\tat ");
-        assertThat(names(out)).containsExactly("harbour-lane.html", "harbour-lane.json");
+        assertThat(names(out)).containsExactly("harbour-lane.html", "harbour-lane.json", "harbour-lane.responses.csv",
+                "harbour-lane.responses.xlsx");
         assertThat(Files.readAllBytes(out.resolve("harbour-lane.json"))).isEqualTo(json);
     }
 
