@@ -27,6 +27,11 @@ enum Axis {
         return (this == X ? c.cxMm() : c.cyMm()) / 2.0;
     }
 
+    /** The cap's length along this axis, mm (the cap is centred on the origin). */
+    double capLength(PileCap cap) {
+        return this == X ? cap.planXMm() : cap.planYMm();
+    }
+
     /** The cap's width across bars of this direction, mm: the full width of a section across this axis. */
     double capWidth(PileCap cap) {
         return this == X ? cap.planYMm() : cap.planXMm();

@@ -52,7 +52,11 @@ record CapSection(List<BarSet> xBars, List<BarSet> yBars, Step dx, Step dy, Step
         return Optional.of(new CapSection(xs, ys, dx, dy, dMean, area("As,x", xs), area("As,y", ys)));
     }
 
-    private static Step depth(String symbol, List<BarSet> sets, double h, double cover, double phi1) {
+    /**
+     * The effective depth of bar sets {@code sets} from the face with cover {@code cover}: layer 1
+     * h − c − φ/2, layer 2 h − c − φ1 − φ/2.
+     */
+    static Step depth(String symbol, List<BarSet> sets, double h, double cover, double phi1) {
         double phi = sets.stream().mapToDouble(BarSet::diameterMm).max().orElse(phi1);
         int layer = sets.stream().mapToInt(BarSet::layer).max().orElse(1);
         if (layer <= 1) {

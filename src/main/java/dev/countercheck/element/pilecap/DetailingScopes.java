@@ -84,7 +84,8 @@ final class DetailingScopes {
         bars.put("b_t", Variable.number("mm", "cap width across these bars", 2700));
         bars.put("leg", Variable.number("mm", "vertical leg of bent ends: stated, else h − c_bottom − c_top", 1000));
         bars.put("available_from_pile_centre", Variable.number("mm",
-                "length along the bar from the outermost pile centre to the bar end (shorter side)", 600));
+                "length along the bar from the outermost pile centre, moved outward by the plan tolerance δ"
+                        + " (EN 1992-1-1 9.8.1(1)), to the bar end (shorter side)", 600));
         bars.put("has_lap", Variable.bool("the submission declares laps for these bars"));
         bars.put("lap_percent", Variable.number("-", "share of the bars lapped at one section, % (0 without laps)", 50));
         bars.put("lap_length", Variable.number("mm", "lap length provided (0 without laps)", 1200));
@@ -186,7 +187,7 @@ final class DetailingScopes {
         double end = (axis == Axis.X ? cap.planXMm() : cap.planYMm()) / 2 - r.cover().sideMm();
         double far = cap.piles().positions().stream().mapToDouble(axis::along).max().orElse(0);
         double near = cap.piles().positions().stream().mapToDouble(axis::along).min().orElse(0);
-        v.put("available_from_pile_centre", Math.min(end - far, end + near));
+        v.put("available_from_pile_centre", Math.min(end - far, end + near) - ctx.planTolerance().value());
         Optional<Reinforcement.Lap> lap = sets.stream().map(BarSet::lap).flatMap(Optional::stream).findFirst();
         v.put("has_lap", lap.isPresent());
         v.put("lap_percent", lap.map(Reinforcement.Lap::percentLapped).orElse(0.0));

@@ -13,8 +13,9 @@ import java.util.List;
 
 /**
  * {@code pile-reactions-deviation}: each pile in turn moved by the plan tolerance δ in each of eight
- * directions (45° steps), the reactions recomputed for every ULS case; the worst reaction is
- * reported. A caution, not a failure, unless it exceeds the pile's resistance.
+ * directions (45° steps), the reactions recomputed for every ULS case; the largest reaction (own weight
+ * × γG,sup) and the least (own weight × γG,inf, EN 1990 Table A1.2(B)) are reported. A caution, not a
+ * failure, unless one exceeds the pile's resistance in compression or tension.
  */
 final class DeviationCheck {
 
@@ -25,17 +26,20 @@ final class DeviationCheck {
 
     static CheckOutcome run(PileCapContext ctx) {
         CheckBuilder b = Checks.builder("pile-reactions-deviation");
-        Step delta = ctx.cap.piles().toleranceMm()
-                .map(t -> Step.of("δ", "stated plan tolerance", Num.f(t), t, "mm", "submission"))
-                .orElseGet(() -> ctx.rules.parameter("pile_tolerance").asStep());
-        b.trace(delta);
+        Step delta = b.trace(ctx.planTolerance());
         if (ctx.cap.piles().toleranceMm().isEmpty()) {
             b.caution("No pile positional tolerance was stated; " + Num.f(delta.value())
                     + " mm was assumed (common practice).");
         }
         List<Point> nominal = ctx.cap.piles().positions();
+        if (ctx.addsSelfWeight()) {
+            b.trace(ctx.rules.parameter("gamma_g").asStep());
+            b.trace(ctx.rules.parameter("gamma_g_inf").asStep());
+        }
         double worst = Double.NEGATIVE_INFINITY;
         String where = "";
+        double least = Double.POSITIVE_INFINITY;
+        String whereLeast = "";
         double nominalMax = Double.NEGATIVE_INFINITY;
         for (UlsCase u : ctx.uls) {
             nominalMax = Math.max(nominalMax, u.withSelfWeight().max());
@@ -46,21 +50,35 @@ final class DeviationCheck {
                     Point p = nominal.get(moved);
                     shifted.set(moved, new Point(p.xMm() + delta.value() * Math.cos(angle),
                             p.yMm() + delta.value() * Math.sin(angle)));
-                    double[] r = ctx.reactions(shifted, u.action(), true).reactionsKn();
+                    double[] r = ctx.reactions(shifted, u.action(), ctx.gammaGSup()).reactionsKn();
+                    double[] rInf = ctx.reactions(shifted, u.action(), ctx.gammaGInf()).reactionsKn();
                     for (int i = 0; i < r.length; i++) {
+                        String at = "pile " + (i + 1) + " in " + u.action().name() + " when pile " + (moved + 1)
+                                + " is " + Num.f(delta.value()) + " mm off position at " + (45 * dir) + "° from +x";
                         if (r[i] > worst) {
                             worst = r[i];
-                            where = "pile " + (i + 1) + " in " + u.action().name() + " when pile " + (moved + 1)
-                                    + " is " + Num.f(delta.value()) + " mm off position at " + (45 * dir) + "° from +x";
+                            where = at;
+                        }
+                        if (rInf[i] < least) {
+                            least = rInf[i];
+                            whereLeast = at;
                         }
                     }
                 }
             }
         }
-        b.value("max", Step.of("P,max,δ", "max P_i with one pile off position by δ", where, worst, "kN", BASIS));
+        b.value("max", Step.of("P,max,δ", "max P_i with one pile off position by δ (own weight × γG,sup)", where,
+                worst, "kN", BASIS));
+        b.value("min", Step.of("P,min,δ", "min P_i with one pile off position by δ (own weight × γG,inf)",
+                whereLeast, least, "kN", BASIS));
         double rc = ctx.cap.piles().compressionKn();
         b.require(worst, rc, FindingKind.CAPACITY, "capacity", capitalised(where) + " carries " + Num.f(worst)
                 + " kN, more than its design resistance " + Num.f(rc) + " kN.");
+        if (least < 0) {
+            double rt = ctx.cap.piles().tensionKn();
+            b.require(-least, rt, FindingKind.CAPACITY, "tension", capitalised(whereLeast) + " is in tension, " + Num.f(-least)
+                    + " kN, beyond its tension resistance " + Num.f(rt) + " kN.");
+        }
         double rise = (worst - nominalMax) / nominalMax;
         if (worst <= rc && rise > 0) {
             b.caution("With one pile " + Num.f(delta.value()) + " mm off position the largest reaction rises to "

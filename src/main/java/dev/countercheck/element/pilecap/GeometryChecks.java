@@ -73,10 +73,19 @@ final class GeometryChecks {
         }
         b.value("min_edge", Step.of("e,min", "min(Lx/2 − |x_i|, Ly/2 − |y_i|) − φ/2", "pile " + governing, min,
                 "mm", "EN 1992-1-1 9.8.1(1)"));
+        Step delta = b.trace(ctx.planTolerance());
+        double deviated = min - delta.value();
+        b.value("min_edge_deviated", Step.of("e,min,δ", "e,min − δ", Num.f(min) + " − " + Num.f(delta.value()),
+                deviated, "mm", "EN 1992-1-1 9.8.1(1)"));
         Step limit = b.trace(ctx.rules.parameter("min_edge_distance").asStep());
         b.require(limit.value(), min, FindingKind.RULE, "edge", "Pile " + governing + " face is " + Num.f(min)
                 + " mm from the cap edge, less than " + Num.f(limit.value()) + " mm (" + limit.clause()
                 + "): the ties may not anchor over the pile.");
+        if (min >= limit.value() && deviated < limit.value()) {
+            b.finding(FindingKind.REMARK, "edge-deviated", "With pile " + governing + " " + Num.f(delta.value()) + " mm off position"
+                    + " towards the edge its face would be " + Num.f(deviated) + " mm from the cap edge, less than "
+                    + Num.f(limit.value()) + " mm: check the as-built position.");
+        }
         return b.build();
     }
 }

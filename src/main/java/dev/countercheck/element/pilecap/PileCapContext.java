@@ -23,8 +23,13 @@ import java.util.Optional;
  */
 final class PileCapContext {
 
-    /** One ULS case with its reactions. */
-    record UlsCase(ActionCase action, Distribution withSelfWeight, Distribution columnOnly) {
+    /**
+     * One ULS case with its reactions: with the cap's own weight factored by γG,sup (for the largest
+     * reactions), from the column actions alone, and with the own weight factored by γG,inf (for the least
+     * reaction, EN 1990 Table A1.2(B)).
+     */
+    record UlsCase(ActionCase action, Distribution withSelfWeight, Distribution columnOnly,
+                   Distribution withFavourableSelfWeight) {
     }
 
     final PileCap cap;
@@ -61,7 +66,8 @@ final class PileCapContext {
         List<UlsCase> cases = new ArrayList<>();
         for (ActionCase a : cap.actions()) {
             if (a.kind() == ActionCase.Kind.ULS) {
-                cases.add(new UlsCase(a, reactions(a, addsSelfWeight()), reactions(a, false)));
+                cases.add(new UlsCase(a, reactions(a, addsSelfWeight()), reactions(a, false),
+                        reactions(cap.piles().positions(), a, gammaGInf())));
             }
         }
         this.uls = List.copyOf(cases);
@@ -73,7 +79,22 @@ final class PileCapContext {
 
     /** γG·Wcap, the factored self weight the review adds to each ULS case (0 when already included). */
     double factoredSelfWeightKn() {
-        return addsSelfWeight() ? rules.number("gamma_g") * selfWeight.value() : 0.0;
+        return factoredSelfWeightKn(gammaGSup());
+    }
+
+    /** γ·Wcap for a partial factor γ on the cap's own weight (0 when the actions already include it). */
+    double factoredSelfWeightKn(double gamma) {
+        return addsSelfWeight() ? gamma * selfWeight.value() : 0.0;
+    }
+
+    /** γG,sup, the factor on the own weight where it adds to the effect (EN 1990 Table A1.2(B)). */
+    double gammaGSup() {
+        return rules.number("gamma_g");
+    }
+
+    /** γG,inf, the factor on the own weight where it relieves the effect (EN 1990 Table A1.2(B)). */
+    double gammaGInf() {
+        return rules.number("gamma_g_inf");
     }
 
     Distribution reactions(ActionCase a, boolean withSelfWeight) {
@@ -85,10 +106,18 @@ final class PileCapContext {
      * a group that lies on one line as designed is analysed on that line.
      */
     Distribution reactions(List<Point> piles, ActionCase a, boolean withSelfWeight) {
+        return reactions(piles, a, withSelfWeight ? gammaGSup() : 0.0);
+    }
+
+    /**
+     * Reactions of piles at {@code piles} under action case {@code a} with the cap's own weight factored
+     * by {@code gammaG} (0: without it; ignored when the actions already include it).
+     */
+    Distribution reactions(List<Point> piles, ActionCase a, double gammaG) {
         List<Load> loads = new ArrayList<>();
         loads.add(new Load("N", a.nKn(), plan(cap.column().position())));
-        if (withSelfWeight && addsSelfWeight()) {
-            loads.add(new Load("γG·Wcap", factoredSelfWeightKn(), new PlanPoint(0, 0)));
+        if (gammaG > 0 && addsSelfWeight()) {
+            loads.add(new Load("γG·Wcap", factoredSelfWeightKn(gammaG), new PlanPoint(0, 0)));
         }
         double h = cap.depthMm() / 1000.0;
         return PileGroupReactions.solve(plan(piles), loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h,
@@ -120,6 +149,16 @@ final class PileCapContext {
     /** Half the column's size along an axis for one-way shear and the bending method, mm. */
     double columnHalf(Axis axis) {
         return equivalentSquare().map(s -> s.value() / 2).orElse(axis.columnHalf(cap.column()));
+    }
+
+    /**
+     * δ, the plan positional tolerance of the piles: as stated, else the ruleset's {@code pile_tolerance}
+     * (common practice 75 mm, an assumption the checks using it state).
+     */
+    Step planTolerance() {
+        return cap.piles().toleranceMm()
+                .map(t -> Step.of("δ", "stated plan tolerance", Num.f(t), t, "mm", "submission"))
+                .orElseGet(() -> rules.parameter("pile_tolerance").asStep());
     }
 
     /** The largest column N over the ULS cases (the cap's own weight is not part of it). */

@@ -29,15 +29,17 @@ final class PileCapReviewer {
     /** The assumptions every pile-cap review makes, for the report. */
     static final List<String> ASSUMPTIONS = List.of(
             "Pile caps are rigid: pile reactions vary linearly with position (common practice). The cap's own"
-                    + " weight (γconc × plan area × h, factored by γG) is added at the cap centre unless the"
-                    + " submission says it is included in the actions.",
+                    + " weight (γconc × plan area × h) is added at the cap centre unless the submission says it is"
+                    + " included in the actions, factored by γG,sup for the largest reactions and by γG,inf for"
+                    + " the least (EN 1990 Table A1.2(B)).",
             "Horizontal forces at the top of the cap add H·h to the moment at pile-head level; piles are taken"
                     + " to carry no moment.",
             "Ties: strut-and-tie model with one node under the column centre and lever arm z = (z/d)·d; the tie"
                     + " force uses the full pile reactions, including the cap's own weight (conservative).",
             "One-way shear: the critical section lies a share of the pile diameter (ruleset, common practice"
                     + " 0.2φ) inside the face of the nearest pile beyond the column face; each pile's reaction is reduced by its own β = av/2d"
-                    + " with av ≥ 0.5d (EN 1992-1-1 6.2.2(6)); the full cap width resists.",
+                    + " with av ≥ 0.5d (EN 1992-1-1 6.2.2(6)); the full cap width resists, except over widely spaced"
+                    + " piles, where strips of 3φ about the piles beyond the section do (ruleset, common practice).",
             "Punching at the column face uses the full column perimeter (an internal column); β comes from the"
                     + " column moments Mx, My (EN 1992-1-1 Exp. (6.39), (6.42)), with u and W of the full perimeter"
                     + " even where a free edge cuts it. Control perimeters are searched from d/50 to 2d from the column face (step from"
@@ -48,12 +50,13 @@ final class PileCapReviewer {
             "Concrete properties come from the expressions of EN 1992-1-1 Table 3.1, unrounded.");
 
     /** The ruleset parameters the pile-cap checks read. */
-    static final Set<String> PARAMETERS = Set.of("gamma_c", "gamma_s", "gamma_g", "alpha_cc",
+    static final Set<String> PARAMETERS = Set.of("gamma_c", "gamma_s", "gamma_g", "gamma_g_inf", "alpha_cc",
             "alpha_cc_shear", "alpha_ct", "c_rdc_factor", "v_min_coefficient", "punching_vrd_max_factor",
-            "punching_search_step", "node_k1",
-            "node_k2", "node_k3", "circular_column_square", "stress_block_lambda", "xi_limit", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
+            "punching_search_step", "node_k1", "node_k2", "node_k3", "circular_column_square", "stress_block_lambda",
+            "xi_limit", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
             "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
-            "shear_section_inside_pile");
+            "shear_section_inside_pile", "band_spacing_limit", "band_half_width",
+            "shear_strip_width");
 
     private final ElementAssembler assembler;
 
@@ -93,6 +96,8 @@ final class PileCapReviewer {
                 Map.entry("edge-distance", GeometryChecks::edgeDistance),
                 Map.entry("tie-x", c -> TieCheck.run(c, Axis.X)),
                 Map.entry("tie-y", c -> TieCheck.run(c, Axis.Y)),
+                Map.entry("hogging-x", c -> HoggingCheck.run(c, Axis.X)),
+                Map.entry("hogging-y", c -> HoggingCheck.run(c, Axis.Y)),
                 Map.entry("shear-x", c -> ShearCheck.run(c, Axis.X)),
                 Map.entry("shear-y", c -> ShearCheck.run(c, Axis.Y)),
                 Map.entry("punching-face", PunchingChecks::face),

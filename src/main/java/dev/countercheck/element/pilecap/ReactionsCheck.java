@@ -12,7 +12,8 @@ import dev.countercheck.review.Slugs;
 
 /**
  * {@code pile-reactions}: the largest and least pile reactions over the ULS cases, against the
- * piles' design resistances in compression and tension.
+ * piles' design resistances in compression and tension. The cap's own weight takes γG,sup for the
+ * largest reaction and γG,inf for the least (EN 1990 Table A1.2(B)).
  */
 final class ReactionsCheck {
 
@@ -26,16 +27,18 @@ final class ReactionsCheck {
         if (ctx.addsSelfWeight()) {
             b.trace(ctx.selfWeight);
             b.trace(ctx.rules.parameter("gamma_g").asStep());
+            b.trace(ctx.rules.parameter("gamma_g_inf").asStep());
         }
         Extreme max = Extreme.over(ctx, true);
         Extreme min = Extreme.over(ctx, false);
         PileGroupReactions.trace(max.distribution, max.caseName).forEach(b::trace);
-        if (!min.caseName.equals(max.caseName)) {
-            PileGroupReactions.trace(min.distribution, min.caseName).forEach(b::trace);
+        if (ctx.addsSelfWeight() || !min.caseName.equals(max.caseName)) {
+            String label = ctx.addsSelfWeight() ? min.caseName + ", γG,inf" : min.caseName;
+            PileGroupReactions.trace(min.distribution, label).forEach(b::trace);
         }
         b.value("max", Step.of("P,max", "max P_i over piles and ULS cases",
                 "pile " + max.pile + " in " + max.caseName, max.value, "kN", BASIS));
-        b.value("min", Step.of("P,min", "min P_i over piles and ULS cases",
+        b.value("min", Step.of("P,min", "min P_i over piles and ULS cases (own weight × γG,inf)",
                 "pile " + min.pile + " in " + min.caseName, min.value, "kN", BASIS));
         double rc = ctx.cap.piles().compressionKn();
         double rt = ctx.cap.piles().tensionKn();
@@ -62,17 +65,21 @@ final class ReactionsCheck {
         return Num.f(kn) + " kN";
     }
 
-    /** The governing reaction of one kind (largest or least) over all ULS cases. */
+    /**
+     * The governing reaction of one kind over all ULS cases: the largest with the own weight × γG,sup,
+     * the least with the own weight × γG,inf.
+     */
     private record Extreme(double value, int pile, String caseName, Distribution distribution) {
 
         static Extreme over(PileCapContext ctx, boolean largest) {
             Extreme best = null;
             for (UlsCase u : ctx.uls) {
-                double[] p = u.withSelfWeight().reactionsKn();
+                Distribution d = largest ? u.withSelfWeight() : u.withFavourableSelfWeight();
+                double[] p = d.reactionsKn();
                 for (int i = 0; i < p.length; i++) {
                     boolean better = best == null || (largest ? p[i] > best.value : p[i] < best.value);
                     if (better) {
-                        best = new Extreme(p[i], i + 1, u.action().name(), u.withSelfWeight());
+                        best = new Extreme(p[i], i + 1, u.action().name(), d);
                     }
                 }
             }

@@ -25,7 +25,8 @@ final class ShearCheck {
     }
 
     /** One side of one case: reduced and unreduced shear, and the steps of its nearest pile. */
-    private record Side(double ved, double unreduced, String caseName, Step av, Step beta, List<Step> steps) {
+    private record Side(double ved, double unreduced, String caseName, Step av, Step beta, List<Step> steps,
+                        List<Point> piles) {
     }
 
     static CheckOutcome run(PileCapContext ctx, Axis axis) {
@@ -63,11 +64,12 @@ final class ShearCheck {
                 worst.ved, "kN", "EN 1992-1-1 6.2.2(6)"));
         Step unreduced = b.value("ved_unreduced", Step.of("VEd,0", "Σ P_i (piles beyond the face)",
                 worstUnreduced.caseName, worstUnreduced.unreduced, "kN", "EN 1992-1-1 6.2.2(6)"));
-        double width = axis.capWidth(ctx.cap);
+        ShearWidth effective = ShearWidth.of(ctx, axis, worst.piles, section);
+        double width = b.value("b", effective.width()).value();
         Step nu = b.trace(Shear.nu(ctx.fck.value()));
         b.trace(ctx.fcdShear);
         Step vMax = b.value("vrd_max", Shear.vEdMax(nu.value(), ctx.fcdShear.value(), width, d.value()));
-        Step rho = b.trace(Shear.rhoL(section.as(axis.bars()).value(), width, d.value()));
+        Step rho = b.trace(Shear.rhoL(b.trace(effective.as()).value(), width, d.value()));
         Step k = b.trace(Shear.kSize(d.value()));
         double gammaC = ctx.rules.number("gamma_c");
         double cRdcFactor = ctx.rules.number("c_rdc_factor");
@@ -128,6 +130,7 @@ final class ShearCheck {
         Step nearestAv = null;
         Step nearestBeta = null;
         List<Step> steps = new ArrayList<>();
+        List<Point> beyond = new ArrayList<>();
         for (int i = 0; i < piles.size(); i++) {
             double distance = sign * (axis.along(piles.get(i)) - face);
             if (distance <= 0) {
@@ -136,6 +139,7 @@ final class ShearCheck {
             Step raw = shearSpan(ctx, i + 1, distance);
             Step av = Shear.avFloored(raw.value(), dMm);
             Step beta = Shear.betaShortSpan(av.value(), dMm);
+            beyond.add(piles.get(i));
             steps.add(raw);
             steps.add(av);
             steps.add(beta);
@@ -149,6 +153,7 @@ final class ShearCheck {
         if (nearestAv == null) {
             return null;
         }
-        return new Side(Math.max(0, ved), Math.max(0, unreduced), u.action().name(), nearestAv, nearestBeta, steps);
+        return new Side(Math.max(0, ved), Math.max(0, unreduced), u.action().name(), nearestAv, nearestBeta, steps,
+                beyond);
     }
 }

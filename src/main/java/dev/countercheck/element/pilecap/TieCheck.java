@@ -3,7 +3,6 @@ package dev.countercheck.element.pilecap;
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Bending;
 import dev.countercheck.eurocode.Num;
-import dev.countercheck.eurocode.OutOfRangeException;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
@@ -13,6 +12,7 @@ import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * {@code tie-x}, {@code tie-y}: the bottom tie steel of one direction, by the truss method (single
@@ -54,21 +54,11 @@ final class TieCheck {
             Step moment = b.value("moment", Step.of("M", "Σ P_i·(distance beyond the column face)",
                     side.terms + " (" + side.caseName + ")", side.sumKnMm / 1000, "kNm", "EN 1992-1-1 6.1"));
             double width = axis.capWidth(ctx.cap);
-            Step k = b.trace(Bending.kFactor(moment.value(), width, d.value(), ctx.fck.value()));
-            Step kPrime = b.trace(Bending.kPrime(ctx.rules.number("alpha_cc"), ctx.rules.number("gamma_c"),
-                    b.trace(ctx.rules.parameter("stress_block_lambda").asStep()).value(),
-                    b.trace(ctx.rules.parameter("xi_limit").asStep()).value()));
-            if (k.value() > kPrime.value()) {
-                b.fail(FindingKind.CAPACITY, "k-limit", "K = " + Num.f(k.value()) + " exceeds K' = " + Num.f(kPrime.value())
-                        + ": the section needs compression steel or more depth.");
+            Optional<Step> lever = StressBlock.leverArm(ctx, b, moment.value(), width, d.value(), "");
+            if (lever.isEmpty()) {
+                return b.build();
             }
-            Step z;
-            try {
-                z = b.value("z", Bending.leverArm(k.value(), d.value(), ctx.rules.number("alpha_cc"),
-                        ctx.rules.number("gamma_c")));
-            } catch (OutOfRangeException e) {
-                return b.fail(FindingKind.CAPACITY, "lever-arm", e.getMessage()).build();
-            }
+            Step z = b.value("z", lever.get());
             force = b.value("force", Truss.forceFromMoment(moment.value(), z.value()));
             required = b.value("as_required", Bending.asRequired(moment.value(), ctx.fyd.value(), z.value()));
         } else {
@@ -76,7 +66,26 @@ final class TieCheck {
             force = b.value("force", Truss.tieForce(side.sumKnMm, side.terms + " (" + side.caseName + ")", z.value()));
             required = b.value("as_required", Truss.tieArea(force.value(), ctx.fyd.value()));
         }
-        Step provided = b.value("as_provided", section.as(axis.bars()));
+        Step all = section.as(axis.bars());
+        Optional<TieBands> bands = TieBands.of(ctx, axis, axis == Axis.X ? section.xBars() : section.yBars(),
+                all.value());
+        Step provided;
+        if (bands.isPresent()) {
+            b.trace(ctx.rules.parameter("band_spacing_limit").asStep());
+            b.trace(ctx.rules.parameter("band_half_width").asStep());
+            b.value("as_provided_all", all);
+            provided = b.value("as_provided", bands.get().counted());
+            if (!bands.get().outside().isEmpty()) {
+                b.caution("Piles more than " + Num.f(ctx.rules.number("band_spacing_limit")) + "φ apart: the tie"
+                        + " steel belongs in bands over the piles (EN 1992-1-1 9.8.1(3)). Bottom " + axis.label()
+                        + "-bars " + bands.get().outside().stream().map(String::valueOf)
+                        .collect(java.util.stream.Collectors.joining(", ")) + " of " + bands.get().count()
+                        + " (counted from the −" + (axis == Axis.X ? "y" : "x") + " edge) lie outside the bands and"
+                        + " were not counted as tie steel.");
+            }
+        } else {
+            provided = b.value("as_provided", all);
+        }
         if (force.value() == 0) {
             return b.pass().build();
         }

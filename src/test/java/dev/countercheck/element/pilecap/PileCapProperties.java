@@ -41,8 +41,8 @@ import static org.assertj.core.api.Assertions.within;
  */
 class PileCapProperties {
 
-    private static final Ruleset RULES = CapReviews.ruleset("en1992-recommended");
-    private static final PileCapReviewer REVIEWER =
+    static final Ruleset RULES = CapReviews.ruleset("en1992-recommended");
+    static final PileCapReviewer REVIEWER =
             new PileCapReviewer(new ElementAssembler(new ClaimComparer(RULES.number("claim_tolerance")),
                     new SeverityPolicy(RULES::severity)));
     private static final SourceLocation HERE = new SourceLocation("generated", 1, 1);
