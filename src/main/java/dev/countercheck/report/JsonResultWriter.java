@@ -24,9 +24,9 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * Writes a finished {@link Review} as the JSON result of {@code results.md}.
+ * Writes a finished {@link Review} as the JSON result of {@code docs/results.md}.
  *
- * <p>Keys appear in the order of {@code results.md}; fields the spec adds beside it
+ * <p>Keys appear in the order of {@code docs/results.md}; fields the spec adds beside it
  * ({@code review_date}, {@code assumptions}, the submission's {@code prepared_by} and
  * {@code date}, the ruleset's {@code files}) sit where they read naturally. Absent optional
  * fields are left out, never written as {@code null}. Numbers are rounded as

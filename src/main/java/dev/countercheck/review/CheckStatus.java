@@ -1,6 +1,6 @@
 package dev.countercheck.review;
 
-/** Outcome of one check (results.md). */
+/** Outcome of one check (docs/results.md). */
 public enum CheckStatus {
     PASS("pass"), FAIL("fail"), NOT_APPLICABLE("not-applicable"), NOT_CHECKED("not-checked");
 

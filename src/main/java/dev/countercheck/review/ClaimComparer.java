@@ -6,7 +6,7 @@ import dev.countercheck.submission.CheckCatalogue.SafeSide;
 import dev.countercheck.submission.Claim;
 
 /**
- * Compares one claimed value with the recomputed one (results.md, pile-cap-method.md "Claims").
+ * Compares one claimed value with the recomputed one (docs/results.md, docs/pile-cap.md).
  * The tolerance is inclusive: |claimed − computed| ≤ tolerance·|computed| agrees.
  */
 public final class ClaimComparer {

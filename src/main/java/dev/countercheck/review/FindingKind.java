@@ -1,7 +1,7 @@
 package dev.countercheck.review;
 
 /**
- * What a finding says is wrong, so that its severity can come from the ruleset (results.md: a firm
+ * What a finding says is wrong, so that its severity can come from the ruleset (docs/results.md: a firm
  * may move severities). Each kind has the name the ruleset's {@code severities} section uses.
  */
 public enum FindingKind {

@@ -1,6 +1,6 @@
 package dev.countercheck.review;
 
-/** Severity of a finding, most severe first (results.md). */
+/** Severity of a finding, most severe first (docs/results.md). */
 public enum Severity {
     /** A capacity exceeded, or an unconservative claim beyond tolerance on a safety-relevant quantity. */
     CRITICAL("critical"),

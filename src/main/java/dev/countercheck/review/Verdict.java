@@ -1,6 +1,6 @@
 package dev.countercheck.review;
 
-/** Verdict on an element or a whole submission (results.md). */
+/** Verdict on an element or a whole submission (docs/results.md). */
 public enum Verdict {
     CONFORMS("conforms"), CONFORMS_WITH_REMARKS("conforms-with-remarks"), DOES_NOT_CONFORM("does-not-conform"),
     INCOMPLETE("incomplete");

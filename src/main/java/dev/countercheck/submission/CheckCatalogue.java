@@ -28,8 +28,8 @@ public final class CheckCatalogue {
     }
 
     /**
-     * What a check protects: a failing strength check, or an unconservative claim on one, is
-     * critical; a detailing or geometry rule not met is major (results.md).
+     * What a check protects: a strength check compares a demand with a recomputed capacity; a
+     * detailing check applies a rule of the code or of practice (severities: docs/results.md).
      */
     public enum Kind { STRENGTH, DETAILING }
 

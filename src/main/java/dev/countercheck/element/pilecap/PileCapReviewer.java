@@ -23,7 +23,7 @@ import java.util.function.Function;
 
 import static dev.countercheck.submission.PileCapChecks.CATALOGUE;
 
-/** Reviews one pile cap: every check of pile-cap-method.md that this version performs. */
+/** Reviews one pile cap: every check of docs/pile-cap.md that this version performs. */
 final class PileCapReviewer {
 
     /** The assumptions every pile-cap review makes, for the report. */
