@@ -122,11 +122,6 @@ final class PileCapContext {
         return equivalentSquare().map(s -> s.value() / 2).orElse(axis.columnHalf(cap.column()));
     }
 
-    /** The largest column N over the ULS cases (the cap's own weight is not part of it). */
-    double maxColumnN() {
-        return uls.stream().mapToDouble(u -> u.action().nKn()).max().orElse(0);
-    }
-
     String clauseOf(String parameter) {
         return rules.parameter(parameter).clause();
     }

@@ -38,7 +38,8 @@ import static org.assertj.core.api.Assertions.withinPercentage;
  *     0.018996; VEd,red = 5000 − 4·1250·0.018996 = 4905.0 kN; vRd = 0.35580·1800/486 = 1.3178 MPa;
  *     VRd = 1.3178·5053.6·900 = 5993.5 kN, ratio 0.8184. At a = 468 (share 0.0043934) the ratio is
  *     4978.0/6084.8 = 0.8181, at a = 504 4803.6/5908.8 = 0.8129: a = 486 governs.</li>
- * <li>node-column: (5000·1000 − 1963.5·434.78)/250 000 = 16.585 MPa ≤ 1.0·0.88·20 = 17.6 MPa.</li>
+ * <li>node-column: no moment, A_eff = Ac = 250 000 mm²; σsc = min(434.78; 200 000·0.002) = 400 MPa;
+ *     5000·1000/250 000 − (1963.5/250 000)·400 = 20 − 3.1416 = 16.858 MPa ≤ 1.0·0.88·20 = 17.6 MPa.</li>
  * <li>node-pile: 1250·1000/(π·250²) = 6.366 MPa ≤ 0.75·0.88·20 = 13.2 MPa (CTT);
  *     strut angle atan(900/1060.7) = 40.31°.</li>
  * <li>anchorage-starters: fctm = 0.3·30^(2/3) = 2.8965; fctd = 0.7·2.8965/1.5 = 1.3517;
@@ -91,7 +92,7 @@ class FourPileCapHandCalculationTest {
 
     @Test
     void nodeStresses() {
-        assertThat(value(CAP, "node-column", "stress")).isCloseTo(16.585, withinPercentage(0.1)); // hand calculation
+        assertThat(value(CAP, "node-column", "stress")).isCloseTo(16.858, withinPercentage(0.1)); // hand calculation
         assertThat(value(CAP, "node-column", "limit")).isCloseTo(17.6, withinPercentage(0.01)); // hand calculation
         assertThat(value(CAP, "node-pile", "stress")).isCloseTo(6.366, withinPercentage(0.1)); // hand calculation
         assertThat(value(CAP, "node-pile", "limit")).isCloseTo(13.2, withinPercentage(0.01)); // hand calculation
