@@ -40,6 +40,49 @@ public final class Nodes {
     }
 
     /**
+     * Stress in compressed reinforcement at the concrete's strain limit, EN 1992-1-1 3.1.7 and 3.2.7:
+     * σsc = min(fyd; Es·εc2).
+     *
+     * @param fydMpa fyd, MPa, &gt; 0
+     * @param esMpa  Es, MPa, &gt; 0
+     * @param epsC2  εc2, -, &gt; 0
+     * @return σsc, MPa
+     */
+    public static Step steelCompressionStress(double fydMpa, double esMpa, double epsC2) {
+        String clause = "EN 1992-1-1 3.1.7, 3.2.7(4), Table 3.1 (εc2)";
+        Bounds.positive("fyd", fydMpa, "MPa", clause);
+        Bounds.positive("Es", esMpa, "MPa", clause);
+        Bounds.positive("εc2", epsC2, "-", clause);
+        return Step.of("σsc", "min(fyd; Es·εc2)", "min(" + Num.f(fydMpa) + "; " + Num.f(esMpa) + "·" + Num.f(epsC2)
+                + ")", Math.min(fydMpa, esMpa * epsC2), "MPa", clause);
+    }
+
+    /**
+     * Bearing stress of a column node under an eccentric resultant, EN 1992-1-1 6.5.4: the load on the
+     * effective area centred on the resultant, less the starter bars' share, floored at 0:
+     * σ = N/A_eff − (As/Ac)·σsc.
+     *
+     * @param nKn    N, kN, &gt; 0
+     * @param aEffMm2 A_eff = (cx − 2|ex|)·(cy − 2|ey|), mm², &gt; 0
+     * @param asMm2  starter bar area, mm², ≥ 0
+     * @param acMm2  column area, mm², &gt; 0
+     * @param sigmaScMpa σsc from {@link #steelCompressionStress}, MPa, ≥ 0
+     * @return σEd, MPa
+     */
+    public static Step eccentricNodeStress(double nKn, double aEffMm2, double asMm2, double acMm2, double sigmaScMpa) {
+        String clause = "EN 1992-1-1 6.5.4; effective area under the eccentric resultant";
+        Bounds.positive("N", nKn, "kN", clause);
+        Bounds.positive("A_eff", aEffMm2, "mm2", clause);
+        Bounds.nonNegative("As", asMm2, "mm2", clause);
+        Bounds.positive("Ac", acMm2, "mm2", clause);
+        Bounds.nonNegative("σsc", sigmaScMpa, "MPa", clause);
+        double sigma = nKn * 1000 / aEffMm2 - asMm2 / acMm2 * sigmaScMpa;
+        Step step = Step.of("σEd", "max(0; N/A_eff − (As/Ac)·σsc)", Num.f(nKn) + "·1000/" + Num.f(aEffMm2) + " − ("
+                + Num.f(asMm2) + "/" + Num.f(acMm2) + ")·" + Num.f(sigmaScMpa), Math.max(0, sigma), "MPa", clause);
+        return sigma < 0 ? step.remarked("the starter bars carry the whole load: floored at 0") : step;
+    }
+
+    /**
      * Angle of a strut to the horizontal, from the strut-and-tie geometry of EN 1992-1-1 6.5.1:
      * θ = atan(z/l), z the lever arm between node and tie, l the plan distance between the nodes.
      *

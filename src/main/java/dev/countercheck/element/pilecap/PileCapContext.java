@@ -161,11 +161,6 @@ final class PileCapContext {
                 .orElseGet(() -> rules.parameter("pile_tolerance").asStep());
     }
 
-    /** The largest column N over the ULS cases (the cap's own weight is not part of it). */
-    double maxColumnN() {
-        return uls.stream().mapToDouble(u -> u.action().nKn()).max().orElse(0);
-    }
-
     String clauseOf(String parameter) {
         return rules.parameter(parameter).clause();
     }

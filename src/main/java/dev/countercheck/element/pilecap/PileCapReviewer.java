@@ -52,8 +52,8 @@ final class PileCapReviewer {
     /** The ruleset parameters the pile-cap checks read. */
     static final Set<String> PARAMETERS = Set.of("gamma_c", "gamma_s", "gamma_g", "gamma_g_inf", "alpha_cc",
             "alpha_cc_shear", "alpha_ct", "c_rdc_factor", "v_min_coefficient", "punching_vrd_max_factor",
-            "punching_search_step", "node_k1", "node_k2", "node_k3", "circular_column_square", "stress_block_lambda",
-            "xi_limit", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
+            "punching_search_step", "node_k1", "node_k2", "node_k3", "circular_column_square", "steel_modulus",
+            "eps_c2", "stress_block_lambda", "xi_limit", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
             "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
             "shear_section_inside_pile", "band_spacing_limit", "band_half_width",
             "shear_strip_width");
