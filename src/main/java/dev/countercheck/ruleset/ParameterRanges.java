@@ -14,6 +14,7 @@ import java.util.Optional;
  *   <li>other plain numbers: 0 to 100, as a submission's plain numbers;
  *   <li>unit weights (kN/m3): 1 to 100, concrete weighs some 25;
  *   <li>lengths (mm): 0 to 100 m, as a submission's lengths;
+ *   <li>moduli ({@code *_modulus}, MPa): 1000 to 1 000 000 (steel 200 000, EN 1992-1-1 3.2.7(4));
  *   <li>stresses (MPa): 0 to 1000, as a submission's stresses;
  *   <li>angles (deg): greater than 0, less than 90.
  * </ul>
@@ -35,6 +36,9 @@ final class ParameterRanges {
         }
         if ("-".equals(unit) && name.endsWith("_factor")) {
             return outside(value, written, 0, false, 100, true, "a factor", "greater than 0 and at most 100");
+        }
+        if ("MPa".equals(unit) && name.endsWith("_modulus")) {
+            return outside(value, written, 1000, true, 1e6, true, "a modulus", "from 1000 to 1000000 MPa (steel: 200000 MPa)");
         }
         return switch (unit) {
             case "-" -> outside(value, written, 0, true, 100, true, "a plain number", "from 0 to 100");
