@@ -85,13 +85,15 @@ class CommandsTest {
 
     @Test
     void failOnMinorTurnsMinorFindingsIntoExitOne(@TempDir Path dir) throws IOException {
-        // quayside-annex less its element that could not be reviewed (PC-Q3) has only minor findings (its
-        // comment says so): exit 0 by default, 1 with --fail-on minor.
+        // quayside-annex less its incomplete elements (PC-Q2, whose column node under ULS-wind could not be
+        // checked, and PC-Q3, not reviewed) has only minor findings (its comment says so): exit 0 by
+        // default, 1 with --fail-on minor.
         ObjectNode sample = (ObjectNode) new ObjectMapper(new YAMLFactory())
                 .readTree(Path.of("sample-submissions/quayside-annex.yaml").toFile());
         ArrayNode elements = (ArrayNode) sample.get("elements");
         for (int i = elements.size() - 1; i >= 0; i--) {
-            if (elements.get(i).get("id").asText().equals("PC-Q3")) {
+            String id = elements.get(i).get("id").asText();
+            if (id.equals("PC-Q2") || id.equals("PC-Q3")) {
                 elements.remove(i);
             }
         }

@@ -57,8 +57,15 @@ class PileCapProperties {
                     barPhi, offsetX, offsetY);
         }
 
+        /**
+         * Every column action scaled together. Scaling N alone is no monotone load: at fixed moments a
+         * larger N moves the resultant inward, and when e > c/4 the effective bearing area of the column
+         * node grows faster than N (d(N/(c − 2M/N))/dN < 0), so that node's stress falls (found by this
+         * property when the node began to take moments).
+         */
         Layout withLoadFactor(double factor) {
-            return new Layout(nx, ny, spacingX, spacingY, phi, cx, cy, depth, n * factor, mx, my, barsX, barsY,
+            return new Layout(nx, ny, spacingX, spacingY, phi, cx, cy, depth, n * factor, mx * factor, my * factor,
+                    barsX, barsY,
                     barPhi, offsetX, offsetY);
         }
     }
