@@ -39,7 +39,7 @@ public final class ReportMarkers {
             ".csv", ReportMarkers::unansweredResponseSheet,
             ".xlsx", ReportMarkers::unansweredResponseSheet,
             ".xml", f -> head(f).contains("<testsuites name=\"" + TOOL + " "),
-            ".sarif", f -> head(f).contains("\"name\" : \"" + TOOL + "\"") || head(f).contains("\"name\": \"" + TOOL + "\""));
+            ".sarif", f -> head(f).contains("\"name\" : \"" + TOOL + "\""));
 
     private ReportMarkers() {
     }

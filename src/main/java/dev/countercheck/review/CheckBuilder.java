@@ -153,8 +153,7 @@ public final class CheckBuilder {
     }
 
     private static boolean failsItsCheck(DraftFinding f) {
-        return f.kind() == FindingKind.CAPACITY || f.kind() == FindingKind.RULE
-                || f.declared().map(s -> s.atLeast(Severity.MAJOR)).orElse(false);
+        return f.kind() == FindingKind.CAPACITY || f.kind() == FindingKind.RULE;
     }
 
     public CheckOutcome build() {
