@@ -11,6 +11,7 @@ import freemarker.template.TemplateExceptionHandler;
 
 import java.io.IOException;
 import java.io.StringWriter;
+import java.io.Writer;
 import java.util.Locale;
 import java.util.TimeZone;
 
@@ -55,16 +56,39 @@ public final class HtmlReportWriter {
         return render(TEMPLATE, HtmlModel.of(review, round));
     }
 
+    /** Writes the HTML page for {@code review} in its round into {@code out} as the template runs; flushes, never closes. */
+    public void write(Review review, ReviewRound round, Writer out) throws IOException {
+        render(TEMPLATE, HtmlModel.of(review, round), out);
+    }
+
     /** The page of template {@code name} for {@code model}. */
     String render(String name, Object model) {
         StringWriter out = new StringWriter();
         try {
-            Template template = FREEMARKER.getTemplate(name);
+            render(name, model, out);
+        } catch (IOException e) {
+            throw new IllegalStateException("a StringWriter does not fail", e);
+        }
+        return out.toString();
+    }
+
+    /**
+     * Writes the page of template {@code name} for {@code model} into {@code out}; an {@link IOException}
+     * is the writer's own (a full disk), any other failure a bug in this package.
+     */
+    void render(String name, Object model, Writer out) throws IOException {
+        Template template;
+        try {
+            template = FREEMARKER.getTemplate(name);
+        } catch (IOException e) {
+            throw new IllegalStateException("could not read templates/" + name + " from the jar: " + e.getMessage(), e);
+        }
+        try {
             template.process(model, out);
-        } catch (IOException | TemplateException e) {
+        } catch (TemplateException e) {
             // The templates ship inside the jar and their models are built here: failing is a bug in this package.
             throw new IllegalStateException("could not render templates/" + name + ": " + e.getMessage(), e);
         }
-        return out.toString();
+        out.flush();
     }
 }

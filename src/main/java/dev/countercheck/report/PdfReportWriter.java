@@ -12,6 +12,7 @@ import com.openhtmltopdf.util.XRLog;
 import dev.countercheck.review.Review;
 import dev.countercheck.round.ReviewRound;
 import org.apache.pdfbox.cos.COSArray;
+import org.apache.pdfbox.io.IOUtils;
 import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.cos.COSString;
 import org.apache.pdfbox.pdmodel.PDDocument;
@@ -24,6 +25,7 @@ import org.jsoup.helper.W3CDom;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -82,15 +84,28 @@ public final class PdfReportWriter {
 
     /** The PDF bytes of the report of {@code review}. */
     public byte[] write(Review review) {
-        return render(html.write(review), review);
+        return write(review, ReviewRound.none(""));
     }
 
     /** The PDF bytes of the report of {@code review} in its round. */
     public byte[] write(Review review, ReviewRound round) {
-        return render(html.write(review, round), review);
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try {
+            render(html.write(review, round), review, out);
+        } catch (IOException e) {
+            throw new IllegalStateException("a ByteArrayOutputStream does not fail", e);
+        }
+        return out.toByteArray();
     }
 
-    byte[] render(String page, Review review) {
+    /**
+     * Lays out {@code page}, the HTML text of {@code review}'s report, once and writes the PDF into
+     * {@code out}. The pages' content is kept in a scratch file while the document is built, not in
+     * memory.
+     *
+     * @throws IOException when {@code out} cannot be written
+     */
+    void render(String page, Review review, OutputStream out) throws IOException {
         Document html = Jsoup.parse(page);
         addBookmarks(html);
         org.w3c.dom.Document dom = new W3CDom().fromJsoup(html);
@@ -101,9 +116,10 @@ public final class PdfReportWriter {
             // the machine's temporary folder is full or unusable: a condition to report, not a fault of the tool
             throw new UncheckedIOException("the temporary folder cannot be used for the PDF's font", e);
         }
-        try {
+        try (PDDocument document = new PDDocument(IOUtils.createTempFileOnlyStreamCache())) {
             PdfRendererBuilder builder = new PdfRendererBuilder()
                     .withW3cDocument(dom, null)
+                    .usePDDocument(document)
                     .useSVGDrawer(new BatikSVGDrawer(SvgScriptMode.SECURE, SvgExternalResourceMode.SECURE))
                     .useExternalResourceAccessControl((uri, type) -> false,
                             ExternalResourceControlPriority.RUN_BEFORE_RESOLVING_URI)
@@ -115,19 +131,24 @@ public final class PdfReportWriter {
                     builder.useFont(font.toFile(), FONT_FAMILY, weight, style, true, USES);
                 }
             }
-            ByteArrayOutputStream out = new ByteArrayOutputStream();
+            // The renderer's fonts stay open until the document is saved: their subsets are embedded then.
             try (PdfBoxRenderer renderer = builder.buildPdfRenderer()) {
-                renderer.createPDFWithoutClosing();
-                PDDocument document = renderer.getPdfDocument();
+                layOut(renderer);
                 describe(document, review, page);
                 document.save(out);
             }
-            return out.toByteArray();
+        } finally {
+            delete(font);
+        }
+    }
+
+    /** Lays the document out and draws its pages into the renderer's document, once. */
+    private static void layOut(PdfBoxRenderer renderer) {
+        try {
+            renderer.createPDFWithoutClosing();
         } catch (IOException e) {
             // Everything the renderer reads is in memory or in our jar: failing here is a bug, not bad input.
             throw new IllegalStateException("could not lay out the PDF report: " + e.getMessage(), e);
-        } finally {
-            delete(font);
         }
     }
 
