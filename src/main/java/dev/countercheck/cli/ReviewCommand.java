@@ -147,7 +147,8 @@ public final class ReviewCommand implements Callable<Integer> {
             List<Path> written = new ArrayList<>(List.of(json, html));
             try (OutputSet reports = OutputSet.in(outDir, sink)) {
                 ReviewReports.addTo(reports, review, context, json.getFileName().toString(),
-                        html.getFileName().toString(), pdfFile.map(p -> p.getFileName().toString()));
+                        html.getFileName().toString(), pdfFile.map(p -> p.getFileName().toString()))
+                        .forEach(part -> written.add(html.resolveSibling(part)));
                 pdfFile.ifPresent(written::add);
                 for (Map.Entry<String, byte[]> extra : round.files(review, threshold).entrySet()) {
                     Path target = targets.report(file, extra.getKey());

@@ -43,7 +43,23 @@ import java.util.stream.IntStream;
  */
 public record HtmlModel(Header header, String pageHeading, List<Count> verdictCounts, List<Count> severityCounts,
                         List<String> assumptions, List<FindingRow> register, List<ElementView> elements,
-                        List<ElementCautions> cautions, RoundView round) {
+                        List<ElementCautions> cautions, RoundView round, Paging paging) {
+
+    /** The link to {@code anchor} from the page being written (see {@link Paging#href}). */
+    public String href(String anchor) {
+        return paging.href(anchor);
+    }
+
+    /**
+     * The same report on part {@code k} (from 1) of its pages: the elements of that part only; the
+     * lists of the project page are shared, not built again.
+     */
+    HtmlModel part(int k) {
+        int from = (k - 1) * Paging.PER_PART;
+        List<ElementView> shown = elements.subList(from, Math.min(elements.size(), from + Paging.PER_PART));
+        return new HtmlModel(header, pageHeading, verdictCounts, severityCounts, assumptions, register, shown,
+                cautions, round, paging.atPart(k));
+    }
 
     public record Header(String title, String reference, String revision, String preparedBy, String submissionDate,
                          String file, String sha256, String rulesetId, String rulesetTitle, String rulesetSha256,
@@ -179,7 +195,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      * short lists (register, not-checked, cautions) but never every element's formatted calculations
      * at once.
      */
-    static HtmlModel of(Review review, ReviewRound round) {
+    static HtmlModel of(Review review, ReviewRound round, Paging paging) {
         List<ElementReview> reviewed = review.elements();
         List<ElementView> elements = new ElementViews(reviewed.size(), i -> element(reviewed.get(i), i + 1, round));
         List<FindingRow> register = IntStream.range(0, reviewed.size())
@@ -192,7 +208,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 .toList();
         return new HtmlModel(header(review), PageHeading.css(review), verdictCounts(review.summary()),
                 severityCounts(review.summary()), review.assumptions(), register, elements, cautions,
-                roundView(round, reviewed));
+                roundView(round, reviewed), paging);
     }
 
     private static RoundView roundView(ReviewRound round, List<ElementReview> elements) {
