@@ -1,5 +1,7 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Section;
+
 import dev.countercheck.ruleset.Variable;
 import dev.countercheck.submission.ActionCase;
 import dev.countercheck.submission.Column.StarterBars;
@@ -133,7 +135,7 @@ final class DetailingScopes {
 
     private static Map<String, Object> capValues(PileCapContext ctx, Reinforcement r, Map<Axis, Double> asRequired) {
         PileCap cap = ctx.cap;
-        CapSection s = ctx.section.orElseThrow();
+        Section s = ctx.section.orElseThrow();
         Map<String, Object> v = new LinkedHashMap<>();
         v.put("h", cap.depthMm());
         v.put("plan_x", cap.planXMm());

@@ -1,5 +1,7 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Section;
+
 import dev.countercheck.statics.PileGroupReactions;
 import dev.countercheck.statics.PileGroupReactions.Distribution;
 import dev.countercheck.statics.PileGroupReactions.Load;
@@ -34,7 +36,7 @@ final class PileCapContext {
 
     final PileCap cap;
     final Ruleset rules;
-    final Optional<CapSection> section;
+    final Optional<Section> section;
     final List<UlsCase> uls;
     final Step selfWeight;
     final Step fck;
@@ -48,7 +50,7 @@ final class PileCapContext {
     PileCapContext(PileCap cap, Ruleset rules) {
         this.cap = cap;
         this.rules = rules;
-        this.section = CapSection.of(cap);
+        this.section = Section.of(cap.reinforcement(), cap.depthMm());
         double fckMpa = cap.materials().fckMpa();
         this.fck = Step.of("fck", "characteristic cylinder strength",
                 cap.materials().concreteClass().orElse("fck given"), fckMpa, "MPa", "EN 1992-1-1 Table 3.1");

@@ -1,5 +1,7 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Section;
+
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Punching;
@@ -103,7 +105,7 @@ final class PunchingChecks {
         if (ctx.section.isEmpty()) {
             return b.notChecked("no bottom reinforcement given: d and ρ are unknown").build();
         }
-        CapSection section = ctx.section.get();
+        Section section = ctx.section.get();
         Step d = b.trace(section.dMean());
         Step step = b.trace(ctx.rules.parameter("punching_search_step").asStep());
         double rhoX = section.asX().value() / (ctx.cap.planYMm() * section.dx().value());

@@ -1,5 +1,7 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Section;
+
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Shear;
@@ -35,7 +37,7 @@ final class ShearCheck {
         if (ctx.section.isEmpty()) {
             return b.notChecked("no bottom reinforcement given: d and ρl are unknown").build();
         }
-        CapSection section = ctx.section.get();
+        Section section = ctx.section.get();
         Step d = b.trace(section.d(axis.bars()));
         ctx.equivalentSquare().ifPresent(b::trace);
         Side worst = null;
