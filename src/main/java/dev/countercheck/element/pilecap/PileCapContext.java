@@ -1,7 +1,7 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.PlanGeometry;
 import dev.countercheck.element.Section;
-
 import dev.countercheck.statics.PileGroupReactions;
 import dev.countercheck.statics.PileGroupReactions.Distribution;
 import dev.countercheck.statics.PileGroupReactions.Load;
@@ -117,21 +117,13 @@ final class PileCapContext {
      */
     Distribution reactions(List<Point> piles, ActionCase a, double gammaG) {
         List<Load> loads = new ArrayList<>();
-        loads.add(new Load("N", a.nKn(), plan(cap.column().position())));
+        loads.add(new Load("N", a.nKn(), PlanGeometry.point(cap.column().position())));
         if (gammaG > 0 && addsSelfWeight()) {
             loads.add(new Load("γG·Wcap", factoredSelfWeightKn(gammaG), new PlanPoint(0, 0)));
         }
         double h = cap.depthMm() / 1000.0;
-        return PileGroupReactions.solve(plan(piles), loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h,
-                PileGroupReactions.lineOf(plan(cap.piles().positions())));
-    }
-
-    private static PlanPoint plan(Point p) {
-        return new PlanPoint(p.xMm(), p.yMm());
-    }
-
-    private static List<PlanPoint> plan(List<Point> points) {
-        return points.stream().map(PileCapContext::plan).toList();
+        return PileGroupReactions.solve(PlanGeometry.points(piles), loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h,
+                PileGroupReactions.lineOf(PlanGeometry.points(cap.piles().positions())));
     }
 
     /**
