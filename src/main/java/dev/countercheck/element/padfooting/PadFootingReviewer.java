@@ -49,7 +49,8 @@ final class PadFootingReviewer {
             "alpha_cc_shear", "alpha_ct", "c_rdc_factor", "v_min_coefficient", "punching_vrd_max_factor",
             "punching_search_step", "circular_column_square", "stress_block_lambda", "xi_limit",
             "concrete_unit_weight", "anchorage_alpha5", "footing_anchorage_x", "footing_column_inset",
-            "footing_zi_factor", "footing_rigidity_ratio");
+            "footing_zi_factor", "footing_rigidity_ratio", "geo_gamma_phi", "geo_gamma_c", "geo_gamma_cu",
+            "geo_gamma_rv", "geo_gamma_rh", "equ_gamma_g_inf", "water_unit_weight");
 
     /** What the detailing rules of a ruleset may use and define for pad footings: the checks not computed in Java. */
     static final ElementRules RULE_VOCABULARY = new ElementRules(PadScopes.SCOPES, PadScopes.subjects(),
