@@ -4,6 +4,7 @@ import dev.countercheck.element.RuleChecks;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.OutOfRangeException;
 import dev.countercheck.review.CheckOutcome;
+import dev.countercheck.review.Drawing;
 import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Value;
@@ -77,7 +78,7 @@ final class PadFootingReviewer {
             outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired, variables));
         }
         return assembler.assemble(pad.id(), CATALOGUE, pad.description(), outcomes, pad.claims(), cautions(ctx),
-                Optional.empty());
+                DrawingNotes.of(ctx, outcomes).<Drawing>map(d -> d));
     }
 
     /** Element cautions: the linear pressure assumes a rigid footing (common practice: overhang ≤ ratio·h). */
