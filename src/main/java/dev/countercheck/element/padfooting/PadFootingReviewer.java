@@ -137,11 +137,14 @@ final class PadFootingReviewer {
         return RuleChecks.run(CATALOGUE, rule.get(), ctx.rules, PadScopes.SCOPES.get(scope), v.values());
     }
 
-    /** A formula asked outside its valid range makes the check not-checked, with the reason. */
+    /**
+     * A formula asked outside its valid range, or a contact pressure the solver could not find, makes the check
+     * not-checked, with the reason (never a silently wrong value).
+     */
     private static CheckOutcome guarded(String id, Function<PadContext, CheckOutcome> check, PadContext ctx) {
         try {
             return check.apply(ctx);
-        } catch (OutOfRangeException e) {
+        } catch (OutOfRangeException | ArithmeticException e) {
             return Checks.builder(id).notChecked(e.getMessage()).build();
         }
     }
