@@ -107,17 +107,17 @@ public final class ContactPressure {
     public static Result rectangular(double lxMm, double lyMm, BaseActions actions) {
         OutOfRangeException.requirePositive("Lx", lxMm, "mm", BASIS);
         OutOfRangeException.requirePositive("Ly", lyMm, "mm", BASIS);
-        double v = OutOfRangeException.requirePositive("V", actions.vKn(), "kN", BASIS);
-        String suffix = BaseActions.suffix(actions.caseName());
-        double ex = actions.myKnm() * 1000 / v;
-        double ey = actions.mxKnm() * 1000 / v;
-        Step exStep = eccentricity("e_x" + suffix, "My*/V", actions.myKnm(), v, ex);
-        Step eyStep = eccentricity("e_y" + suffix, "Mx*/V", actions.mxKnm(), v, ey);
+        Step exStep = actions.ex();
+        Step eyStep = actions.ey();
+        double ex = exStep.value();
+        double ey = eyStep.value();
         if (Math.abs(ex) >= lxMm / 2 || Math.abs(ey) >= lyMm / 2) {
             return new NoEquilibrium(actions, exStep, eyStep, "the resultant at e_x = " + Num.f(ex) + " mm, e_y = "
                     + Num.f(ey) + " mm lies at or beyond the edge of the " + Num.f(lxMm) + " × " + Num.f(lyMm)
                     + " mm plan: no contact pressure without tension balances it");
         }
+        double v = actions.vKn();
+        String suffix = BaseActions.suffix(actions.caseName());
         ConvexPolygon plan = ConvexPolygon.rectangle(-lxMm / 2, -lyMm / 2, lxMm / 2, lyMm / 2);
         double area = lxMm * lyMm;
         double mean = v / area * 1e6;
@@ -172,12 +172,10 @@ public final class ContactPressure {
      */
     public static Result circular(double diameterMm, BaseActions actions) {
         OutOfRangeException.requirePositive("D", diameterMm, "mm", BASIS);
-        double v = OutOfRangeException.requirePositive("V", actions.vKn(), "kN", BASIS);
-        String suffix = BaseActions.suffix(actions.caseName());
-        double ex = actions.myKnm() * 1000 / v;
-        double ey = actions.mxKnm() * 1000 / v;
-        Step exStep = eccentricity("e_x" + suffix, "My*/V", actions.myKnm(), v, ex);
-        Step eyStep = eccentricity("e_y" + suffix, "Mx*/V", actions.mxKnm(), v, ey);
+        Step exStep = actions.ex();
+        Step eyStep = actions.ey();
+        double ex = exStep.value();
+        double ey = eyStep.value();
         double r = diameterMm / 2;
         double e = Math.hypot(ex, ey);
         if (e >= r) {
@@ -185,6 +183,8 @@ public final class ContactPressure {
                     + " mm from the centre lies at or beyond the edge of the footing of D = " + Num.f(diameterMm)
                     + " mm: no contact pressure without tension balances it");
         }
+        double v = actions.vKn();
+        String suffix = BaseActions.suffix(actions.caseName());
         double area = Math.PI * r * r;
         double mean = v / area * 1e6;
         if (e <= r / 4 + 1e-12 * r) {
@@ -229,9 +229,5 @@ public final class ContactPressure {
     /** Whether a point lies in the circle of radius r about the origin (its edge included). */
     private static BiPredicate<Double, Double> inCircle(double r) {
         return (x, y) -> x * x + y * y <= r * r * (1 + 1e-12);
-    }
-
-    private static Step eccentricity(String symbol, String formula, double moment, double v, double e) {
-        return Step.of(symbol, formula, Num.f(moment) + "·1000/" + Num.f(v), e, "mm", BASIS);
     }
 }

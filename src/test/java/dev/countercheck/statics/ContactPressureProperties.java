@@ -109,4 +109,28 @@ class ContactPressureProperties {
         assertThat(c.fraction()).isGreaterThan(0).isLessThanOrEqualTo(1);
         assertThat(c.qMaxKpa()).isGreaterThanOrEqualTo(v / (Math.PI * r * r) * 1e6 * (1 - 1e-4));
     }
+
+    /**
+     * The ground reaction inside a control perimeter grows with a and never exceeds V, for columns anywhere on
+     * the plan (perimeters clipped at the edges), rectangular or circular.
+     */
+    @Property(tries = 40)
+    void thePressureInsideAPerimeterGrowsWithItsDistance(@ForAll @DoubleRange(min = -0.4, max = 0.4) double cx,
+                                                         @ForAll @DoubleRange(min = -0.4, max = 0.4) double cy,
+                                                         @ForAll @DoubleRange(min = -0.9, max = 0.9) double u,
+                                                         @ForAll @DoubleRange(min = -0.9, max = 0.9) double w,
+                                                         @ForAll @DoubleRange(min = 10, max = 1500) double a1,
+                                                         @ForAll @DoubleRange(min = 10, max = 1500) double a2,
+                                                         @ForAll boolean circular) {
+        double lx = 3000;
+        double ly = 2400;
+        Contact c = rect(lx, ly, 1000, u, w).contact().orElseThrow();
+        PlanPoint centre = new PlanPoint(cx * lx, cy * ly);
+        ColumnOutline column = circular ? ColumnOutline.circular(450, centre)
+                : ColumnOutline.rectangular(500, 350, centre);
+        double inner = c.field().insidePerimeter(column, Math.min(a1, a2)).value();
+        double outer = c.field().insidePerimeter(column, Math.max(a1, a2)).value();
+        assertThat(inner).isGreaterThanOrEqualTo(0);
+        assertThat(outer).isGreaterThanOrEqualTo(inner - 1e-9).isLessThanOrEqualTo(1000 * (1 + 1e-9));
+    }
 }
