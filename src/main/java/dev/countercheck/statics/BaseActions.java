@@ -1,6 +1,7 @@
 package dev.countercheck.statics;
 
 import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.OutOfRangeException;
 import dev.countercheck.eurocode.Step;
 
 /**
@@ -63,6 +64,22 @@ public record BaseActions(String caseName, Step v, Step mx, Step my) {
 
     public double myKnm() {
         return my.value();
+    }
+
+    /** e_x = My* / V, mm; V must be positive. */
+    public Step ex() {
+        return eccentricity("e_x", "My*/V", myKnm());
+    }
+
+    /** e_y = Mx* / V, mm; V must be positive. */
+    public Step ey() {
+        return eccentricity("e_y", "Mx*/V", mxKnm());
+    }
+
+    private Step eccentricity(String symbol, String formula, double momentKnm) {
+        double vKn = OutOfRangeException.requirePositive("V", vKn(), "kN", BASIS);
+        return Step.of(symbol + suffix(caseName), formula, Num.f(momentKnm) + "·1000/" + Num.f(vKn),
+                momentKnm * 1000 / vKn, "mm", BASIS);
     }
 
     static String suffix(String caseName) {

@@ -6,6 +6,7 @@ import dev.countercheck.eurocode.Step;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.function.BiPredicate;
 
 /**
  * Ground pressure under a rigid footing centred on the origin, linear and without tension (common practice):
@@ -106,17 +107,17 @@ public final class ContactPressure {
     public static Result rectangular(double lxMm, double lyMm, BaseActions actions) {
         OutOfRangeException.requirePositive("Lx", lxMm, "mm", BASIS);
         OutOfRangeException.requirePositive("Ly", lyMm, "mm", BASIS);
-        double v = OutOfRangeException.requirePositive("V", actions.vKn(), "kN", BASIS);
-        String suffix = BaseActions.suffix(actions.caseName());
-        double ex = actions.myKnm() * 1000 / v;
-        double ey = actions.mxKnm() * 1000 / v;
-        Step exStep = eccentricity("e_x" + suffix, "My*/V", actions.myKnm(), v, ex);
-        Step eyStep = eccentricity("e_y" + suffix, "Mx*/V", actions.mxKnm(), v, ey);
+        Step exStep = actions.ex();
+        Step eyStep = actions.ey();
+        double ex = exStep.value();
+        double ey = eyStep.value();
         if (Math.abs(ex) >= lxMm / 2 || Math.abs(ey) >= lyMm / 2) {
             return new NoEquilibrium(actions, exStep, eyStep, "the resultant at e_x = " + Num.f(ex) + " mm, e_y = "
                     + Num.f(ey) + " mm lies at or beyond the edge of the " + Num.f(lxMm) + " × " + Num.f(lyMm)
                     + " mm plan: no contact pressure without tension balances it");
         }
+        double v = actions.vKn();
+        String suffix = BaseActions.suffix(actions.caseName());
         ConvexPolygon plan = ConvexPolygon.rectangle(-lxMm / 2, -lyMm / 2, lxMm / 2, lyMm / 2);
         double area = lxMm * lyMm;
         double mean = v / area * 1e6;
@@ -124,11 +125,13 @@ public final class ContactPressure {
         if (Math.abs(ex) / lxMm + Math.abs(ey) / lyMm <= 1.0 / 6 + 1e-12) {
             double iy = lyMm * Math.pow(lxMm, 3) / 12;
             double ix = lxMm * Math.pow(lyMm, 3) / 12;
-            PressureField field = new PressureField(plan, mean, actions.myKnm() * 1e9 / iy, actions.mxKnm() * 1e9 / ix);
-            double spread = Math.abs(actions.myKnm()) * 1e9 / iy * lxMm / 2 + Math.abs(actions.mxKnm()) * 1e9 / ix * lyMm / 2;
-            String sub = Num.f(v) + "·1000/(" + dims + ") ± (|" + Num.f(actions.myKnm()) + "|·6·10⁶/(" + Num.f(lyMm)
-                    + "·" + Num.f(lxMm) + "²) + |" + Num.f(actions.mxKnm()) + "|·6·10⁶/(" + Num.f(lxMm) + "·"
-                    + Num.f(lyMm) + "²))·1000";
+            PressureField field = new PressureField(plan, plan::contains, mean, actions.myKnm() * 1e9 / iy,
+                    actions.mxKnm() * 1e9 / ix);
+            double spread = Math.abs(actions.myKnm()) * 1e9 / iy * lxMm / 2
+                    + Math.abs(actions.mxKnm()) * 1e9 / ix * lyMm / 2;
+            String sub = Num.f(v) + "·10⁶/(" + dims + ") ± (|" + Num.f(actions.myKnm()) + "|·6·10⁹/(" + Num.f(lyMm)
+                    + "·" + Num.f(lxMm) + "²) + |" + Num.f(actions.mxKnm()) + "|·6·10⁹/(" + Num.f(lxMm) + "·"
+                    + Num.f(lyMm) + "²))";
             return new Contact(actions, Regime.FULL_CONTACT, exStep, eyStep,
                     Step.withRemark("q_max" + suffix, "V/A + |My*|/Wy + |Mx*|/Wx", sub, mean + spread, "kPa", BASIS,
                             "full contact: |e_x|/Lx + |e_y|/Ly ≤ 1/6"),
@@ -145,19 +148,19 @@ public final class ContactPressure {
             double contactLength = 3 * reach;
             double slope = Math.signum(e) * qMax / contactLength;
             double q0 = qMax * (1 - length / 2 / contactLength);
-            PressureField field = new PressureField(plan, q0, alongX ? slope : 0, alongX ? 0 : slope);
+            PressureField field = new PressureField(plan, plan::contains, q0, alongX ? slope : 0, alongX ? 0 : slope);
             String b = alongX ? "Ly" : "Lx";
             String l = alongX ? "Lx" : "Ly";
             return new Contact(actions, Regime.UNIAXIAL_PARTIAL, exStep, eyStep,
                     Step.withRemark("q_max" + suffix, "2·V/(3·" + b + "·(" + l + "/2 − |e|))", "2·" + Num.f(v)
-                            + "·1000/(3·" + Num.f(width) + "·(" + Num.f(length) + "/2 − " + Num.f(Math.abs(e)) + "))",
+                            + "·10⁶/(3·" + Num.f(width) + "·(" + Num.f(length) + "/2 − " + Num.f(Math.abs(e)) + "))",
                             qMax, "kPa", BASIS, "partial contact: the resultant outside the kern, e > " + l + "/6"),
                     Step.of("q_min" + suffix, "0 (partial contact)", "0", 0, "kPa", BASIS),
                     Step.of("contact fraction" + suffix, "3·(" + l + "/2 − |e|)/" + l, "3·(" + Num.f(length) + "/2 − "
                             + Num.f(Math.abs(e)) + ")/" + Num.f(length), contactLength / length, "-", BASIS), field);
         }
         ConvexPolygon unit = ConvexPolygon.rectangle(-1, -1, 1, 1);
-        return numerical(actions, exStep, eyStep, plan, unit, lxMm / 2, lyMm / 2, mean, area);
+        return numerical(actions, exStep, eyStep, plan, plan::contains, unit, lxMm / 2, lyMm / 2, mean, area);
     }
 
     /**
@@ -169,12 +172,10 @@ public final class ContactPressure {
      */
     public static Result circular(double diameterMm, BaseActions actions) {
         OutOfRangeException.requirePositive("D", diameterMm, "mm", BASIS);
-        double v = OutOfRangeException.requirePositive("V", actions.vKn(), "kN", BASIS);
-        String suffix = BaseActions.suffix(actions.caseName());
-        double ex = actions.myKnm() * 1000 / v;
-        double ey = actions.mxKnm() * 1000 / v;
-        Step exStep = eccentricity("e_x" + suffix, "My*/V", actions.myKnm(), v, ex);
-        Step eyStep = eccentricity("e_y" + suffix, "Mx*/V", actions.mxKnm(), v, ey);
+        Step exStep = actions.ex();
+        Step eyStep = actions.ey();
+        double ex = exStep.value();
+        double ey = eyStep.value();
         double r = diameterMm / 2;
         double e = Math.hypot(ex, ey);
         if (e >= r) {
@@ -182,32 +183,36 @@ public final class ContactPressure {
                     + " mm from the centre lies at or beyond the edge of the footing of D = " + Num.f(diameterMm)
                     + " mm: no contact pressure without tension balances it");
         }
+        double v = actions.vKn();
+        String suffix = BaseActions.suffix(actions.caseName());
         double area = Math.PI * r * r;
         double mean = v / area * 1e6;
         if (e <= r / 4 + 1e-12 * r) {
             double i = Math.PI * Math.pow(diameterMm, 4) / 64;
             ConvexPolygon plan = ConvexPolygon.regular(0, 0, r, CIRCLE_VERTICES);
-            PressureField field = new PressureField(plan, mean, actions.myKnm() * 1e9 / i, actions.mxKnm() * 1e9 / i);
+            PressureField field = new PressureField(plan, inCircle(r), mean, actions.myKnm() * 1e9 / i,
+                    actions.mxKnm() * 1e9 / i);
             double spread = v * e * 1e6 * r / i;
-            String sub = Num.f(v) + "·4000/(π·" + Num.f(diameterMm) + "²) ± " + Num.f(v) + "·" + Num.f(e) + "·32·10⁶/(π·"
-                    + Num.f(diameterMm) + "³)";
+            String sub = Num.f(v) + "·4·10⁶/(π·" + Num.f(diameterMm) + "²) ± " + Num.f(v) + "·" + Num.f(e)
+                    + "·32·10⁶/(π·" + Num.f(diameterMm) + "³)";
             return new Contact(actions, Regime.FULL_CONTACT, exStep, eyStep,
                     Step.withRemark("q_max" + suffix, "V/A + V·e/W, W = π·D³/32", sub, mean + spread, "kPa", BASIS,
                             "full contact: e ≤ D/8"),
                     Step.of("q_min" + suffix, "V/A − V·e/W", sub, mean - spread, "kPa", BASIS),
                     Step.of("contact fraction" + suffix, "A_contact/A", "full contact", 1, "-", BASIS), field);
         }
-        return numerical(actions, exStep, eyStep, ConvexPolygon.regular(0, 0, r, CIRCLE_VERTICES),
+        return numerical(actions, exStep, eyStep, ConvexPolygon.regular(0, 0, r, CIRCLE_VERTICES), inCircle(r),
                 ConvexPolygon.regular(0, 0, 1, CIRCLE_VERTICES), r, r, mean, area);
     }
 
     private static Contact numerical(BaseActions actions, Step exStep, Step eyStep, ConvexPolygon plan,
-                                     ConvexPolygon unit, double halfX, double halfY, double mean, double area) {
+                                     BiPredicate<Double, Double> onPlan, ConvexPolygon unit, double halfX,
+                                     double halfY, double mean, double area) {
         String suffix = BaseActions.suffix(actions.caseName());
         NoTensionSolver.Plane p = NoTensionSolver.solve(unit, exStep.value() / halfX, eyStep.value() / halfY);
         // The unit plan's mean pressure is 1 over its own area; scale to V over the physical plan.
         double scale = mean * area / (unit.area() * halfX * halfY);
-        PressureField field = new PressureField(plan, scale * p.alpha(), scale * p.beta() / halfX,
+        PressureField field = new PressureField(plan, onPlan, scale * p.alpha(), scale * p.beta() / halfX,
                 scale * p.gamma() / halfY);
         double qMax = plan.max((x, y) -> field.q0Kpa() + field.qxKpaPerMm() * x + field.qyKpaPerMm() * y);
         double fraction = field.contactAreaMm2() / plan.area();
@@ -221,7 +226,8 @@ public final class ContactPressure {
                         + Num.f(plan.area()), fraction, "-", BASIS), field);
     }
 
-    private static Step eccentricity(String symbol, String formula, double moment, double v, double e) {
-        return Step.of(symbol, formula, Num.f(moment) + "·1000/" + Num.f(v), e, "mm", BASIS);
+    /** Whether a point lies in the circle of radius r about the origin (its edge included). */
+    private static BiPredicate<Double, Double> inCircle(double r) {
+        return (x, y) -> x * x + y * y <= r * r * (1 + 1e-12);
     }
 }

@@ -8,7 +8,8 @@ package dev.countercheck.statics;
  * θ = (α, β, γ) and g = A·(1, eu, ev); its Hessian is the second-moment matrix of the zone in contact. So
  * Newton's method with a backtracking (Armijo) line search on F converges from the full-contact plane for
  * every resultant strictly inside the plan (F is bounded below exactly then), deterministically. The
- * integrals are exact (polygon clipping and the edge-midpoint rule).
+ * integrals are exact (polygon clipping and the edge-midpoint rule). Close to the solution F is flat to
+ * its last digit; there a step is taken when it lowers the residual instead.
  */
 final class NoTensionSolver {
 
@@ -38,7 +39,7 @@ final class NoTensionSolver {
             double f0 = objective(plan, theta, g);
             double t = 1;
             double[] next = advance(theta, step, t);
-            while (objective(plan, next, g) > f0 - 1e-4 * t * slope && t > 1e-14) {
+            while (!acceptable(plan, next, g, f0, 1e-4 * t * slope, norm(grad)) && t > 1e-14) {
                 t /= 2;
                 next = advance(theta, step, t);
             }
@@ -46,6 +47,20 @@ final class NoTensionSolver {
         }
         throw new ArithmeticException("contact pressure: no convergence in " + MAX_ITERATIONS
                 + " Newton steps for the resultant at (" + eu + ", " + ev + ") of the half-widths");
+    }
+
+    /**
+     * Armijo's sufficient decrease of F; or, where F changes by no more than its rounding (close to the
+     * solution, where F is flat to the last digit), a smaller residual.
+     */
+    private static boolean acceptable(ConvexPolygon plan, double[] next, double[] g, double f0, double decrease,
+                                      double residual) {
+        double f = objective(plan, next, g);
+        if (f <= f0 - decrease) {
+            return true;
+        }
+        return Math.abs(f - f0) <= 1e-12 * (Math.abs(f0) + g[0])
+                && norm(gradient(clip(plan, next), next, g)) < residual;
     }
 
     private static ConvexPolygon clip(ConvexPolygon plan, double[] t) {

@@ -5,6 +5,7 @@ import dev.countercheck.eurocode.Step;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.BiPredicate;
 
 /**
  * A linear no-tension ground pressure under a rigid footing: q(x, y) = max(0, q0 + qx·x + qy·y) on the plan,
@@ -19,13 +20,20 @@ public final class PressureField {
     static final String BASIS = "rigid footing, linear contact pressure without tension (common practice)";
 
     private final ConvexPolygon plan;
+    private final BiPredicate<Double, Double> onPlan;
     private final ConvexPolygon contact;
     private final double q0;
     private final double qx;
     private final double qy;
 
-    PressureField(ConvexPolygon plan, double q0Kpa, double qxKpaPerMm, double qyKpaPerMm) {
+    /**
+     * @param plan   the plan as a convex polygon (the integrals are taken over it)
+     * @param onPlan whether a point lies on the true plan (a circle, where the polygon is its inscribed 720-gon)
+     */
+    PressureField(ConvexPolygon plan, BiPredicate<Double, Double> onPlan, double q0Kpa, double qxKpaPerMm,
+                  double qyKpaPerMm) {
         this.plan = plan;
+        this.onPlan = onPlan;
         this.q0 = q0Kpa;
         this.qx = qxKpaPerMm;
         this.qy = qyKpaPerMm;
@@ -34,7 +42,7 @@ public final class PressureField {
 
     /** The pressure at (x, y), kPa; 0 off the plan and where the ground has lifted off. */
     public double at(double xMm, double yMm) {
-        return plan.contains(xMm, yMm) ? Math.max(0, plane(xMm, yMm)) : 0;
+        return onPlan.test(xMm, yMm) ? Math.max(0, plane(xMm, yMm)) : 0;
     }
 
     /** q0 of the plane q0 + qx·x + qy·y, kPa (the pressure the plane gives at the plan's centre). */

@@ -119,10 +119,45 @@ class ContactPressureTest {
     }
 
     @Test
+    void aCircularFootingInFullContactIsTheLinearFormula() {
+        // Hand calculation: D = 2000, V = 1000 kN, Mx* = 60, My* = 80 kNm: e = 100 mm ≤ D/8 = 250.
+        // A = π m²: 318.31 kPa; W = π·2³/32 = 0.78540 m³: V·e/W = 100/0.78540 = 127.32 kPa;
+        // q_max = 445.63, q_min = 190.99 kPa, the largest at the edge point in the direction (0.8, 0.6).
+        Contact c = contact(ContactPressure.circular(2000, BaseActions.atCentre("", 1000, 60, 80)));
+        assertThat(c.regime()).isEqualTo(Regime.FULL_CONTACT);
+        assertThat(c.qMaxKpa()).isCloseTo(445.63, within(0.01));
+        assertThat(c.qMinKpa()).isCloseTo(190.99, within(0.01));
+        assertThat(c.field().at(800, 600)).isCloseTo(445.63, within(0.01));
+        assertThat(c.field().at(0, 0)).isCloseTo(318.31, within(0.01));
+        assertThat(c.field().at(800, 700)).isZero();
+        // e at or beyond the radius: no equilibrium.
+        assertThat(ContactPressure.circular(2000, BaseActions.atCentre("", 1000, 0, 1000)))
+                .isInstanceOf(NoEquilibrium.class);
+    }
+
+    @Test
+    void aCircularFootingInPartialContactIsInEquilibriumByAnIndependentGridIntegration() {
+        // D = 2400, V = 1000 kN, e = 500 mm > D/8 = 300 (My* = 400, Mx* = 300 kNm).
+        Contact c = contact(ContactPressure.circular(2400, BaseActions.atCentre("", 1000, 300, 400)));
+        assertThat(c.regime()).isEqualTo(Regime.BIAXIAL_PARTIAL);
+        GridIntegral g = GridIntegral.of(c.field()::at, 2400, 2400, 600);
+        assertThat(g.forceKn()).isCloseTo(1000, withinPercentage(0.5));
+        assertThat(g.myKnm()).isCloseTo(400, withinPercentage(0.5));
+        assertThat(g.mxKnm()).isCloseTo(300, withinPercentage(0.5));
+        // The grid's square cells outside the circle see no pressure: the fraction of the plan in contact is
+        // the grid's share of the square over the circle's share π/4.
+        assertThat(c.fraction()).isCloseTo(g.contactFraction() / (Math.PI / 4), within(0.005));
+    }
+
+    @Test
     void traceNamesTheCase() {
         Result r = ContactPressure.rectangular(3000, 2000, BaseActions.atCentre("SLS-1", 1200, 0, 720));
         assertThat(r.trace()).extracting(s -> s.symbol())
                 .containsExactly("V (SLS-1)", "Mx* (SLS-1)", "My* (SLS-1)", "e_x (SLS-1)", "e_y (SLS-1)",
                         "q_max (SLS-1)", "q_min (SLS-1)", "contact fraction (SLS-1)");
+        // The substituted formula reads as the arithmetic that gives the value (kN over mm² to kPa: ·10⁶).
+        Contact c = contact(r);
+        assertThat(c.qMax().substituted()).isEqualTo("2·1200·10⁶/(3·2000·(3000/2 − 600))");
+        assertThat(c.contactFraction().substituted()).isEqualTo("3·(3000/2 − 600)/3000");
     }
 }

@@ -60,4 +60,19 @@ class PressureFieldTest {
         // 200 kPa × 3.953458 m² = 790.69 kN (hand calculation).
         assertThat(uniform.field().insidePerimeter(column, 900).value()).isCloseTo(790.69, withinPercentage(0.01));
     }
+
+    @Test
+    void theTwoSidesOfACutAddUpToTheWhole() {
+        // A biaxial partial contact (3000 × 2000, V = 1200 kN, e_x = 700, e_y = 300 mm): whatever the cut, the
+        // parts on its two sides carry V together, and their moments about the cut differ by My*' = ∫q·(x − x0).
+        Contact c = ContactPressureTest.contact(
+                ContactPressure.rectangular(3000, 2000, BaseActions.atCentre("", 1200, 360, 840)));
+        for (double x0 : new double[] {-1200, -300, 0, 450, 1400}) {
+            Resultant plus = c.field().beyondX(x0, Side.POSITIVE);
+            Resultant minus = c.field().beyondX(x0, Side.NEGATIVE);
+            assertThat(plus.forceKn() + minus.forceKn()).isCloseTo(1200, within(1e-6));
+            // ∫q·(x − x0) dA = My* − V·x0.
+            assertThat(plus.momentKnm() - minus.momentKnm()).isCloseTo(840 - 1200 * x0 / 1000, within(1e-6));
+        }
+    }
 }
