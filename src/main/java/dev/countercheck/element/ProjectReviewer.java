@@ -33,10 +33,10 @@ public final class ProjectReviewer {
             + " Local codes, the applicable National Annex and licensed engineering practice govern.";
 
     /** What the tool does not review at all, stated in every report beside the checks it did not do. */
-    public static final String OUT_OF_SCOPE = "This tool reviews pile caps only. It does not review other foundation"
-            + " elements (pad and strip footings, ground beams, rafts), the piles themselves (their design resistances"
-            + " are taken as submitted), the ground (bearing, settlement, pile group effects), or the columns and walls"
-            + " above; nothing about them is checked here.";
+    public static final String OUT_OF_SCOPE = "This tool reviews pile caps and pad footings only. It does not review"
+            + " other foundation elements (strip footings, ground beams, rafts), the piles themselves (their design"
+            + " resistances are taken as submitted), the ground beyond the pad checks it names (settlement, pile group"
+            + " effects, the ground under pile caps), or the columns and walls above; nothing about them is checked here.";
 
     /** Every ruleset parameter a review reads in Java; the ruleset loader refuses a chain that lacks one. */
     public static final Set<String> REQUIRED_PARAMETERS = requiredParameters();
