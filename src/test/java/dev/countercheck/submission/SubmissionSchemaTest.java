@@ -69,6 +69,7 @@ class SubmissionSchemaTest {
         m.put("/$defs/materials", new KeyList(MaterialsBinder.class, "KEYS"));
         m.put("/$defs/pile-cap", new KeyList(PileCapBinder.class, "KEYS"));
         m.put("/$defs/pile-cap/properties/plan", new KeyList(PileCapBinder.class, "PLAN_KEYS"));
+        m.put("/$defs/casting", new KeyList(PileCapBinder.class, "CASTING_KEYS"));
         m.put("/$defs/piles", new KeyList(PileGroupBinder.class, "KEYS"));
         m.put("/$defs/piles/properties/capacity", new KeyList(PileGroupBinder.class, "CAPACITY_KEYS"));
         m.put("/$defs/column", new KeyList(ColumnBinder.class, "KEYS"));
@@ -123,7 +124,9 @@ class SubmissionSchemaTest {
         choices.put("/$defs/materials/properties/concrete", ((Map<?, ?>) staticField(MaterialsBinder.class, "CLASSES")).keySet());
         choices.put("/$defs/materials/properties/exposure/items", ((Map<?, ?>) staticField(MaterialsBinder.class, "EXPOSURE")).keySet());
         choices.put("/$defs/materials/properties/structural_class", ((Map<?, ?>) staticField(MaterialsBinder.class, "STRUCTURAL")).keySet());
-        choices.put("/$defs/pile-cap/properties/cast_against", Values.options(CastAgainst.values()).keySet());
+        choices.put("/$defs/pile-cap/properties/cast_against/anyOf/0", Values.options(CastAgainst.values()).keySet());
+        choices.put("/$defs/casting/properties/bottom", Values.options(CastAgainst.values()).keySet());
+        choices.put("/$defs/casting/properties/sides", List.of("soil", "formwork"));
         choices.put("/$defs/pile-cap/properties/self_weight", Values.options(SelfWeight.values()).keySet());
         choices.put("/$defs/column/properties/shape", Values.options(ColumnShape.values()).keySet());
         choices.put("/$defs/action/properties/kind", Values.options(Kind.values()).keySet());
