@@ -43,7 +43,7 @@ class PileCapProperties {
 
     static final Ruleset RULES = CapReviews.ruleset("en1992-recommended");
     static final PileCapReviewer REVIEWER =
-            new PileCapReviewer(new ElementAssembler(new ClaimComparer(RULES.number("claim_tolerance")),
+            new PileCapReviewer(new ElementAssembler(new ClaimComparer(RULES.number("claim_tolerance"), java.util.Map.of()),
                     new SeverityPolicy(RULES::severity)));
     private static final SourceLocation HERE = new SourceLocation("generated", 1, 1);
 
