@@ -53,4 +53,24 @@ public record Ruleset(String id, String title, String standard, String version, 
     public double number(String name) {
         return parameter(name).value();
     }
+
+    /**
+     * The parameters and tables the chain marks {@code source: from-memory}, each as
+     * "name = value unit (clause; file)" or "table name (clause; file)", for the review's assumptions.
+     */
+    public List<String> recalled() {
+        List<String> out = new java.util.ArrayList<>();
+        parameters.values().stream().filter(p -> p.source().recalled()).forEach(p -> out.add(p.name() + " = "
+                + dev.countercheck.eurocode.Num.f(p.value()) + ("-".equals(p.unit()) ? "" : " " + p.unit()) + " ("
+                + p.clause() + "; " + p.origin() + ")"));
+        tables.values().stream().filter(t -> t.source().recalled()).forEach(t -> out.add("table " + t.name() + " ("
+                + t.clause() + "; " + t.origin() + ")"));
+        return List.copyOf(out);
+    }
+
+    /** Whether a table or parameter of this name is marked as recalled from memory. */
+    public boolean isRecalled(String name) {
+        return (parameters.containsKey(name) && parameters.get(name).source().recalled())
+                || (tables.containsKey(name) && tables.get(name).source().recalled());
+    }
 }

@@ -46,7 +46,9 @@ public final class RulesetLoader {
 
     private static final List<String> TOP_KEYS = List.of("ruleset", "id", "extends", "title", "standard", "version",
             "parameters", "severities", "tables", "checks");
-    private static final List<String> PARAMETER_KEYS = List.of("symbol", "value", "unit", "clause", "note");
+    private static final List<String> PARAMETER_KEYS = List.of("symbol", "value", "unit", "clause", "note", "source");
+    /** The keys a parameter must state; an override states its value and clause. */
+    private static final List<String> PARAMETER_NEEDED = List.of("symbol", "value", "unit", "clause", "note");
     private static final List<String> SEVERITY_KEYS = List.of("severity", "meaning");
     private static final List<String> SEVERITIES = List.of("critical", "major", "minor", "note");
 
@@ -234,7 +236,7 @@ public final class RulesetLoader {
                         + Suggestions.hint(f.key(), PARAMETER_KEYS));
             }
         }
-        List<String> needed = base ? PARAMETER_KEYS : List.of("value", "clause");
+        List<String> needed = base ? PARAMETER_NEEDED : List.of("value", "clause");
         for (String key : needed) {
             if (map.entry(key).isEmpty()) {
                 problems.add(map.location(), path, "'" + e.key() + "' has no '" + key + "'"
@@ -261,7 +263,22 @@ public final class RulesetLoader {
         parameters.put(e.key(), new Parameter(e.key(),
                 optionalText(map, "symbol").orElse(base ? e.key() : inherited.symbol()), value.get(),
                 unit, optionalText(map, "clause").orElse(""),
-                optionalText(map, "note").orElse(base ? "" : inherited.note()), origin));
+                optionalText(map, "note").orElse(base ? "" : inherited.note()), origin,
+                source(map, path, problems)));
+    }
+
+    /** The {@code source} of a parameter or table: how sure the file is of the value (not inherited). */
+    static ValueSource source(MapNode map, String path, Problems problems) {
+        Optional<String> written = optionalText(map, "source");
+        if (written.isEmpty()) {
+            return ValueSource.STATED;
+        }
+        Optional<ValueSource> source = ValueSource.of(written.get());
+        if (source.isEmpty()) {
+            problems.add(map.entry("source").get().value().location(), path + ".source", "unknown source '"
+                    + Shown.text(written.get()) + "'; expected one of " + String.join(", ", ValueSource.written()));
+        }
+        return source.orElse(ValueSource.STATED);
     }
 
     /**

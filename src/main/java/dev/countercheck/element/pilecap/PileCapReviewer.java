@@ -57,7 +57,7 @@ final class PileCapReviewer {
             "eps_c2", "stress_block_lambda", "xi_limit", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
             "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
             "shear_section_inside_pile", "band_spacing_limit", "band_half_width",
-            "shear_strip_width", "cover_k2_soil");
+            "shear_strip_width", "cover_k2_soil", "fck_max_shear");
 
     private final ElementAssembler assembler;
 
