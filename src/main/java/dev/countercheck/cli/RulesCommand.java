@@ -3,6 +3,7 @@ package dev.countercheck.cli;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.ruleset.CheckDef;
 import dev.countercheck.ruleset.Parameter;
+import dev.countercheck.ruleset.RuleOption;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.ruleset.SeverityDef;
 import dev.countercheck.ruleset.RulesetException;
@@ -68,6 +69,11 @@ public final class RulesCommand implements Callable<Integer> {
                     p.clause(), p.origin(), mark(p.source()));
         }
         out.println();
+        out.println("OPTIONS");
+        for (RuleOption o : r.options().values()) {
+            out.printf("%-34s %-24s %s  [%s]%n", o.name(), o.value(), o.clause(), o.origin());
+        }
+        out.println();
         out.println("SEVERITIES");
         for (SeverityDef v : r.severities().values()) {
             out.printf("%-22s %-9s %s  [%s]%n", v.kind(), v.severity(), v.meaning(), v.origin());
@@ -110,6 +116,17 @@ public final class RulesCommand implements Callable<Integer> {
         for (Parameter p : r.parameters().values()) {
             out.println("| `" + p.name() + "` | " + p.symbol() + " | " + Num.f(p.value()) + " | " + p.unit() + " | "
                     + p.clause() + " | " + p.note() + mark(p.source()) + " | " + p.origin() + " |");
+        }
+        out.println();
+        out.println("## Options");
+        out.println();
+        out.println("The methods the ruleset chooses among those the review offers.");
+        out.println();
+        out.println("| option | choice | clause | note | set in |");
+        out.println("|---|---|---|---|---|");
+        for (RuleOption o : r.options().values()) {
+            out.println("| `" + o.name() + "` | `" + o.value() + "` | " + o.clause() + " | " + o.note() + " | "
+                    + o.origin() + " |");
         }
         out.println();
         out.println("## Severities");

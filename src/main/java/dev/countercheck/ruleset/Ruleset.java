@@ -19,11 +19,22 @@ import java.util.Optional;
  * @param rules       the rule of each check a ruleset defines, by element type and check id
  * @param severities  the severity of each kind of finding the engine raises, by kind
  * @param expressions the evaluator for the rules' expressions, with the tables as functions
+ * @param options     the methods the ruleset chooses, by name
  */
 public record Ruleset(String id, String title, String standard, String version, String sha256, List<String> files,
                       Map<String, Parameter> parameters, Map<String, TableDef> tables, Map<String, CheckDef> checks,
                       Map<String, Map<String, Rule>> rules, Map<String, SeverityDef> severities,
-                      RuleExpressions expressions) {
+                      RuleExpressions expressions, Map<String, RuleOption> options) {
+
+    /** The choice of option {@code name}; every option the engine offers is validated at load. */
+    public RuleOption option(String name) {
+        RuleOption o = options.get(name);
+        if (o == null) {
+            throw new IllegalStateException("ruleset " + id + " sets no option '" + name
+                    + "' (the loader should have refused it)");
+        }
+        return o;
+    }
 
     /** The rule for check {@code checkId} of {@code elementType}, when the ruleset defines one. */
     public Optional<Rule> rule(String elementType, String checkId) {

@@ -45,7 +45,8 @@ import java.util.regex.Pattern;
 public final class RulesetLoader {
 
     private static final List<String> TOP_KEYS = List.of("ruleset", "id", "extends", "title", "standard", "version",
-            "parameters", "severities", "tables", "checks");
+            "parameters", "options", "severities", "tables", "checks");
+    private static final List<String> OPTION_KEYS = List.of("value", "clause", "note");
     private static final List<String> PARAMETER_KEYS = List.of("symbol", "value", "unit", "clause", "note", "source");
     /** The keys a parameter must state; an override states its value and clause. */
     private static final List<String> PARAMETER_NEEDED = List.of("symbol", "value", "unit", "clause", "note");
@@ -148,6 +149,7 @@ public final class RulesetLoader {
         Map<String, TableDef> tables = new LinkedHashMap<>();
         Map<String, CheckDef> checks = new LinkedHashMap<>();
         Map<String, SeverityDef> severities = new LinkedHashMap<>();
+        Map<String, RuleOption> options = new LinkedHashMap<>();
         List<InputError> errors = new ArrayList<>();
         for (int i = 0; i < chain.size(); i++) {
             RulesetFile file = chain.get(i);
@@ -164,6 +166,7 @@ public final class RulesetLoader {
                         "expected a mapping of parameter names to their values");
             }
             readSeverities(file, severities);
+            readOptions(file, options);
             RuleDefinitions definitions = new RuleDefinitions(problems, file.name());
             file.root().entry("tables").ifPresent(t -> definitions.readTables(t.value(), tables));
             file.root().entry("checks").ifPresent(c -> definitions.readChecks(c.value(), checks));
@@ -174,6 +177,12 @@ public final class RulesetLoader {
         if (!missing.isEmpty()) {
             errors.add(new InputError(top.root().location(), "parameters", "the ruleset chain does not define "
                     + String.join(", ", missing) + ", which the review needs"));
+        }
+        List<String> unchosen = vocabulary.options().keySet().stream().filter(o -> !options.containsKey(o)).sorted()
+                .toList();
+        if (!unchosen.isEmpty()) {
+            errors.add(new InputError(top.root().location(), "options", "the ruleset chain does not choose "
+                    + String.join(", ", unchosen) + ", which the review needs"));
         }
         List<String> unset = vocabulary.findingKinds().stream().filter(k -> !severities.containsKey(k)).sorted().toList();
         if (!unset.isEmpty()) {
@@ -194,7 +203,55 @@ public final class RulesetLoader {
                 optionalText(root, "standard").orElse(""), optionalText(root, "version").orElse(""), hash(chain),
                 chain.stream().map(RulesetFile::name).toList(), Collections.unmodifiableMap(parameters),
                 Collections.unmodifiableMap(tables), Collections.unmodifiableMap(validated), validator.rules(),
-                Collections.unmodifiableMap(severities), expressions);
+                Collections.unmodifiableMap(severities), expressions, Collections.unmodifiableMap(options));
+    }
+
+    /**
+     * The {@code options} section: each method the engine lets a ruleset choose, with its choice, clause
+     * and note. A ruleset that extends another may change a choice (stating its clause).
+     */
+    private void readOptions(RulesetFile file, Map<String, RuleOption> options) {
+        Problems problems = file.problems();
+        Optional<Entry> section = file.root().entry("options");
+        if (section.isEmpty()) {
+            return;
+        }
+        if (!(section.get().value() instanceof MapNode map)) {
+            problems.add(section.get().value().location(), "options", "expected a mapping of options to their choice");
+            return;
+        }
+        for (Entry e : map.entries()) {
+            String path = "options." + e.key();
+            List<String> choices = vocabulary.options().get(e.key());
+            if (choices == null) {
+                problems.add(e.keyLocation(), path, "'" + Shown.text(e.key()) + "' is not an option the review offers"
+                        + Suggestions.hint(e.key(), vocabulary.options().keySet()));
+                continue;
+            }
+            if (!(e.value() instanceof MapNode m)) {
+                problems.add(e.value().location(), path, "expected a mapping with " + String.join(", ", OPTION_KEYS));
+                continue;
+            }
+            for (Entry f : m.entries()) {
+                if (!OPTION_KEYS.contains(f.key())) {
+                    problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + Shown.text(f.key()) + "'"
+                            + Suggestions.hint(f.key(), OPTION_KEYS));
+                }
+            }
+            Optional<String> value = optionalText(m, "value");
+            Optional<String> clause = optionalText(m, "clause");
+            RuleOption inherited = options.get(e.key());
+            if (value.isEmpty() || clause.isEmpty()) {
+                problems.add(m.location(), path, "'" + e.key() + "' needs a value and the clause that offers it");
+            } else if (!choices.contains(value.get())) {
+                problems.add(m.entry("value").get().value().location(), path + ".value", "'"
+                        + Shown.text(value.get()) + "' is not a choice of " + e.key() + "; the choices are "
+                        + String.join(", ", choices) + Suggestions.hint(value.get(), choices));
+            } else {
+                options.put(e.key(), new RuleOption(e.key(), value.get(), clause.get(), optionalText(m, "note")
+                        .orElse(inherited == null ? "" : inherited.note()), file.name()));
+            }
+        }
     }
 
     private void checkTop(RulesetFile file) {

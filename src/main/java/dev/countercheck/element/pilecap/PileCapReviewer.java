@@ -59,6 +59,13 @@ final class PileCapReviewer {
             "shear_section_inside_pile", "band_spacing_limit", "band_half_width",
             "shear_strip_width", "cover_k2_soil", "fck_max_shear");
 
+    /** The option that chooses the basis of the column node's limit. */
+    static final String NODE_COLUMN_BASIS = "node_column_basis";
+
+    /** The methods a ruleset chooses for pile caps, each with its choices (the default, recommended, first). */
+    static final Map<String, List<String>> OPTIONS = Map.of(NODE_COLUMN_BASIS,
+            List.of("effective-area", NodeChecks.PARTIALLY_LOADED));
+
     private final ElementAssembler assembler;
 
     PileCapReviewer(ElementAssembler assembler) {
