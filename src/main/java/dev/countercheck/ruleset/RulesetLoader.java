@@ -212,15 +212,7 @@ public final class RulesetLoader {
      */
     private void readOptions(RulesetFile file, Map<String, RuleOption> options) {
         Problems problems = file.problems();
-        Optional<Entry> section = file.root().entry("options");
-        if (section.isEmpty()) {
-            return;
-        }
-        if (!(section.get().value() instanceof MapNode map)) {
-            problems.add(section.get().value().location(), "options", "expected a mapping of options to their choice");
-            return;
-        }
-        for (Entry e : map.entries()) {
+        for (Entry e : section(file, "options", "expected a mapping of options to their choice")) {
             String path = "options." + e.key();
             List<String> choices = vocabulary.options().get(e.key());
             if (choices == null) {
@@ -228,16 +220,11 @@ public final class RulesetLoader {
                         + Suggestions.hint(e.key(), vocabulary.options().keySet()));
                 continue;
             }
-            if (!(e.value() instanceof MapNode m)) {
-                problems.add(e.value().location(), path, "expected a mapping with " + String.join(", ", OPTION_KEYS));
+            Optional<MapNode> mapping = fields(e, path, OPTION_KEYS, problems);
+            if (mapping.isEmpty()) {
                 continue;
             }
-            for (Entry f : m.entries()) {
-                if (!OPTION_KEYS.contains(f.key())) {
-                    problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + Shown.text(f.key()) + "'"
-                            + Suggestions.hint(f.key(), OPTION_KEYS));
-                }
-            }
+            MapNode m = mapping.get();
             Optional<String> value = optionalText(m, "value");
             Optional<String> clause = optionalText(m, "clause");
             RuleOption inherited = options.get(e.key());
@@ -283,16 +270,11 @@ public final class RulesetLoader {
                     + Suggestions.hint(e.key(), parameters.keySet()));
             return;
         }
-        if (!(e.value() instanceof MapNode map)) {
-            problems.add(e.value().location(), path, "expected a mapping with " + String.join(", ", PARAMETER_KEYS));
+        Optional<MapNode> mapping = fields(e, path, PARAMETER_KEYS, problems);
+        if (mapping.isEmpty()) {
             return;
         }
-        for (Entry f : map.entries()) {
-            if (!PARAMETER_KEYS.contains(f.key())) {
-                problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + Shown.text(f.key()) + "'"
-                        + Suggestions.hint(f.key(), PARAMETER_KEYS));
-            }
-        }
+        MapNode map = mapping.get();
         List<String> needed = base ? PARAMETER_NEEDED : List.of("value", "clause");
         for (String key : needed) {
             if (map.entry(key).isEmpty()) {
@@ -344,16 +326,7 @@ public final class RulesetLoader {
      */
     private void readSeverities(RulesetFile file, Map<String, SeverityDef> severities) {
         Problems problems = file.problems();
-        Optional<Entry> section = file.root().entry("severities");
-        if (section.isEmpty()) {
-            return;
-        }
-        if (!(section.get().value() instanceof MapNode map)) {
-            problems.add(section.get().value().location(), "severities",
-                    "expected a mapping of finding kinds to their severity and meaning");
-            return;
-        }
-        for (Entry e : map.entries()) {
+        for (Entry e : section(file, "severities", "expected a mapping of finding kinds to their severity and meaning")) {
             String path = "severities." + e.key();
             SeverityDef inherited = severities.get(e.key());
             if (!vocabulary.findingKinds().contains(e.key())) {
@@ -361,16 +334,11 @@ public final class RulesetLoader {
                         + Suggestions.hint(e.key(), vocabulary.findingKinds()));
                 continue;
             }
-            if (!(e.value() instanceof MapNode m)) {
-                problems.add(e.value().location(), path, "expected a mapping with " + String.join(", ", SEVERITY_KEYS));
+            Optional<MapNode> mapping = fields(e, path, SEVERITY_KEYS, problems);
+            if (mapping.isEmpty()) {
                 continue;
             }
-            for (Entry f : m.entries()) {
-                if (!SEVERITY_KEYS.contains(f.key())) {
-                    problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + f.key() + "'"
-                            + Suggestions.hint(f.key(), SEVERITY_KEYS));
-                }
-            }
+            MapNode m = mapping.get();
             Optional<String> severity = optionalText(m, "severity");
             Optional<String> meaning = optionalText(m, "meaning").or(() -> Optional.ofNullable(inherited)
                     .map(SeverityDef::meaning));
@@ -384,6 +352,31 @@ public final class RulesetLoader {
                 severities.put(e.key(), new SeverityDef(e.key(), severity.get(), meaning.get(), file.name()));
             }
         }
+    }
+
+    /** The entries of a top-level section of the file; none when it is absent or not a mapping (reported). */
+    private static List<Entry> section(RulesetFile file, String key, String expected) {
+        Optional<Entry> section = file.root().entry(key);
+        if (section.isPresent() && !(section.get().value() instanceof MapNode)) {
+            file.problems().add(section.get().value().location(), key, expected);
+        }
+        return section.map(Entry::value).filter(MapNode.class::isInstance).map(v -> ((MapNode) v).entries())
+                .orElse(List.of());
+    }
+
+    /** The mapping of an entry (a parameter, a severity, an option), its unknown keys reported; empty if none. */
+    private static Optional<MapNode> fields(Entry e, String path, List<String> keys, Problems problems) {
+        if (!(e.value() instanceof MapNode map)) {
+            problems.add(e.value().location(), path, "expected a mapping with " + String.join(", ", keys));
+            return Optional.empty();
+        }
+        for (Entry f : map.entries()) {
+            if (!keys.contains(f.key())) {
+                problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + Shown.text(f.key()) + "'"
+                        + Suggestions.hint(f.key(), keys));
+            }
+        }
+        return Optional.of(map);
     }
 
     private static Optional<Double> number(Node node, Problems problems, String path) {
