@@ -36,6 +36,9 @@ public final class ElementKinds {
     static RuleVocabulary vocabulary(Set<String> requiredParameters, Set<String> findingKinds) {
         Map<String, ElementRules> types = new LinkedHashMap<>();
         ALL.forEach(k -> types.put(k.type(), k.ruleVocabulary()));
-        return new RuleVocabulary(Collections.unmodifiableMap(types), requiredParameters, findingKinds);
+        Map<String, List<String>> options = new LinkedHashMap<>();
+        ALL.forEach(k -> options.putAll(k.options()));
+        return new RuleVocabulary(Collections.unmodifiableMap(types), requiredParameters, findingKinds,
+                Collections.unmodifiableMap(options));
     }
 }

@@ -72,6 +72,7 @@ class SubmissionSchemaTest {
         m.put("/$defs/pad-footing", new KeyList(PadFootingBinder.class, "KEYS"));
         m.put("/$defs/pad-footing/properties/plan", new KeyList(PadFootingBinder.class, "PLAN_KEYS"));
         m.put("/$defs/pad-footing/properties/soil", new KeyList(PadFootingBinder.class, "SOIL_KEYS"));
+        m.put("/$defs/casting", new KeyList(PileCapBinder.class, "CASTING_KEYS"));
         m.put("/$defs/piles", new KeyList(PileGroupBinder.class, "KEYS"));
         m.put("/$defs/piles/properties/capacity", new KeyList(PileGroupBinder.class, "CAPACITY_KEYS"));
         m.put("/$defs/column", new KeyList(ColumnBinder.class, "KEYS"));
@@ -126,7 +127,9 @@ class SubmissionSchemaTest {
         choices.put("/$defs/materials/properties/concrete", ((Map<?, ?>) staticField(MaterialsBinder.class, "CLASSES")).keySet());
         choices.put("/$defs/materials/properties/exposure/items", ((Map<?, ?>) staticField(MaterialsBinder.class, "EXPOSURE")).keySet());
         choices.put("/$defs/materials/properties/structural_class", ((Map<?, ?>) staticField(MaterialsBinder.class, "STRUCTURAL")).keySet());
-        choices.put("/$defs/pile-cap/properties/cast_against", Values.options(CastAgainst.values()).keySet());
+        choices.put("/$defs/pile-cap/properties/cast_against/anyOf/0", Values.options(CastAgainst.values()).keySet());
+        choices.put("/$defs/casting/properties/bottom", Values.options(CastAgainst.values()).keySet());
+        choices.put("/$defs/casting/properties/sides", List.of("soil", "formwork"));
         choices.put("/$defs/pad-footing/properties/cast_against", Values.options(CastAgainst.values()).keySet());
         choices.put("/$defs/pile-cap/properties/self_weight", Values.options(SelfWeight.values()).keySet());
         choices.put("/$defs/column/properties/shape", Values.options(ColumnShape.values()).keySet());

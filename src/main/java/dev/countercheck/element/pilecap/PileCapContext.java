@@ -44,6 +44,8 @@ final class PileCapContext {
     final Step fctk005;
     final Step fcd;
     final Step fcdShear;
+    /** fck as the shear resistance of concrete takes it (limited by the ruleset's fck_max_shear). */
+    final Step fckShear;
     final Step fctd;
     final Step fyd;
 
@@ -59,6 +61,7 @@ final class PileCapContext {
         double gammaC = rules.number("gamma_c");
         this.fcd = Materials.fcd(rules.number("alpha_cc"), fckMpa, gammaC);
         this.fcdShear = Materials.fcd(rules.number("alpha_cc_shear"), fckMpa, gammaC);
+        this.fckShear = Materials.fckShear(fckMpa, rules.number("fck_max_shear"), clauseOf("fck_max_shear"));
         this.fctd = Materials.fctd(rules.number("alpha_ct"), fctk005.value(), gammaC);
         this.fyd = Materials.fyd(cap.materials().fykMpa(), rules.number("gamma_s"));
         double weight = rules.number("concrete_unit_weight") * cap.planXMm() * cap.planYMm() * cap.depthMm() / 1e9;

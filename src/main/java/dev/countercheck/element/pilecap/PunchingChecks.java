@@ -93,8 +93,9 @@ final class PunchingChecks {
         Step rho = b.trace(Punching.rhoMean(rhoX, rhoY));
         Step k = b.trace(Shear.kSize(d.value()));
         double cRdc = ctx.rules.number("c_rdc_factor") / ctx.rules.number("gamma_c");
-        Step stress = b.trace(Shear.vRdcStress(cRdc, k.value(), rho.value(), ctx.fck.value()));
-        Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), ctx.fck.value()));
+        double fckV = b.trace(ctx.fckShear).value();
+        Step stress = b.trace(Shear.vRdcStress(cRdc, k.value(), rho.value(), fckV));
+        Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), fckV));
         int count = (int) Math.ceil(2 / step.value() - 1e-9);
         Perimeter governing = null;
         for (int j = 1; j <= count; j++) {
