@@ -41,7 +41,7 @@ class PadFootingProperties {
 
     private static final Ruleset RULES = rules();
     private static final PadFootingReviewer REVIEWER = new PadFootingReviewer(new ElementAssembler(
-            new ClaimComparer(RULES.number("claim_tolerance")), new SeverityPolicy(RULES::severity)));
+            new ClaimComparer(RULES.number("claim_tolerance"), java.util.Map.of()), new SeverityPolicy(RULES::severity)));
 
     /** An invented pad: plan, depth, column, one ULS case. */
     record Layout(double lx, double ly, double h, double cx, double cy, double n, double mx, double my) {
