@@ -62,7 +62,8 @@ public final class PadFootingChecks {
                     Kind.DETAILING, List.of(demand("spacing", "mm"), capacity("clear", "mm"), demand("min_clear", "mm"),
                             capacity("max_spacing", "mm"))),
             new CheckSpec("cover", "Concrete cover", "EN 1992-1-1 4.4.1",
-                    Kind.DETAILING, List.of(demand("required", "mm"), capacity("provided", "mm"))),
+                    Kind.DETAILING, List.of(demand("required", "mm"), capacity("provided", "mm"),
+                            demand("required_side", "mm"), capacity("provided_side", "mm"))),
             new CheckSpec("crack-control", "Crack control without direct calculation", "EN 1992-1-1 7.3.3",
                     Kind.DETAILING, List.of(demand("sigma_s", "MPa"), capacity("phi_max", "mm"),
                             capacity("s_max", "mm")))));

@@ -30,6 +30,9 @@ final class PadFootingReviewer {
 
     /** The assumptions every pad-footing review makes, for the report. */
     static final List<String> ASSUMPTIONS = List.of(
+            "The side faces of a pad footing are taken as cast against formwork: the side cover is checked"
+                    + " against cnom, not against the 75 mm of EN 1992-1-1 4.4.1.3(4) for concrete cast against"
+                    + " soil; where the sides are cast against the excavation, check the side cover by hand.",
             "Pad footings are rigid: the ground pressure varies linearly over the base and the ground takes no"
                     + " tension (common practice); where the resultant leaves the kern, the contact zone is solved"
                     + " for equilibrium.",

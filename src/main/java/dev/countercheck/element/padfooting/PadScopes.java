@@ -52,6 +52,8 @@ final class PadScopes {
         s.put("structural_class", Variable.number("-", "structural class as a number (S4 → 4)", 4));
         s.put("exposure", Variable.textList("exposure classes (Table 4.1)", List.of("XC2")));
         s.put("cast_against", Variable.text("blinding, soil or formwork", "blinding"));
+        s.put("cast_against_sides", Variable.text("what the side faces are cast against: formwork for pads (the"
+                + " submission has no field for it; a listed assumption)", "formwork"));
         s.put("cover_bottom", Variable.number("mm", "stated nominal bottom cover", 50));
         s.put("cover_top", Variable.number("mm", "stated nominal top cover", 50));
         s.put("cover_side", Variable.number("mm", "stated nominal side cover", 50));
@@ -139,6 +141,7 @@ final class PadScopes {
         v.put("structural_class", Double.parseDouble(pad.materials().structuralClass().replaceAll("[^0-9]", "")));
         v.put("exposure", pad.materials().exposure());
         v.put("cast_against", pad.castAgainst().name().toLowerCase(Locale.ROOT));
+        v.put("cast_against_sides", "formwork");
         v.put("cover_bottom", r.cover().bottomMm());
         v.put("cover_top", r.cover().topMm());
         v.put("cover_side", r.cover().sideMm());
