@@ -17,7 +17,8 @@ import java.util.Optional;
 public final class PileCapBinder {
 
     private static final List<String> KEYS = List.of("id", "type", "description", "materials", "plan", "depth",
-            "cast_against", "self_weight", "piles", "column", "actions", "reinforcement", "claims", "punching_beta");
+            "cast_against", "self_weight", "piles", "column", "actions", "loads", "reinforcement", "claims",
+            "punching_beta");
     private static final List<String> PLAN_KEYS = List.of("x", "y");
 
     /** Reads pile caps for the reader. */
@@ -52,6 +53,9 @@ public final class PileCapBinder {
                 .flatMap(c -> new ColumnBinder(values).read(c, plan));
         Optional<List<ActionCase>> actions = f.get("actions")
                 .flatMap(n -> new ActionsBinder(values).read(n, f.path("actions")));
+        Optional<List<CharacteristicLoad>> loads = f.has("loads")
+                ? f.get("loads").flatMap(n -> new LoadsBinder(values).read(n, f.path("loads")))
+                : Optional.of(List.of());
         Optional<Double> punchingBeta = f.quantity("punching_beta", Dimension.NUMBER, Bound.POSITIVE)
                 .filter(beta -> atLeastOne(f, beta));
         Optional<Reinforcement> reinforcement = f.fields("reinforcement", ReinforcementBinder.KEYS)
@@ -60,7 +64,7 @@ public final class PileCapBinder {
                 ? f.get("claims").flatMap(n -> new ClaimsBinder(values).read(n, f.path("claims"), PileCapChecks.CATALOGUE))
                 : Optional.of(ClaimsBinder.Claims.NONE);
 
-        List<String> missing = missing(f, actions);
+        List<String> missing = missing(f, actions, loads);
         if (values.problems().any()) {
             return Optional.empty();
         }
@@ -69,8 +73,9 @@ public final class PileCapBinder {
         }
         return Optional.of(new PileCap(id, description, f.location(), materials.orElseThrow(),
                 plan.orElseThrow().xMm(), plan.orElseThrow().yMm(), depth.orElseThrow(), castAgainst.orElseThrow(),
-                selfWeight.orElseThrow(), piles.orElseThrow(), column.orElseThrow(), actions.orElseThrow(),
-                reinforcement, claims.orElseThrow().method(), withBeta(claims.orElseThrow().claims(), punchingBeta, f)));
+                selfWeight.orElseThrow(), piles.orElseThrow(), column.orElseThrow(), actions.orElse(List.of()),
+                reinforcement, claims.orElseThrow().method(), withBeta(claims.orElseThrow().claims(), punchingBeta, f),
+                loads.orElseThrow()));
     }
 
     private Optional<Plan> plan(Fields f) {
@@ -99,15 +104,19 @@ public final class PileCapBinder {
     }
 
     /** The items every check needs that the element does not give. */
-    private static List<String> missing(Fields f, Optional<List<ActionCase>> actions) {
+    private static List<String> missing(Fields f, Optional<List<ActionCase>> actions,
+                                        Optional<List<CharacteristicLoad>> loads) {
         List<String> missing = new ArrayList<>();
         for (String key : List.of("plan", "depth", "piles", "column")) {
             if (!f.has(key)) {
                 missing.add(key);
             }
         }
+        if (loads.map(l -> !l.isEmpty()).orElse(false)) {
+            return missing;
+        }
         if (!f.has("actions") || actions.map(List::isEmpty).orElse(false)) {
-            missing.add("actions");
+            missing.add("actions (or loads)");
         } else if (actions.isPresent() && actions.get().stream().noneMatch(a -> a.kind() == Kind.ULS)) {
             missing.add("a ULS action case (kind: uls)");
         }
