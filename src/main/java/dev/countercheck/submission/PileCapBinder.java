@@ -116,7 +116,7 @@ public final class PileCapBinder {
             return missing;
         }
         if (!f.has("actions") || actions.map(List::isEmpty).orElse(false)) {
-            missing.add("actions (or loads)");
+            missing.add("actions");
         } else if (actions.isPresent() && actions.get().stream().noneMatch(a -> a.kind() == Kind.ULS)) {
             missing.add("a ULS action case (kind: uls)");
         }

@@ -155,12 +155,13 @@ class CommandsTest {
                 "2026-12-01", "--pdf");
         // harbour-lane has critical findings (its comment says so): exit 1.
         assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.FINDINGS);
-        assertThat(r.err()).contains("[1/2]").contains("[2/2]");
-        for (String base : new String[] {"harbour-lane", "quayside-annex"}) {
+        assertThat(r.err()).contains("[1/3]").contains("[2/3]").contains("[3/3]");
+        for (String base : new String[] {"harbour-lane", "mill-road-depot", "quayside-annex"}) {
             assertThat(out.resolve(base + ".json")).isNotEmptyFile();
             assertThat(out.resolve(base + ".html")).isNotEmptyFile();
             assertThat(out.resolve(base + ".pdf")).isNotEmptyFile();
         }
-        assertThat(out.resolve("index.html")).content().contains("harbour-lane.html").contains("quayside-annex.html");
+        assertThat(out.resolve("index.html")).content().contains("harbour-lane.html").contains("mill-road-depot.html")
+                .contains("quayside-annex.html");
     }
 }
