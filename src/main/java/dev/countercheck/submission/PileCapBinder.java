@@ -11,8 +11,9 @@ import java.util.Optional;
 
 /**
  * Reads one {@code type: pile-cap} element. An element that lacks an item every check needs (its
- * plan, depth, piles, column, actions, or a ULS action case) but is otherwise readable becomes an
- * {@link IncompleteElement} naming what is missing; whatever it does give is still validated.
+ * plan, depth, piles, column, and actions with a ULS case or else characteristic loads) but is otherwise
+ * readable becomes an {@link IncompleteElement} naming what is missing; whatever it does give is still
+ * validated.
  */
 public final class PileCapBinder {
 
