@@ -78,6 +78,9 @@ public final class ProjectReviewer {
         }
         ElementKinds.ALL.stream().filter(k -> submission.elements().stream().anyMatch(e -> e.type().equals(k.type())))
                 .forEach(k -> assumptions.addAll(k.assumptions()));
+        if (elements.stream().anyMatch(e -> !e.combinations().isEmpty())) {
+            assumptions.add(Combinations.ASSUMPTION);
+        }
         assumptions.add("Checks marked not-checked were not performed; the review says nothing about them.");
         var p = submission.project();
         return new Review(tool,
@@ -112,6 +115,7 @@ public final class ProjectReviewer {
 
     private static Set<String> requiredParameters() {
         Set<String> all = new TreeSet<>(Set.of("claim_tolerance", "cover_deviation"));
+        all.addAll(Combinations.PARAMETERS);
         all.addAll(CLAIM_FLOORS.values());
         ElementKinds.ALL.forEach(k -> all.addAll(k.parameters()));
         return Set.copyOf(all);

@@ -10,6 +10,7 @@ import dev.countercheck.review.Drawing;
 import dev.countercheck.review.PadFootingDrawing;
 import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.review.ElementReview;
+import dev.countercheck.review.GeneratedCase;
 import dev.countercheck.review.Finding;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
@@ -103,7 +104,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      */
     public record ElementView(String anchor, String number, String id, String type, String description,
                               String verdict, List<CheckView> checks, List<FindingRow> findings, int cautionCount,
-                              List<DrawingView> drawings) {
+                              List<DrawingView> drawings, List<CombinationRow> combinations) {
 
         /** The checks with a utilisation, largest first, then the others in their order. */
         public List<CheckView> checksByUtilisation() {
@@ -133,11 +134,21 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      */
     public record CheckView(String anchor, String id, String title, String basis, String status, boolean failing,
                             String utilisation, String bar, boolean over, String reason, List<QuantityView> quantities,
-                            List<StepView> trace) {
+                            List<StepView> trace, String governingCase) {
 
         Optional<Double> utilisationValue() {
             return utilisation.isEmpty() ? Optional.empty() : Optional.of(Double.parseDouble(utilisation));
         }
+    }
+
+    /**
+     * A combination generated from the element's characteristic loads, a row of its collapsed table.
+     *
+     * @param factors the factors of its actions and the clauses
+     * @param governs the ids of the checks it governs (empty when it governs none)
+     */
+    public record CombinationRow(String name, String kind, String n, String mx, String my, String hx, String hy,
+                                 String factors, String clause, String governs) {
     }
 
     /**
@@ -238,7 +249,15 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
         List<DrawingView> drawings = element.drawing().map(d -> List.of(drawing(anchor, element, d)))
                 .orElse(List.of());
         return new ElementView(anchor, "2." + position, element.id(), element.type(), element.description(),
-                element.verdict().label(), checks, findings, element.cautions().size(), drawings);
+                element.verdict().label(), checks, findings, element.cautions().size(), drawings,
+                element.combinations().stream().map(HtmlModel::combinationRow).toList());
+    }
+
+    private static CombinationRow combinationRow(GeneratedCase c) {
+        return new CombinationRow(c.name(), c.kind(), ReportNumbers.display(c.nKn(), "kN"),
+                ReportNumbers.display(c.mxKnm(), "kNm"), ReportNumbers.display(c.myKnm(), "kNm"),
+                ReportNumbers.display(c.hxKn(), "kN"), ReportNumbers.display(c.hyKn(), "kN"), c.trace().substituted(),
+                c.trace().clause(), String.join(", ", c.governs()));
     }
 
     /** The element's drawing as its kind renders it; the report never asks which kind it is. */
@@ -283,7 +302,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
         boolean over = check.utilisation().isPresent() && check.utilisation().getAsDouble() > 1;
         return new CheckView(anchor, check.id(), check.title(), check.basis(), check.status().label(),
                 check.status() == CheckStatus.FAIL, utilisation, bar, over, text(check.reason()),
-                quantities(check, trace), trace);
+                quantities(check, trace), trace, check.governingCase().orElse(""));
     }
 
     /**

@@ -13,6 +13,7 @@ import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.ClaimComparison;
 import dev.countercheck.review.ElementReview;
+import dev.countercheck.review.GeneratedCase;
 import dev.countercheck.review.Finding;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
@@ -104,6 +105,25 @@ public final class JsonResultWriter {
         ArrayNode findings = node.putArray("findings");
         element.findings().forEach(f -> findings.add(finding(f)));
         strings(node.putArray("cautions"), element.cautions());
+        if (!element.combinations().isEmpty()) {
+            ArrayNode generated = node.putArray("combinations");
+            element.combinations().forEach(c -> generated.add(combination(c)));
+        }
+        return node;
+    }
+
+    private static ObjectNode combination(GeneratedCase c) {
+        ObjectNode node = MAPPER.createObjectNode();
+        node.put("name", c.name());
+        node.put("kind", c.kind());
+        node.put("N", ReportNumbers.quantity(c.nKn()));
+        node.put("Mx", ReportNumbers.quantity(c.mxKnm()));
+        node.put("My", ReportNumbers.quantity(c.myKnm()));
+        node.put("Hx", ReportNumbers.quantity(c.hxKn()));
+        node.put("Hy", ReportNumbers.quantity(c.hyKn()));
+        node.put("gamma_self_weight", ReportNumbers.ratio(c.selfWeightFactor()));
+        node.set("trace", step(c.trace()));
+        strings(node.putArray("governs"), c.governs());
         return node;
     }
 
@@ -114,6 +134,7 @@ public final class JsonResultWriter {
         node.put("basis", check.basis());
         node.put("status", check.status().label());
         check.utilisation().ifPresent(u -> node.put("utilisation", ReportNumbers.ratio(u)));
+        putIfPresent(node, "governing_case", check.governingCase());
         putIfPresent(node, "reason", check.reason());
         ObjectNode values = node.putObject("values");
         check.values().forEach((name, value) -> values.set(name, value(value)));

@@ -76,8 +76,7 @@ public final class ElementAssembler {
     }
 
     private static CheckResult withClaims(CheckResult r, List<ClaimComparison> claims) {
-        return new CheckResult(r.id(), r.title(), r.basis(), r.status(), r.utilisation(), r.reason(), r.values(),
-                List.copyOf(claims), r.trace());
+        return r.withClaims(claims);
     }
 
     /**

@@ -2,12 +2,29 @@ package dev.countercheck.submission;
 
 import dev.countercheck.input.SourceLocation;
 
+import java.util.OptionalDouble;
+
 /**
  * One action case at the top of the element. Compression positive; {@code mx} increases the
  * reactions at positive y, {@code my} those at positive x.
+ *
+ * @param selfWeightFactor the factor on the element's own weight that a generated combination carries (its
+ *                         γG); empty for a designer's case, whose own weight takes γG,sup or γG,inf as each
+ *                         check needs
  */
 public record ActionCase(String name, Kind kind, double nKn, double mxKnm, double myKnm, double hxKn, double hyKn,
-                         SourceLocation location) {
+                         SourceLocation location, OptionalDouble selfWeightFactor) {
+
+    /** A designer's action case. */
+    public ActionCase(String name, Kind kind, double nKn, double mxKnm, double myKnm, double hxKn, double hyKn,
+                      SourceLocation location) {
+        this(name, kind, nKn, mxKnm, myKnm, hxKn, hyKn, location, OptionalDouble.empty());
+    }
+
+    /** True for a case the review generated from characteristic loads. */
+    public boolean generated() {
+        return selfWeightFactor.isPresent();
+    }
 
     public enum Kind {
         ULS("uls"), SLS_CHARACTERISTIC("sls-characteristic"), SLS_QUASI_PERMANENT("sls-quasi-permanent"),

@@ -14,13 +14,15 @@ import java.util.Optional;
 
 /**
  * Reads one {@code type: pile-cap} element. An element that lacks an item every check needs (its
- * plan, depth, piles, column, actions, or a ULS action case) but is otherwise readable becomes an
- * {@link IncompleteElement} naming what is missing; whatever it does give is still validated.
+ * plan, depth, piles, column, and actions with a ULS case or else characteristic loads) but is otherwise
+ * readable becomes an {@link IncompleteElement} naming what is missing; whatever it does give is still
+ * validated.
  */
 public final class PileCapBinder {
 
     private static final List<String> KEYS = List.of("id", "type", "description", "materials", "plan", "depth",
-            "cast_against", "self_weight", "piles", "column", "actions", "reinforcement", "claims", "punching_beta");
+            "cast_against", "self_weight", "piles", "column", "actions", "loads", "reinforcement", "claims",
+            "punching_beta");
     private static final List<String> PLAN_KEYS = List.of("x", "y");
     private static final List<String> CASTING_KEYS = List.of("bottom", "sides");
 
@@ -55,6 +57,9 @@ public final class PileCapBinder {
                 .flatMap(c -> new ColumnBinder(values).read(c, plan));
         Optional<List<ActionCase>> actions = f.get("actions")
                 .flatMap(n -> new ActionsBinder(values).read(n, f.path("actions")));
+        Optional<List<CharacteristicLoad>> loads = f.has("loads")
+                ? f.get("loads").flatMap(n -> new LoadsBinder(values).read(n, f.path("loads")))
+                : Optional.of(List.of());
         Optional<Double> punchingBeta = f.quantity("punching_beta", Dimension.NUMBER, Bound.POSITIVE)
                 .filter(beta -> atLeastOne(f, beta));
         Optional<Reinforcement> reinforcement = f.fields("reinforcement", ReinforcementBinder.KEYS)
@@ -63,7 +68,7 @@ public final class PileCapBinder {
                 ? f.get("claims").flatMap(n -> new ClaimsBinder(values).read(n, f.path("claims"), PileCapChecks.CATALOGUE))
                 : Optional.of(ClaimsBinder.Claims.NONE);
 
-        List<String> missing = missing(f, actions);
+        List<String> missing = missing(f, actions, loads);
         if (values.problems().any()) {
             return Optional.empty();
         }
@@ -72,8 +77,9 @@ public final class PileCapBinder {
         }
         return Optional.of(new PileCap(id, description, f.location(), materials.orElseThrow(),
                 plan.orElseThrow().xMm(), plan.orElseThrow().yMm(), depth.orElseThrow(), castAgainst.orElseThrow(),
-                selfWeight.orElseThrow(), piles.orElseThrow(), column.orElseThrow(), actions.orElseThrow(),
-                reinforcement, claims.orElseThrow().method(), withBeta(claims.orElseThrow().claims(), punchingBeta, f)));
+                selfWeight.orElseThrow(), piles.orElseThrow(), column.orElseThrow(), actions.orElse(List.of()),
+                reinforcement, claims.orElseThrow().method(), withBeta(claims.orElseThrow().claims(), punchingBeta, f),
+                loads.orElseThrow()));
     }
 
     /**
@@ -127,12 +133,16 @@ public final class PileCapBinder {
     }
 
     /** The items every check needs that the element does not give. */
-    private static List<String> missing(Fields f, Optional<List<ActionCase>> actions) {
+    private static List<String> missing(Fields f, Optional<List<ActionCase>> actions,
+                                        Optional<List<CharacteristicLoad>> loads) {
         List<String> missing = new ArrayList<>();
         for (String key : List.of("plan", "depth", "piles", "column")) {
             if (!f.has(key)) {
                 missing.add(key);
             }
+        }
+        if (loads.map(l -> !l.isEmpty()).orElse(false)) {
+            return missing;
         }
         if (!f.has("actions") || actions.map(List::isEmpty).orElse(false)) {
             missing.add("actions");

@@ -155,12 +155,26 @@ class CommandsTest {
                 "2026-12-01", "--pdf");
         // harbour-lane has critical findings (its comment says so): exit 1.
         assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.FINDINGS);
-        assertThat(r.err()).contains("[1/3]").contains("[3/3]");
-        for (String base : new String[] {"harbour-lane", "orchard-yard-pads", "quayside-annex"}) {
+        assertThat(r.err()).contains("[1/4]").contains("[2/4]").contains("[4/4]");
+        for (String base : new String[] {"harbour-lane", "mill-road-depot", "orchard-yard-pads", "quayside-annex"}) {
             assertThat(out.resolve(base + ".json")).isNotEmptyFile();
             assertThat(out.resolve(base + ".html")).isNotEmptyFile();
             assertThat(out.resolve(base + ".pdf")).isNotEmptyFile();
         }
-        assertThat(out.resolve("index.html")).content().contains("harbour-lane.html").contains("quayside-annex.html");
+        assertThat(out.resolve("index.html")).content().contains("harbour-lane.html").contains("mill-road-depot.html")
+                .contains("quayside-annex.html");
+    }
+
+    /** The combinations of the Mill Road sample: text by default, YAML items ready to paste as actions. */
+    @Test
+    void combinePrintsTheGeneratedCasesOfEachElement() {
+        SampleSubmissionsTest.Run text = run("combine", "sample-submissions/mill-road-depot.yaml");
+        assertThat(text.exit()).as(text.err()).isEqualTo(ExitCodes.OK);
+        assertThat(text.out()).contains("# PC-M1: ").contains("6.10 G sup + Q(B) lead + S ψ0 + W− ψ0")
+                .contains("sls-quasi-permanent");
+        SampleSubmissionsTest.Run yaml = run("combine", "sample-submissions/mill-road-depot.yaml", "--format", "yaml");
+        assertThat(yaml.exit()).isEqualTo(ExitCodes.OK);
+        // PC-M2's G 1650 alone by Exp. (6.10) with γG,sup 1.35: N = 2227.5 kN
+        assertThat(yaml.out()).contains("  - {name: \"6.10 G sup\", kind: uls, N: 2227.5, Mx: 0, My: 0, Hx: 0, Hy: 0}");
     }
 }

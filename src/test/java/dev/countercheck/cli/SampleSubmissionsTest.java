@@ -105,8 +105,20 @@ class SampleSubmissionsTest {
                 assertThat(matching).as(expectation).isNotEmpty();
             }
             case "check" -> assertCheck(expectation, words, element(result, words[1]));
+            case "governing" -> assertThat(check(result, words[1], words[2]).path("governing_case").asText())
+                    .as(expectation).isEqualTo(expectation.split("\\s+", 4)[3]);
             default -> throw new AssertionError("unknown expectation: " + expectation);
         }
+    }
+
+    /** Check {@code checkId} of element {@code elementId}. */
+    private static JsonNode check(JsonNode result, String elementId, String checkId) {
+        for (JsonNode c : element(result, elementId).get("checks")) {
+            if (c.get("id").asText().equals(checkId)) {
+                return c;
+            }
+        }
+        throw new AssertionError("no check " + checkId + " on " + elementId);
     }
 
     /**

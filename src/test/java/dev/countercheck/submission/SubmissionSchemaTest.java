@@ -78,6 +78,7 @@ class SubmissionSchemaTest {
         m.put("/$defs/column", new KeyList(ColumnBinder.class, "KEYS"));
         m.put("/$defs/column/properties/starter_bars", new KeyList(ColumnBinder.class, "STARTER_KEYS"));
         m.put("/$defs/action", new KeyList(ActionsBinder.class, "KEYS"));
+        m.put("/$defs/load", new KeyList(LoadsBinder.class, "KEYS"));
         m.put("/$defs/reinforcement", new KeyList(ReinforcementBinder.class, "KEYS"));
         m.put("/$defs/reinforcement/properties/cover", new KeyList(ReinforcementBinder.class, "COVER_KEYS"));
         m.put("/$defs/reinforcement/properties/sides", new KeyList(ReinforcementBinder.class, "SIDE_KEYS"));
@@ -87,7 +88,7 @@ class SubmissionSchemaTest {
     }
 
     private static final List<Class<?>> BINDERS = List.of(SubmissionBinder.class, MaterialsBinder.class,
-            PileCapBinder.class, PadFootingBinder.class, PileGroupBinder.class, ColumnBinder.class, ActionsBinder.class,
+            PileCapBinder.class, PadFootingBinder.class, PileGroupBinder.class, ColumnBinder.class, ActionsBinder.class, LoadsBinder.class,
             ReinforcementBinder.class, ClaimsBinder.class);
 
     @Test
@@ -134,6 +135,8 @@ class SubmissionSchemaTest {
         choices.put("/$defs/pile-cap/properties/self_weight", Values.options(SelfWeight.values()).keySet());
         choices.put("/$defs/column/properties/shape", Values.options(ColumnShape.values()).keySet());
         choices.put("/$defs/action/properties/kind", Values.options(Kind.values()).keySet());
+        choices.put("/$defs/load/properties/source", ((Map<?, ?>) staticField(LoadsBinder.class, "SOURCES")).keySet());
+        choices.put("/$defs/load/properties/category", ((Map<?, ?>) staticField(LoadsBinder.class, "CATEGORIES")).keySet());
         choices.put("/$defs/bar-set/properties/direction", Values.options(Direction.values()).keySet());
         choices.put("/$defs/bar-set/properties/ends", Values.options(BarEnds.values()).keySet());
         choices.put("/$defs/claims/properties/method", Values.options(TieMethod.values()).keySet());

@@ -32,7 +32,7 @@ final class HoggingCheck {
     }
 
     /** The governing side: moment (kNm), its substituted terms, case and γG. */
-    private record Side(double momentKnm, String terms, String caseName) {
+    private record Side(double momentKnm, String terms, String caseName, String action) {
     }
 
     static CheckOutcome run(PileCapContext ctx, Axis axis) {
@@ -41,6 +41,7 @@ final class HoggingCheck {
         if (worst == null) {
             return b.notApplicable("no pile is in tension in any ULS case (own weight × γG,sup or γG,inf)").build();
         }
+        b.governing(worst.action);
         if (ctx.cap.reinforcement().isEmpty()) {
             return b.notChecked("no reinforcement given: the top steel and its depth are unknown").build();
         }
@@ -85,10 +86,11 @@ final class HoggingCheck {
         for (UlsCase u : ctx.uls) {
             for (boolean sup : new boolean[] {true, false}) {
                 Distribution dist = sup ? u.withSelfWeight() : u.withFavourableSelfWeight();
-                double gamma = sup ? ctx.gammaGSup() : ctx.gammaGInf();
-                String caseName = u.action().name() + (ctx.addsSelfWeight() ? (sup ? ", γG,sup" : ", γG,inf") : "");
+                double gamma = sup ? ctx.gammaSup(u.action()) : ctx.gammaInf(u.action());
+                String caseName = u.action().name() + (ctx.addsSelfWeight() && !u.action().generated()
+                        ? (sup ? ", γG,sup" : ", γG,inf") : "");
                 for (int sign : new int[] {1, -1}) {
-                    Side side = side(ctx, axis, sign, dist.reactionsKn(), gamma, caseName);
+                    Side side = side(ctx, axis, sign, dist.reactionsKn(), gamma, caseName, u.action().name());
                     if (side != null && (best == null || side.momentKnm > best.momentKnm)) {
                         best = side;
                     }
@@ -99,7 +101,8 @@ final class HoggingCheck {
     }
 
     /** One side of one distribution, or null when no pile beyond the face on that side is in tension. */
-    private static Side side(PileCapContext ctx, Axis axis, int sign, double[] p, double gamma, String caseName) {
+    private static Side side(PileCapContext ctx, Axis axis, int sign, double[] p, double gamma, String caseName,
+                             String action) {
         double face = axis.along(ctx.cap.column().position()) + sign * axis.columnHalf(ctx.cap.column());
         List<Point> piles = ctx.cap.piles().positions();
         double sum = 0;
@@ -123,6 +126,6 @@ final class HoggingCheck {
                     + Num.f(axis.capWidth(ctx.cap) / 1000) + "·" + Num.f(ctx.cap.depthMm() / 1000) + "·"
                     + Num.f(length / 1000) + "²/2");
         }
-        return new Side(sum, String.join(" + ", terms), caseName);
+        return new Side(sum, String.join(" + ", terms), caseName, action);
     }
 }

@@ -43,6 +43,7 @@ final class NodeChecks {
         double side = Math.sqrt(c.areaMm2());
         Step worst = null;
         Step worstArea = null;
+        String worstCase = "";
         for (UlsCase u : ctx.uls) {
             double n = u.action().nKn();
             if (n <= 0) {
@@ -67,12 +68,14 @@ final class NodeChecks {
             if (worst == null || stress.value() > worst.value()) {
                 worst = stress;
                 worstArea = aEff;
+                worstCase = u.action().name();
             }
         }
         if (worst == null) {
             return b.notApplicable("no ULS case presses the column onto the cap").build();
         }
         b.trace(worstArea);
+        b.governing(worstCase);
         Step stress = b.value("stress", worst);
         RuleOption basis = ctx.rules.option(PileCapReviewer.NODE_COLUMN_BASIS);
         Step limit = b.value("limit", (PARTIALLY_LOADED.equals(basis.value())
@@ -87,6 +90,8 @@ final class NodeChecks {
         CheckBuilder b = Checks.builder("node-pile");
         int n = ctx.cap.piles().count();
         double pMax = maxReaction(ctx);
+        ctx.uls.stream().filter(u -> u.withSelfWeight().max() == pMax).findFirst()
+                .ifPresent(u -> b.governing(u.action().name()));
         double phi = ctx.cap.piles().diameterMm();
         Step area = b.trace(Step.of("Ap", "π·φ²/4", "π·" + Num.f(phi) + "²/4", Math.PI * phi * phi / 4, "mm2",
                 "circular pile head"));

@@ -71,8 +71,8 @@ final class PileCapContext {
         List<UlsCase> cases = new ArrayList<>();
         for (ActionCase a : cap.actions()) {
             if (a.kind() == ActionCase.Kind.ULS) {
-                cases.add(new UlsCase(a, reactions(a, addsSelfWeight()), reactions(a, false),
-                        reactions(cap.piles().positions(), a, gammaGInf())));
+                cases.add(new UlsCase(a, reactions(cap.piles().positions(), a, gammaSup(a)), reactions(a, false),
+                        reactions(cap.piles().positions(), a, gammaInf(a))));
             }
         }
         this.uls = List.copyOf(cases);
@@ -100,6 +100,16 @@ final class PileCapContext {
     /** γG,inf, the factor on the own weight where it relieves the effect (EN 1990 Table A1.2(B)). */
     double gammaGInf() {
         return rules.number("gamma_g_inf");
+    }
+
+    /** The factor on the own weight where it adds to the effect: a generated case's own γG, else γG,sup. */
+    double gammaSup(ActionCase a) {
+        return a.selfWeightFactor().orElse(gammaGSup());
+    }
+
+    /** The factor on the own weight where it relieves the effect: a generated case's own γG, else γG,inf. */
+    double gammaInf(ActionCase a) {
+        return a.selfWeightFactor().orElse(gammaGInf());
     }
 
     Distribution reactions(ActionCase a, boolean withSelfWeight) {

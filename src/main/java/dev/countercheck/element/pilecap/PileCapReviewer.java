@@ -1,7 +1,12 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Combinations;
+import dev.countercheck.element.CombinationsCheck;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.OutOfRangeException;
+import dev.countercheck.review.CheckResult;
+import dev.countercheck.review.GeneratedCase;
+import dev.countercheck.submission.ActionCase;
 import dev.countercheck.element.RuleChecks;
 import dev.countercheck.review.Value;
 import dev.countercheck.ruleset.Rule;
@@ -21,6 +26,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.function.Function;
+import java.util.stream.Collectors;
 
 import static dev.countercheck.submission.PileCapChecks.CATALOGUE;
 
@@ -74,9 +80,44 @@ final class PileCapReviewer {
 
     /** What the detailing rules of a ruleset may use and define for pile caps: the checks not computed in Java. */
     static final ElementRules RULE_VOCABULARY = new ElementRules(DetailingScopes.SCOPES, DetailingScopes.subjects(),
-            CATALOGUE.quantityUnits(id -> !checks().containsKey(id)));
+            CATALOGUE.quantityUnits(id -> !checks().containsKey(id) && !id.equals(CombinationsCheck.ID)));
 
     ElementReview review(PileCap cap, Ruleset rules) {
+        if (cap.loads().isEmpty()) {
+            Run run = run(cap, rules);
+            return assemble(cap, run, CombinationsCheck.notAsked(CATALOGUE), List.of());
+        }
+        Combinations generated;
+        try {
+            generated = Combinations.of(cap.loads(), rules);
+        } catch (IllegalArgumentException e) {
+            CheckOutcome why = CombinationsCheck.notFormed(CATALOGUE, e.getMessage());
+            if (!hasUls(cap.actions())) {
+                return assembler.assemble(cap.id(), CATALOGUE, cap.description(), CATALOGUE.checks().keySet().stream()
+                        .map(id -> id.equals(CombinationsCheck.ID) ? why : Checks.builder(id)
+                                .notChecked("the combinations of the loads could not be formed: " + e.getMessage())
+                                .build()).toList(), cap.claims(), List.of(), Optional.empty());
+            }
+            return assemble(cap, run(cap, rules), why, List.of());
+        }
+        List<ActionCase> cases = generated.cases(cap.location());
+        List<ActionCase> both = new ArrayList<>(cap.actions());
+        both.addAll(cases);
+        Run union = run(cap.withActions(both), rules);
+        CheckOutcome comparison = hasUls(cap.actions())
+                ? CombinationsCheck.compare(CATALOGUE, results(run(cap, rules)), results(run(cap.withActions(cases),
+                        rules)), cap.actions().size(), cases.size(), rules.number("claim_tolerance"))
+                : CombinationsCheck.generatedOnly(CATALOGUE, cases.size(), cap.actions().size());
+        Set<String> names = cases.stream().map(ActionCase::name).collect(Collectors.toSet());
+        return assemble(cap, union, comparison, generated.forReport(CombinationsCheck.governed(
+                union.outcomes.stream().map(CheckOutcome::result).toList(), names)));
+    }
+
+    /** The context and the outcomes of every check but {@code combinations}, in catalogue order. */
+    private record Run(PileCapContext ctx, List<CheckOutcome> outcomes) {
+    }
+
+    private Run run(PileCap cap, Ruleset rules) {
         PileCapContext ctx = new PileCapContext(cap, rules);
         Map<String, Function<PileCapContext, CheckOutcome>> checks = checks();
         Map<String, CheckOutcome> done = new LinkedHashMap<>();
@@ -89,10 +130,31 @@ final class PileCapReviewer {
         Map<String, DetailingScopes.Values> variables = new HashMap<>();
         List<CheckOutcome> outcomes = new ArrayList<>();
         for (String id : CATALOGUE.checks().keySet()) {
-            outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired, variables));
+            if (!id.equals(CombinationsCheck.ID)) {
+                outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired, variables));
+            }
         }
-        return assembler.assemble(cap.id(), CATALOGUE, cap.description(), outcomes, cap.claims(), cautions(ctx),
-                Optional.of(DrawingNotes.of(ctx, outcomes)));
+        return new Run(ctx, outcomes);
+    }
+
+    private ElementReview assemble(PileCap cap, Run run, CheckOutcome combinations, List<GeneratedCase> generated) {
+        List<CheckOutcome> outcomes = new ArrayList<>();
+        for (String id : CATALOGUE.checks().keySet()) {
+            outcomes.add(id.equals(CombinationsCheck.ID) ? combinations
+                    : run.outcomes.stream().filter(o -> o.result().id().equals(id)).findFirst().orElseThrow());
+        }
+        return assembler.assemble(cap.id(), CATALOGUE, cap.description(), outcomes, cap.claims(), cautions(run.ctx),
+                Optional.of(DrawingNotes.of(run.ctx, outcomes))).withCombinations(generated);
+    }
+
+    private static Map<String, CheckResult> results(Run run) {
+        Map<String, CheckResult> map = new LinkedHashMap<>();
+        run.outcomes.forEach(o -> map.put(o.result().id(), o.result()));
+        return map;
+    }
+
+    private static boolean hasUls(List<ActionCase> actions) {
+        return actions.stream().anyMatch(a -> a.kind() == ActionCase.Kind.ULS);
     }
 
     /** What the review took as given about the element as a whole. */

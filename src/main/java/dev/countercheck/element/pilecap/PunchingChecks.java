@@ -54,6 +54,7 @@ final class PunchingChecks {
             return b.notApplicable("no ULS case presses the column onto the cap").build();
         }
         b.value("beta", beta);
+        b.governing(worstCase);
         Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
                 + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
         Step u0 = b.value("u0", c.shape() == ColumnShape.CIRCULAR
@@ -129,6 +130,7 @@ final class PunchingChecks {
                 g.caseName + (relief.isEmpty() ? ", no pile inside" : ", inside: " + String.join(" + ", relief)),
                 g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2)"));
         Step beta = b.trace(g.beta);
+        b.governing(g.caseName);
         Step ved = b.value("ved", Step.of("β·VEd,red", "β·VEd,red", Num.f(beta.value()) + "·"
                 + Num.f(reduced.value()), beta.value() * reduced.value(), "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.51)"));
         Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), g.aMm));

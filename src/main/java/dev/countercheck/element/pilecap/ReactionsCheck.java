@@ -42,6 +42,7 @@ final class ReactionsCheck {
                 "pile " + min.pile + " in " + min.caseName, min.value, "kN", BASIS));
         double rc = ctx.cap.piles().compressionKn();
         double rt = ctx.cap.piles().tensionKn();
+        b.governing(min.value < 0 && -min.value / rt > max.value / rc ? min.caseName : max.caseName);
         b.require(max.value, rc, FindingKind.CAPACITY, "compression", "Pile " + max.pile + " carries " + show(max.value) + " in "
                 + max.caseName + ", more than its design resistance " + show(rc) + ".");
         if (min.value < 0) {

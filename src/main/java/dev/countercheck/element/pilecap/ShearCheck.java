@@ -59,6 +59,7 @@ final class ShearCheck {
         if (worst == null) {
             return b.notApplicable("no pile centre lies beyond the column face along " + axis.label()).build();
         }
+        b.governing(worst.caseName);
         worst.steps.forEach(b::trace);
         b.value("av", worst.av);
         b.value("beta", worst.beta);

@@ -48,6 +48,7 @@ final class TieCheck {
         boolean bending = ctx.cap.tieMethod() == TieMethod.BENDING;
         double offset = bending ? ctx.columnHalf(axis) : 0.0;
         Side side = governing(ctx, axis, offset);
+        b.governing(side.caseName);
         Step force;
         Step required;
         if (bending) {
