@@ -27,7 +27,7 @@ public record PileCap(String id, String description, SourceLocation location, Ma
 
     /** A pile cap given by its combined action cases only (no characteristic loads). */
     public PileCap(String id, String description, SourceLocation location, Materials materials, double planXMm,
-                   double planYMm, double depthMm, CastAgainst castAgainst, SelfWeight selfWeight, PileGroup piles,
+                   double planYMm, double depthMm, Casting castAgainst, SelfWeight selfWeight, PileGroup piles,
                    Column column, List<ActionCase> actions, Optional<Reinforcement> reinforcement, TieMethod tieMethod,
                    List<Claim> claims) {
         this(id, description, location, materials, planXMm, planYMm, depthMm, castAgainst, selfWeight, piles, column,
