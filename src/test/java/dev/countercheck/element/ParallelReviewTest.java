@@ -34,7 +34,7 @@ class ParallelReviewTest {
         Ruleset rules = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY)
                 .load(submission.ruleset().orElse("en1992-recommended"));
         List<ElementInput> many = new ArrayList<>();
-        for (int i = 0; i < 8; i++) {
+        for (int i = 0; i < 4; i++) {
             List<ElementInput> round = new ArrayList<>(submission.elements());
             Collections.shuffle(round, new java.util.Random(i));
             many.addAll(round);
