@@ -43,10 +43,15 @@ public final class ProjectReviewer {
             + " Local codes, the applicable National Annex and licensed engineering practice govern.";
 
     /** What the tool does not review at all, stated in every report beside the checks it did not do. */
-    public static final String OUT_OF_SCOPE = "This tool reviews pile caps only. It does not review other foundation"
-            + " elements (pad and strip footings, ground beams, rafts), the piles themselves (their design resistances"
-            + " are taken as submitted), the ground (bearing, settlement, pile group effects), or the columns and walls"
-            + " above; nothing about them is checked here.";
+    public static final String OUT_OF_SCOPE = "This tool reviews pile caps and pad footings only. It does not review"
+            + " other foundation elements (strip footings, ground beams, rafts), the piles themselves (their design"
+            + " resistances are taken as submitted), the ground beyond the pad checks it names (settlement, pile group"
+            + " effects, the ground under pile caps), or the columns and walls above; nothing about them is checked here.";
+
+    /** The ruleset parameter that holds the absolute claim tolerance of each catalogue unit. */
+    private static final Map<String, String> CLAIM_FLOORS = Map.of("kN", "claim_floor_force",
+            "kNm", "claim_floor_moment", "mm", "claim_floor_length", "mm2", "claim_floor_area",
+            "MPa", "claim_floor_stress", "deg", "claim_floor_angle", "-", "claim_floor_ratio");
 
     /** Every ruleset parameter a review reads in Java; the ruleset loader refuses a chain that lacks one. */
     public static final Set<String> REQUIRED_PARAMETERS = requiredParameters();
@@ -71,8 +76,8 @@ public final class ProjectReviewer {
 
     public Review review(Submission submission, Ruleset rules, String reviewDate) {
         SeverityPolicy severities = new SeverityPolicy(rules::severity);
-        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance")),
-                severities);
+        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance"),
+                claimFloors(rules)), severities);
         Function<ElementInput, ElementReview> one = e -> {
             ElementKind<?> kind = ElementKinds.of(e.type()).orElseThrow(
                     () -> new IllegalStateException("no element kind of type " + e.type()));
@@ -84,6 +89,11 @@ public final class ProjectReviewer {
         assumptions.add(GENERAL_CAUTION);
         assumptions.add("Nationally determined parameters come from ruleset " + rules.id() + " (" + rules.title()
                 + "); every value used is shown in the calculation trace with the file that set it.");
+        if (!rules.recalled().isEmpty()) {
+            assumptions.add("Values of ruleset " + rules.id() + " recalled from memory, not yet verified against the"
+                    + " printed standard or annex (verify them before relying on a check that uses them; the trace"
+                    + " marks each step that does): " + String.join("; ", rules.recalled()) + ".");
+        }
         ElementKinds.ALL.stream().filter(k -> submission.elements().stream().anyMatch(e -> e.type().equals(k.type())))
                 .forEach(k -> assumptions.addAll(k.assumptions()));
         assumptions.add("Checks marked not-checked were not performed; the review says nothing about them.");
@@ -111,8 +121,16 @@ public final class ProjectReviewer {
                 List.of("No check of " + e.id() + " was performed."), Optional.empty());
     }
 
+    /** The absolute claim tolerance by unit, from the ruleset (pile-cap-method.md, Revision 2 item 13). */
+    private static Map<String, Double> claimFloors(Ruleset rules) {
+        Map<String, Double> floors = new java.util.HashMap<>();
+        CLAIM_FLOORS.forEach((unit, name) -> floors.put(unit, rules.number(name)));
+        return floors;
+    }
+
     private static Set<String> requiredParameters() {
         Set<String> all = new TreeSet<>(Set.of("claim_tolerance", "cover_deviation"));
+        all.addAll(CLAIM_FLOORS.values());
         ElementKinds.ALL.forEach(k -> all.addAll(k.parameters()));
         return Set.copyOf(all);
     }

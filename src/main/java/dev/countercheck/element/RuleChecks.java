@@ -12,6 +12,7 @@ import dev.countercheck.ruleset.CheckDef.RequirementDef;
 import dev.countercheck.ruleset.Rule;
 import dev.countercheck.ruleset.RuleExpressions;
 import dev.countercheck.ruleset.Ruleset;
+import dev.countercheck.ruleset.ValueSource;
 import dev.countercheck.ruleset.Variable;
 import dev.countercheck.submission.CheckCatalogue;
 
@@ -35,6 +36,8 @@ public final class RuleChecks {
     /** Formulas and messages split once at their names: the rulesets' texts are few, the elements many. */
     private static final Map<String, String[]> FORMULAS = new ConcurrentHashMap<>();
     private static final Map<String, String[]> MESSAGES = new ConcurrentHashMap<>();
+    private static final Pattern IDENTIFIER = Pattern.compile("[A-Za-z_][A-Za-z0-9_]*");
+    private static final Map<String, List<String>> IDENTIFIERS = new ConcurrentHashMap<>();
 
     private RuleChecks() {
     }
@@ -62,8 +65,8 @@ public final class RuleChecks {
             for (DerivedDef d : def.derived()) {
                 double v = ex.number(d.formula(), values);
                 values.put(d.name(), v);
-                steps.put(d.name(), b.trace(Step.of(d.symbol(), d.formula(), substitute(d.formula(), values), v, d.unit(),
-                        d.clause() + " (" + def.origin() + ")")));
+                steps.put(d.name(), b.trace(marked(Step.of(d.symbol(), d.formula(), substitute(d.formula(), values), v,
+                        d.unit(), d.clause() + " (" + def.origin() + ")"), d.formula(), rules)));
             }
             for (String name : def.values()) {
                 Step step = steps.get(name);
@@ -95,6 +98,26 @@ public final class RuleChecks {
                     + e.getMessage()).build();
         }
         return b.build();
+    }
+
+    /** The step, remarked when its formula uses a parameter or table the ruleset marks as recalled from memory. */
+    private static Step marked(Step step, String formula, Ruleset rules) {
+        List<String> recalled = IDENTIFIERS.computeIfAbsent(formula, RuleChecks::identifiers).stream()
+                .filter(rules::isRecalled).toList();
+        return recalled.isEmpty() ? step
+                : step.remarked(String.join(", ", recalled) + " " + ValueSource.MARK);
+    }
+
+    /** Every name a formula writes (variables, parameters, tables), once each, in order. */
+    private static List<String> identifiers(String formula) {
+        List<String> names = new ArrayList<>();
+        Matcher m = IDENTIFIER.matcher(formula);
+        while (m.find()) {
+            if (!names.contains(m.group()) && (m.start() == 0 || formula.charAt(m.start() - 1) != '"')) {
+                names.add(m.group());
+            }
+        }
+        return List.copyOf(names);
     }
 
     /** The formula with each known value put in for its name (names of no value stay as written). */

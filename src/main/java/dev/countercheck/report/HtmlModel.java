@@ -7,6 +7,7 @@ import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.CheckStatus;
 import dev.countercheck.review.ClaimComparison;
 import dev.countercheck.review.Drawing;
+import dev.countercheck.review.PadFootingDrawing;
 import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
@@ -248,6 +249,11 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 DrawingMarks marks = DrawingMarks.of(element, cap);
                 return new DrawingView(PlanDrawing.svg(anchor, cap, marks), SectionDrawing.svg(anchor, cap, marks),
                         DrawingLegend.rows(anchor, cap, !marks.all().isEmpty()), DrawingLegend.marks(marks));
+            }
+
+            @Override
+            public DrawingView padFooting(PadFootingDrawing pad) {
+                return PadDrawing.view(anchor, pad);
             }
         });
     }

@@ -56,7 +56,7 @@ public final class ElementAssembler {
                         + " was not compared: " + notComparedReason(r), spec.basis()));
                 continue;
             }
-            ClaimComparison c = comparer.compare(claim, computed.value(), q.safeSide());
+            ClaimComparison c = comparer.compare(claim, computed.value(), q);
             compared.computeIfAbsent(claim.checkId(), k -> new ArrayList<>()).add(c);
             comparer.findingFor(c, spec, q).ifPresent(list::add);
         }

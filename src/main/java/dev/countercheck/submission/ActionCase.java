@@ -10,7 +10,11 @@ public record ActionCase(String name, Kind kind, double nKn, double mxKnm, doubl
                          SourceLocation location) {
 
     public enum Kind {
-        ULS("uls"), SLS_CHARACTERISTIC("sls-characteristic"), SLS_QUASI_PERMANENT("sls-quasi-permanent");
+        ULS("uls"), SLS_CHARACTERISTIC("sls-characteristic"), SLS_QUASI_PERMANENT("sls-quasi-permanent"),
+        /** EN 1997-1 GEO, Design Approach 1 combination 2 (EN 1990 Table A1.2(C)): ground resistances. */
+        ULS_GEO("uls-geo"),
+        /** EN 1990 Table A1.2(A): static equilibrium (overturning). */
+        EQU("equ");
 
         private final String label;
 

@@ -1,12 +1,15 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.Node;
 import dev.countercheck.submission.ActionCase.Kind;
 import dev.countercheck.submission.PileCap.CastAgainst;
 import dev.countercheck.submission.PileCap.SelfWeight;
 import dev.countercheck.submission.Values.Bound;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -19,6 +22,7 @@ public final class PileCapBinder {
     private static final List<String> KEYS = List.of("id", "type", "description", "materials", "plan", "depth",
             "cast_against", "self_weight", "piles", "column", "actions", "reinforcement", "claims", "punching_beta");
     private static final List<String> PLAN_KEYS = List.of("x", "y");
+    private static final List<String> CASTING_KEYS = List.of("bottom", "sides");
 
     /** Reads pile caps for the reader. */
     public static final ElementBinder BINDER = new ElementBinder(KEYS, PileCapChecks.CATALOGUE) {
@@ -43,8 +47,7 @@ public final class PileCapBinder {
                 .map(materialsBinder::read).orElse(MaterialsBinder.Draft.NONE).over(fileMaterials), f);
         Optional<Plan> plan = f.fields("plan", PLAN_KEYS).flatMap(this::plan);
         Optional<Double> depth = f.quantity("depth", Dimension.LENGTH, Bound.POSITIVE);
-        Optional<CastAgainst> castAgainst = f.choice("cast_against", Values.options(CastAgainst.values()),
-                CastAgainst.BLINDING);
+        Optional<PileCap.Casting> castAgainst = casting(f);
         Optional<SelfWeight> selfWeight = f.choice("self_weight", Values.options(SelfWeight.values()), SelfWeight.ADD);
         Optional<PileGroup> piles = f.fields("piles", PileGroupBinder.KEYS)
                 .flatMap(p -> new PileGroupBinder(values).read(p, plan, depth));
@@ -71,6 +74,31 @@ public final class PileCapBinder {
                 plan.orElseThrow().xMm(), plan.orElseThrow().yMm(), depth.orElseThrow(), castAgainst.orElseThrow(),
                 selfWeight.orElseThrow(), piles.orElseThrow(), column.orElseThrow(), actions.orElseThrow(),
                 reinforcement, claims.orElseThrow().method(), withBeta(claims.orElseThrow().claims(), punchingBeta, f)));
+    }
+
+    /**
+     * {@code cast_against}: a plain value is the bottom face (the sides are then taken as formed), a
+     * mapping {@code {bottom, sides}} names each; absent, the bottom is on blinding.
+     */
+    private Optional<PileCap.Casting> casting(Fields f) {
+        Map<String, CastAgainst> all = Values.options(CastAgainst.values());
+        if (!f.has("cast_against")) {
+            return Optional.of(PileCap.Casting.bottomOnly(CastAgainst.BLINDING));
+        }
+        Optional<Node> node = f.get("cast_against");
+        if (node.isPresent() && !(node.get() instanceof Node.MapNode)) {
+            return values.choice(node.get(), f.path("cast_against"), "cast_against", all)
+                    .map(PileCap.Casting::bottomOnly);
+        }
+        return node.flatMap(n -> Fields.of(n, f.path("cast_against"), values, CASTING_KEYS)).flatMap(c -> {
+            Map<String, CastAgainst> sides = new LinkedHashMap<>(all);
+            sides.remove("blinding");
+            Optional<CastAgainst> bottom = c.choice("bottom", all, CastAgainst.BLINDING);
+            Optional<CastAgainst> side = c.has("sides")
+                    ? c.get("sides").flatMap(n -> values.choice(n, c.path("sides"), "cast_against.sides", sides))
+                    : Optional.of(CastAgainst.FORMWORK);
+            return bottom.flatMap(b -> side.map(sd -> new PileCap.Casting(b, sd, c.has("sides"))));
+        });
     }
 
     private Optional<Plan> plan(Fields f) {

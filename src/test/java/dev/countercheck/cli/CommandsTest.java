@@ -155,8 +155,8 @@ class CommandsTest {
                 "2026-12-01", "--pdf");
         // harbour-lane has critical findings (its comment says so): exit 1.
         assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.FINDINGS);
-        assertThat(r.err()).contains("[1/2]").contains("[2/2]");
-        for (String base : new String[] {"harbour-lane", "quayside-annex"}) {
+        assertThat(r.err()).contains("[1/3]").contains("[3/3]");
+        for (String base : new String[] {"harbour-lane", "orchard-yard-pads", "quayside-annex"}) {
             assertThat(out.resolve(base + ".json")).isNotEmptyFile();
             assertThat(out.resolve(base + ".html")).isNotEmptyFile();
             assertThat(out.resolve(base + ".pdf")).isNotEmptyFile();

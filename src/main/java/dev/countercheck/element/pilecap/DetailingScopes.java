@@ -1,5 +1,7 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Section;
+
 import dev.countercheck.ruleset.Variable;
 import dev.countercheck.submission.ActionCase;
 import dev.countercheck.submission.Column.StarterBars;
@@ -53,7 +55,10 @@ final class DetailingScopes {
         cap.put("dg", Variable.number("mm", "largest nominal aggregate size", 20));
         cap.put("structural_class", Variable.number("-", "structural class as a number (S4 → 4)", 4));
         cap.put("exposure", Variable.textList("exposure classes (Table 4.1)", List.of("XC2")));
-        cap.put("cast_against", Variable.text("blinding, soil or formwork", "blinding"));
+        cap.put("cast_against", Variable.text("what the bottom face is cast against: blinding, soil or formwork",
+                "blinding"));
+        cap.put("cast_against_sides", Variable.text("what the side faces are cast against: soil or formwork"
+                + " (formwork when the submission does not say)", "formwork"));
         cap.put("cover_bottom", Variable.number("mm", "stated nominal bottom cover", 75));
         cap.put("cover_top", Variable.number("mm", "stated nominal top cover", 50));
         cap.put("cover_side", Variable.number("mm", "stated nominal side cover", 75));
@@ -133,7 +138,7 @@ final class DetailingScopes {
 
     private static Map<String, Object> capValues(PileCapContext ctx, Reinforcement r, Map<Axis, Double> asRequired) {
         PileCap cap = ctx.cap;
-        CapSection s = ctx.section.orElseThrow();
+        Section s = ctx.section.orElseThrow();
         Map<String, Object> v = new LinkedHashMap<>();
         v.put("h", cap.depthMm());
         v.put("plan_x", cap.planXMm());
@@ -146,7 +151,8 @@ final class DetailingScopes {
         v.put("dg", cap.materials().aggregateMm());
         v.put("structural_class", Double.parseDouble(cap.materials().structuralClass().replaceAll("[^0-9]", "")));
         v.put("exposure", cap.materials().exposure());
-        v.put("cast_against", cap.castAgainst().name().toLowerCase(java.util.Locale.ROOT));
+        v.put("cast_against", cap.castAgainst().bottom().name().toLowerCase(java.util.Locale.ROOT));
+        v.put("cast_against_sides", cap.castAgainst().sides().name().toLowerCase(java.util.Locale.ROOT));
         v.put("cover_bottom", r.cover().bottomMm());
         v.put("cover_top", r.cover().topMm());
         v.put("cover_side", r.cover().sideMm());

@@ -1,5 +1,8 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Section;
+import dev.countercheck.element.StressBlock;
+
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Bending;
 import dev.countercheck.eurocode.Num;
@@ -51,7 +54,7 @@ final class HoggingCheck {
         List<BarSet> sets = top.stream().filter(s -> s.direction() == axis.bars()).toList();
         double phi1 = top.stream().filter(s -> s.layer() == 1).mapToDouble(BarSet::diameterMm).max()
                 .orElse(top.stream().mapToDouble(BarSet::diameterMm).max().orElse(0));
-        Step d = b.trace(CapSection.depth("d,top", sets, ctx.cap.depthMm(), r.cover().topMm(), phi1));
+        Step d = b.trace(Section.depth("d,top", sets, ctx.cap.depthMm(), r.cover().topMm(), phi1));
         b.trace(ctx.fyd);
         Step moment = b.value("moment", Step.of("M,hog", "Σ |P_i|·l_i + γG·γconc·b·h·L²/2 (tension side)",
                 worst.terms + " (" + worst.caseName + ")", worst.momentKnm, "kNm", "EN 1992-1-1 6.1"));
@@ -60,7 +63,7 @@ final class HoggingCheck {
         Step provided = b.value("as_provided", Step.of("As,top", "Σ n·π·φ²/4 (top bars)", sets.isEmpty() ? "no bars"
                 : String.join(" + ", sets.stream().map(s -> s.count() + "·π·" + Num.f(s.diameterMm()) + "²/4")
                 .toList()), as, "mm2", "bar areas"));
-        Optional<Step> lever = StressBlock.leverArm(ctx, b, moment.value(), width, d.value(),
+        Optional<Step> lever = StressBlock.leverArm(ctx.rules, ctx.fck.value(), b, moment.value(), width, d.value(),
                 " for the hogging moment");
         if (lever.isEmpty()) {
             return b.build();

@@ -1,5 +1,6 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.OutOfRangeException;
 import dev.countercheck.element.RuleChecks;
 import dev.countercheck.review.Value;
@@ -56,7 +57,14 @@ final class PileCapReviewer {
             "eps_c2", "stress_block_lambda", "xi_limit", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
             "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
             "shear_section_inside_pile", "band_spacing_limit", "band_half_width",
-            "shear_strip_width");
+            "shear_strip_width", "cover_k2_soil", "fck_max_shear");
+
+    /** The option that chooses the basis of the column node's limit. */
+    static final String NODE_COLUMN_BASIS = "node_column_basis";
+
+    /** The methods a ruleset chooses for pile caps, each with its choices (the default, recommended, first). */
+    static final Map<String, List<String>> OPTIONS = Map.of(NODE_COLUMN_BASIS,
+            List.of("effective-area", NodeChecks.PARTIALLY_LOADED));
 
     private final ElementAssembler assembler;
 
@@ -83,8 +91,19 @@ final class PileCapReviewer {
         for (String id : CATALOGUE.checks().keySet()) {
             outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired, variables));
         }
-        return assembler.assemble(cap.id(), CATALOGUE, cap.description(), outcomes, cap.claims(), List.of(),
+        return assembler.assemble(cap.id(), CATALOGUE, cap.description(), outcomes, cap.claims(), cautions(ctx),
                 Optional.of(DrawingNotes.of(ctx, outcomes)));
+    }
+
+    /** What the review took as given about the element as a whole. */
+    private static List<String> cautions(PileCapContext ctx) {
+        if (ctx.cap.castAgainst().sidesStated()) {
+            return List.of();
+        }
+        return List.of("The side faces are taken as cast against formwork: the submission does not say what they"
+                + " are cast against (cast_against names the bottom face only). A side cast against soil needs at"
+                + " least k2 = " + Num.f(ctx.rules.number("cover_k2_soil")) + " mm cover (EN 1992-1-1 4.4.1.3(4));"
+                + " say so with cast_against: {bottom: ..., sides: soil}.");
     }
 
     /** The checks computed in Java, in catalogue order; the others come from the ruleset. */

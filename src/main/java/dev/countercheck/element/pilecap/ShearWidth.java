@@ -1,5 +1,7 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Section;
+
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.submission.Point;
@@ -20,7 +22,7 @@ import java.util.List;
 record ShearWidth(Step width, Step as) {
 
     /** The width and steel of the section across {@code axis} loaded by {@code piles}; the full cap when not widely spaced. */
-    static ShearWidth of(PileCapContext ctx, Axis axis, List<Point> piles, CapSection section) {
+    static ShearWidth of(PileCapContext ctx, Axis axis, List<Point> piles, Section section) {
         double capWidth = axis.capWidth(ctx.cap);
         Step all = section.as(axis.bars());
         if (!TieBands.widelySpaced(ctx)) {

@@ -1,5 +1,8 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Section;
+import dev.countercheck.element.StressBlock;
+
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Bending;
 import dev.countercheck.eurocode.Num;
@@ -39,7 +42,7 @@ final class TieCheck {
         if (ctx.section.isEmpty()) {
             return b.notChecked("no bottom reinforcement given: d and As,prov are unknown").build();
         }
-        CapSection section = ctx.section.get();
+        Section section = ctx.section.get();
         Step d = b.trace(section.d(axis.bars()));
         b.trace(ctx.fyd);
         boolean bending = ctx.cap.tieMethod() == TieMethod.BENDING;
@@ -54,7 +57,7 @@ final class TieCheck {
             Step moment = b.value("moment", Step.of("M", "Σ P_i·(distance beyond the column face)",
                     side.terms + " (" + side.caseName + ")", side.sumKnMm / 1000, "kNm", "EN 1992-1-1 6.1"));
             double width = axis.capWidth(ctx.cap);
-            Optional<Step> lever = StressBlock.leverArm(ctx, b, moment.value(), width, d.value(), "");
+            Optional<Step> lever = StressBlock.leverArm(ctx.rules, ctx.fck.value(), b, moment.value(), width, d.value(), "");
             if (lever.isEmpty()) {
                 return b.build();
             }

@@ -1,16 +1,17 @@
-package dev.countercheck.element.pilecap;
+package dev.countercheck.statics;
 
 import dev.countercheck.eurocode.Punching;
 import dev.countercheck.eurocode.Step;
-import dev.countercheck.submission.Column;
-import dev.countercheck.submission.Column.ColumnShape;
-import dev.countercheck.submission.Point;
 
 /**
  * A control perimeter at distance a from the column face, with rounded corners (EN 1992-1-1
- * 6.4.2(1)), the part of it that lies on the cap and the share of a pile head inside it.
+ * 6.4.2(1)): its length, the part of it that lies on a plan centred on the origin, the share of a pile
+ * head inside it, and the region it encloses (for the ground pressure inside it under a footing).
  */
-final class ControlPerimeter {
+public final class ControlPerimeter {
+
+    /** Chords per quarter arc of the enclosed region's outline (1°: the region's area is short by 0.005 %). */
+    private static final int CHORDS_PER_QUARTER = 90;
 
     private static final int STRIPS = 400;
     /** The margin, as a share of a + D, by which a head must clear the perimeter to skip the strips. */
@@ -20,10 +21,10 @@ final class ControlPerimeter {
     }
 
     /** Distance from {@code p} to the column outline, 0 inside the column, mm. */
-    static double distanceFromColumn(Column c, Point p) {
-        double dx = p.xMm() - c.position().xMm();
-        double dy = p.yMm() - c.position().yMm();
-        if (c.shape() == ColumnShape.CIRCULAR) {
+    public static double distanceFromColumn(ColumnOutline c, PlanPoint p) {
+        double dx = p.xMm() - c.centre().xMm();
+        double dy = p.yMm() - c.centre().yMm();
+        if (c.circular()) {
             return Math.max(0, Math.hypot(dx, dy) - c.cxMm() / 2);
         }
         double ox = Math.max(0, Math.abs(dx) - c.cxMm() / 2);
@@ -32,10 +33,32 @@ final class ControlPerimeter {
     }
 
     /** The full perimeter at distance a (EN 1992-1-1 6.4.2(1)), as a trace step. */
-    static Step full(Column c, double aMm) {
-        return c.shape() == ColumnShape.CIRCULAR
+    public static Step full(ColumnOutline c, double aMm) {
+        return c.circular()
                 ? Punching.u1Circular(c.cxMm(), aMm)
                 : Punching.u1Rectangular(c.cxMm(), c.cyMm(), aMm);
+    }
+
+    /**
+     * β for the column's moments at the perimeter at distance a (EN 1992-1-1 6.4.3(3), Exp. (6.39) with
+     * W of Exp. (6.41) and k of Table 6.1, summed over both axes; 6.4.4(2), Exp. (6.51) within 2d); a
+     * circular column by Exp. (6.42) with the resultant eccentricity. At the face a = 2d (u1, W1).
+     *
+     * @param vEdKn VEd (VEd,red at a perimeter within 2d), kN, &gt; 0
+     */
+    public static Step beta(ColumnOutline c, double aMm, double vEdKn, double mxKnm, double myKnm) {
+        if (c.circular()) {
+            return Punching.betaCircular(Math.hypot(mxKnm, myKnm) * 1000 / vEdKn, c.cxMm(), aMm);
+        }
+        Step u = Punching.u1Rectangular(c.cxMm(), c.cyMm(), aMm);
+        // My turns about y: the eccentricity lies along x, c1 = cx; Mx: along y, c1 = cy.
+        Step alongX = Punching.betaEccentric(Punching.kEccentricity(c.cxMm(), c.cyMm()).value(), myKnm, vEdKn,
+                u.value(), Punching.w1Rectangular(c.cxMm(), c.cyMm(), aMm).value());
+        Step alongY = Punching.betaEccentric(Punching.kEccentricity(c.cyMm(), c.cxMm()).value(), mxKnm, vEdKn,
+                u.value(), Punching.w1Rectangular(c.cyMm(), c.cxMm(), aMm).value());
+        return Step.of("β", "1 + kx·(|My|/VEd)·(u/Wx) + ky·(|Mx|/VEd)·(u/Wy)", alongX.substituted() + " + "
+                + alongY.substituted().substring(4), alongX.value() + alongY.value() - 1, "-",
+                "EN 1992-1-1 6.4.3(3), Exp. (6.39), (6.41), Table 6.1; 6.4.4(2), Exp. (6.51)");
     }
 
     /**
@@ -46,13 +69,13 @@ final class ControlPerimeter {
      * x = xc + sx·r·cos φ and y = yc + sy·r·sin φ, φ from 0 to π/2, so the part within the plan is
      * acos((X − sx·xc)/r) ≤ φ ≤ asin((Y − sy·yc)/r), with X, Y the half plan. The column lies on the cap.
      */
-    static double lengthInPlan(Column c, double aMm, double planXMm, double planYMm) {
-        boolean circular = c.shape() == ColumnShape.CIRCULAR;
+    public static double lengthInPlan(ColumnOutline c, double aMm, double planXMm, double planYMm) {
+        boolean circular = c.circular();
         double hx = circular ? 0 : c.cxMm() / 2;
         double hy = circular ? 0 : c.cyMm() / 2;
         double r = circular ? c.cxMm() / 2 + aMm : aMm;
-        double x0 = c.position().xMm();
-        double y0 = c.position().yMm();
+        double x0 = c.centre().xMm();
+        double y0 = c.centre().yMm();
         double halfX = planXMm / 2;
         double halfY = planYMm / 2;
         double length = 0;
@@ -91,7 +114,7 @@ final class ControlPerimeter {
      * @param centre     pile centre
      * @param diameterMm pile head diameter, mm
      */
-    static double headShareInside(Column c, double aMm, Point centre, double diameterMm) {
+    public static double headShareInside(ColumnOutline c, double aMm, PlanPoint centre, double diameterMm) {
         double distance = distanceFromColumn(c, centre);
         double clear = CLEARANCE * (aMm + diameterMm);
         if (distance > aMm + diameterMm / 2 + clear) {
@@ -100,14 +123,12 @@ final class ControlPerimeter {
         if (distance < aMm - diameterMm / 2 - clear) {
             return 1;
         }
-        Column turned = new Column(c.shape(), c.cyMm(), c.cxMm(), new Point(c.position().yMm(), c.position().xMm()),
-                c.starterBars());
         return (stripShare(c, aMm, centre, diameterMm)
-                + stripShare(turned, aMm, new Point(centre.yMm(), centre.xMm()), diameterMm)) / 2;
+                + stripShare(c.turned(), aMm, new PlanPoint(centre.yMm(), centre.xMm()), diameterMm)) / 2;
     }
 
     /** The share of the head inside the perimeter by strips across x. */
-    private static double stripShare(Column c, double aMm, Point centre, double diameterMm) {
+    private static double stripShare(ColumnOutline c, double aMm, PlanPoint centre, double diameterMm) {
         double r = diameterMm / 2;
         double width = diameterMm / STRIPS;
         double whole = 0;
@@ -118,8 +139,8 @@ final class ControlPerimeter {
             whole += 2 * chord;
             double half = halfHeightInside(c, aMm, x);
             if (half >= 0) {
-                double lo = Math.max(centre.yMm() - chord, c.position().yMm() - half);
-                double hi = Math.min(centre.yMm() + chord, c.position().yMm() + half);
+                double lo = Math.max(centre.yMm() - chord, c.centre().yMm() - half);
+                double hi = Math.min(centre.yMm() + chord, c.centre().yMm() + half);
                 inside += Math.max(0, hi - lo);
             }
         }
@@ -127,14 +148,40 @@ final class ControlPerimeter {
     }
 
     /** Half the height of the region within distance a of the column at abscissa x, mm; −1 outside it. */
-    private static double halfHeightInside(Column c, double aMm, double x) {
-        double dx = Math.abs(x - c.position().xMm());
-        if (c.shape() == ColumnShape.CIRCULAR) {
+    private static double halfHeightInside(ColumnOutline c, double aMm, double x) {
+        double dx = Math.abs(x - c.centre().xMm());
+        if (c.circular()) {
             double radius = c.cxMm() / 2 + aMm;
             return dx > radius ? -1 : Math.sqrt(radius * radius - dx * dx);
         }
         double beyond = Math.max(0, dx - c.cxMm() / 2);
         return beyond > aMm ? -1 : c.cyMm() / 2 + Math.sqrt(aMm * aMm - beyond * beyond);
+    }
+
+    /**
+     * The region within distance a of the column (the area the control perimeter encloses), as a convex
+     * polygon whose arcs are drawn by chords of 1°, counter-clockwise.
+     */
+    static ConvexPolygon region(ColumnOutline c, double aMm) {
+        double x0 = c.centre().xMm();
+        double y0 = c.centre().yMm();
+        if (c.circular()) {
+            return ConvexPolygon.regular(x0, y0, c.cxMm() / 2 + aMm, 4 * CHORDS_PER_QUARTER);
+        }
+        double hx = c.cxMm() / 2;
+        double hy = c.cyMm() / 2;
+        int n = CHORDS_PER_QUARTER + 1;
+        double[] xs = new double[4 * n];
+        double[] ys = new double[4 * n];
+        double[][] corners = {{hx, hy}, {-hx, hy}, {-hx, -hy}, {hx, -hy}};
+        for (int q = 0; q < 4; q++) {
+            for (int i = 0; i < n; i++) {
+                double phi = Math.PI / 2 * (q + (double) i / CHORDS_PER_QUARTER);
+                xs[q * n + i] = x0 + corners[q][0] + aMm * Math.cos(phi);
+                ys[q * n + i] = y0 + corners[q][1] + aMm * Math.sin(phi);
+            }
+        }
+        return ConvexPolygon.of(xs, ys);
     }
 
     private static double sq(double v) {
