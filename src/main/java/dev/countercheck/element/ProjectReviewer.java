@@ -23,10 +23,20 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.function.Function;
 import java.util.stream.Collectors;
+import java.util.stream.Stream;
 
-/** Reviews a whole submission: each element by the kind of its type, then the summary. */
+/**
+ * Reviews a whole submission: each element by the kind of its type, then the summary. The elements
+ * are independent, so several are reviewed at once on the common fork-join pool (one per core); the
+ * results keep the submission's order and are the same as one at a time. The system property
+ * {@value #PARALLEL_PROPERTY}{@code =false} reviews them one at a time.
+ */
 public final class ProjectReviewer {
+
+    /** Set to {@code false} to review the elements of a submission one at a time. */
+    public static final String PARALLEL_PROPERTY = "countercheck.parallel";
 
     /** Stated on every report and in the README (rule of the product). */
     public static final String GENERAL_CAUTION = "This review assists a competent engineer and does not replace one."
@@ -51,22 +61,30 @@ public final class ProjectReviewer {
             Arrays.stream(FindingKind.values()).map(FindingKind::key).collect(Collectors.toUnmodifiableSet()));
 
     private final Review.ToolInfo tool;
+    private final boolean parallel;
 
+    /** Reviews elements in parallel unless the system property {@value #PARALLEL_PROPERTY} is {@code false}. */
     public ProjectReviewer(Review.ToolInfo tool) {
+        this(tool, !"false".equals(System.getProperty(PARALLEL_PROPERTY)));
+    }
+
+    /** @param parallel whether several elements are reviewed at once */
+    public ProjectReviewer(Review.ToolInfo tool, boolean parallel) {
         this.tool = tool;
+        this.parallel = parallel;
     }
 
     public Review review(Submission submission, Ruleset rules, String reviewDate) {
         SeverityPolicy severities = new SeverityPolicy(rules::severity);
         ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance"),
                 claimFloors(rules)), severities);
-        List<ElementReview> elements = new ArrayList<>();
-        for (ElementInput e : submission.elements()) {
+        Function<ElementInput, ElementReview> one = e -> {
             ElementKind<?> kind = ElementKinds.of(e.type()).orElseThrow(
                     () -> new IllegalStateException("no element kind of type " + e.type()));
-            elements.add(e instanceof IncompleteElement inc ? incomplete(inc, severities)
-                    : review(kind, e, rules, assembler));
-        }
+            return e instanceof IncompleteElement inc ? incomplete(inc, severities) : review(kind, e, rules, assembler);
+        };
+        Stream<ElementInput> inputs = submission.elements().stream();
+        List<ElementReview> elements = (parallel ? inputs.parallel() : inputs).map(one).toList();
         List<String> assumptions = new ArrayList<>();
         assumptions.add(GENERAL_CAUTION);
         assumptions.add("Nationally determined parameters come from ruleset " + rules.id() + " (" + rules.title()
@@ -87,7 +105,7 @@ public final class ProjectReviewer {
                 new Review.SubmissionInfo(submission.file(), submission.sha256(), p.title(), p.reference(),
                         p.revision(), p.preparedBy(), p.date()),
                 new Review.RulesetInfo(rules.id(), rules.title(), rules.sha256(), rules.files()),
-                reviewDate, ElementAssembler.overall(elements), List.copyOf(elements), summary(elements),
+                reviewDate, ElementAssembler.overall(elements), elements, summary(elements),
                 List.copyOf(assumptions));
     }
 

@@ -55,8 +55,8 @@ public final class RuleChecks {
         CheckBuilder b = new CheckBuilder(catalogue.check(def.idFor(subject)));
         Map<String, Object> values = new HashMap<>(variables);
         values.put("dir", subject);
-        rules.parameters().forEach((name, p) -> values.put(name, p.value()));
         RuleExpressions ex = rules.expressions();
+        values.putAll(ex.parameterValues());
         try {
             if (def.appliesWhen().isPresent() && !ex.bool(def.appliesWhen().get(), values)) {
                 return b.notApplicable(fill(def.notApplicable(), values)).build();

@@ -192,7 +192,7 @@ public final class RulesetLoader {
         if (!errors.isEmpty()) {
             throw new RulesetException(errors);
         }
-        RuleExpressions expressions = new RuleExpressions(tables);
+        RuleExpressions expressions = new RuleExpressions(tables, parameters);
         RuleValidator validator = new RuleValidator(vocabulary, parameters, expressions);
         Map<String, CheckDef> validated = validator.validate(checks);
         if (!validator.errors().isEmpty()) {

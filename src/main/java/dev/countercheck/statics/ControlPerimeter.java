@@ -14,6 +14,8 @@ public final class ControlPerimeter {
     private static final int CHORDS_PER_QUARTER = 90;
 
     private static final int STRIPS = 400;
+    /** The margin, as a share of a + D, by which a head must clear the perimeter to skip the strips. */
+    private static final double CLEARANCE = 1e-9;
 
     private ControlPerimeter() {
     }
@@ -105,11 +107,22 @@ public final class ControlPerimeter {
      * a from the column face (EN 1992-1-1 6.4.4(2): the pile relieves the load by that share of its
      * reaction): the mean of {@value #STRIPS} strips across x and as many across y, so that the share
      * turns with the cap; the region inside the perimeter is convex, so each strip meets it once.
+     * A head clear of the perimeter (its centre farther than a + D/2 from the column) has none of its
+     * area inside, and a head clear within it (nearer than a − D/2) all of it: the strips are summed
+     * only for a head the perimeter crosses.
      *
      * @param centre     pile centre
      * @param diameterMm pile head diameter, mm
      */
     public static double headShareInside(ColumnOutline c, double aMm, PlanPoint centre, double diameterMm) {
+        double distance = distanceFromColumn(c, centre);
+        double clear = CLEARANCE * (aMm + diameterMm);
+        if (distance > aMm + diameterMm / 2 + clear) {
+            return 0;
+        }
+        if (distance < aMm - diameterMm / 2 - clear) {
+            return 1;
+        }
         return (stripShare(c, aMm, centre, diameterMm)
                 + stripShare(c.turned(), aMm, new PlanPoint(centre.yMm(), centre.xMm()), diameterMm)) / 2;
     }
