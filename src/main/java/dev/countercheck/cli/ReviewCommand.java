@@ -148,7 +148,7 @@ public final class ReviewCommand implements Callable<Integer> {
             Optional<Path> pdfFile = pdf ? Optional.of(targets.report(file, ".pdf")) : Optional.empty();
             List<Path> written = new ArrayList<>(List.of(json, html));
             try (OutputSet reports = OutputSet.in(outDir, sink)) {
-                String result = new JsonResultWriter().write(review);
+                String result = new JsonResultWriter().write(review, context);
                 reports.add(json.getFileName().toString(), result);
                 reports.add(html.getFileName().toString(), new HtmlReportWriter().write(review, context));
                 if (pdfFile.isPresent()) {
