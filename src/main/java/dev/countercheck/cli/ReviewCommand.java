@@ -148,10 +148,12 @@ public final class ReviewCommand implements Callable<Integer> {
             Optional<Path> pdfFile = pdf ? Optional.of(targets.report(file, ".pdf")) : Optional.empty();
             List<Path> written = new ArrayList<>(List.of(json, html));
             try (OutputSet reports = OutputSet.in(outDir, sink)) {
-                reports.add(json.getFileName().toString(), new JsonResultWriter().write(review));
+                String result = new JsonResultWriter().write(review, context);
+                reports.add(json.getFileName().toString(), result);
                 reports.add(html.getFileName().toString(), new HtmlReportWriter().write(review, context));
                 if (pdfFile.isPresent()) {
-                    reports.add(pdfFile.get().getFileName().toString(), new PdfReportWriter().write(review, context));
+                    reports.add(pdfFile.get().getFileName().toString(), new PdfReportWriter()
+                            .write(review, context, json.getFileName().toString(), result));
                     written.add(pdfFile.get());
                 }
                 for (Map.Entry<String, byte[]> extra : round.files(review, threshold).entrySet()) {

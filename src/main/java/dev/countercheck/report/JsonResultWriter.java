@@ -19,6 +19,7 @@ import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 import dev.countercheck.review.Value;
 import dev.countercheck.review.Verdict;
+import dev.countercheck.round.ReviewRound;
 
 import java.util.List;
 import java.util.Map;
@@ -47,6 +48,14 @@ public final class JsonResultWriter {
 
     /** The JSON text of {@code review}, ending in a newline. */
     public String write(Review review) {
+        return write(review, ReviewRound.none(""));
+    }
+
+    /**
+     * The JSON text of {@code review} in its round: with the designer's responses and the comparison
+     * with the previous revision where the round has them ({@link RoundJson}).
+     */
+    public String write(Review review, ReviewRound round) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("format", FORMAT);
         root.set("tool", tool(review.tool()));
@@ -57,6 +66,7 @@ public final class JsonResultWriter {
         ArrayNode elements = root.putArray("elements");
         review.elements().forEach(e -> elements.add(element(e)));
         root.set("summary", summary(review.summary()));
+        RoundJson.add(root, review, round);
         strings(root.putArray("assumptions"), review.assumptions());
         try {
             return WRITER.writeValueAsString(root) + "\n";
