@@ -20,7 +20,9 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.BiFunction;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -40,6 +42,32 @@ public final class RuleChecks {
     private static final Map<String, List<String>> IDENTIFIERS = new ConcurrentHashMap<>();
 
     private RuleChecks() {
+    }
+
+    /**
+     * The ruleset's rule for check {@code id} of an element, run on the subject the id names; not-checked
+     * when the ruleset has no rule for it or the scope's variables cannot be formed.
+     *
+     * @param scopes    the variables of each scope of the type, with units and descriptions
+     * @param form      forms the variables of a scope for a subject
+     * @param formed    the variables formed so far for this element, by scope and subject (formed once each)
+     */
+    public static CheckOutcome byRule(CheckCatalogue catalogue, String id, Ruleset rules,
+                                      Map<String, Map<String, Variable>> scopes,
+                                      BiFunction<String, String, DetailingVariables.Values> form,
+                                      Map<String, DetailingVariables.Values> formed) {
+        Optional<Rule> rule = rules.rule(catalogue.elementType(), id);
+        if (rule.isEmpty()) {
+            return new CheckBuilder(catalogue.check(id))
+                    .notChecked("ruleset " + rules.id() + " has no rule for this check").build();
+        }
+        String scope = rule.get().def().scope();
+        String subject = rule.get().subject();
+        DetailingVariables.Values v = formed.computeIfAbsent(scope + "/" + subject, k -> form.apply(scope, subject));
+        if (v.missing().isPresent()) {
+            return new CheckBuilder(catalogue.check(id)).notChecked(v.missing().get()).build();
+        }
+        return run(catalogue, rule.get(), rules, scopes.get(scope), v.values());
     }
 
     /**

@@ -22,7 +22,7 @@ import java.util.Optional;
 public record PadFooting(String id, String description, SourceLocation location, Materials materials,
                          double planXMm, double planYMm, double depthMm, CastAgainst castAgainst,
                          Optional<Soil> soil, Column column, List<ActionCase> actions,
-                         Optional<Reinforcement> reinforcement, List<Claim> claims) implements ElementInput {
+                         Optional<Reinforcement> reinforcement, List<Claim> claims) implements ElementInput, RectangularPlan {
 
     public static final String TYPE = "pad-footing";
 

@@ -18,7 +18,6 @@ public final class PadFootingBinder {
 
     private static final List<String> KEYS = List.of("id", "type", "description", "materials", "plan", "depth",
             "cast_against", "soil", "column", "actions", "reinforcement", "claims");
-    private static final List<String> PLAN_KEYS = List.of("x", "y");
     private static final List<String> SOIL_KEYS = List.of("allowable_bearing", "overburden", "unit_weight", "phi_k",
             "c_k", "cu_k", "gamma_k", "phi_cv_k", "groundwater_depth");
     /** Annex D's factors grow without bound as φ' nears 90°; no real soil reaches this angle. */
@@ -46,7 +45,7 @@ public final class PadFootingBinder {
     Optional<ElementInput> read(Fields f, String id, String description, MaterialsBinder.Draft fileMaterials) {
         Optional<Materials> materials = materialsBinder.complete(f.fields("materials", MaterialsBinder.KEYS)
                 .map(materialsBinder::read).orElse(MaterialsBinder.Draft.NONE).over(fileMaterials), f);
-        Optional<Plan> plan = f.fields("plan", PLAN_KEYS).flatMap(this::plan);
+        Optional<Plan> plan = f.fields("plan", Plan.KEYS).flatMap(Plan::read);
         Optional<Double> depth = f.quantity("depth", Dimension.LENGTH, Bound.POSITIVE);
         Optional<CastAgainst> castAgainst = f.choice("cast_against", Values.options(CastAgainst.values()),
                 CastAgainst.BLINDING);
@@ -75,12 +74,6 @@ public final class PadFootingBinder {
         return Optional.of(new PadFooting(id, description, f.location(), materials.orElseThrow(),
                 plan.orElseThrow().xMm(), plan.orElseThrow().yMm(), depth.orElseThrow(), castAgainst.orElseThrow(),
                 soil.get(), column.orElseThrow(), actions.orElseThrow(), reinforcement, claims.orElseThrow().claims()));
-    }
-
-    private Optional<Plan> plan(Fields f) {
-        Optional<Double> x = f.requiredQuantity("x", Dimension.LENGTH, Bound.POSITIVE);
-        Optional<Double> y = f.requiredQuantity("y", Dimension.LENGTH, Bound.POSITIVE);
-        return x.flatMap(a -> y.map(b -> new Plan(a, b)));
     }
 
     private Optional<Soil> soil(Fields f) {

@@ -39,9 +39,7 @@ public final class PadFootingChecks {
                             demand("beta", "-"), demand("ved", "kN"), capacity("vrd", "kN"))),
             anchorage("anchorage-x", "x"),
             anchorage("anchorage-y", "y"),
-            new CheckSpec("anchorage-starters", "Anchorage of the column starter bars in compression",
-                    "EN 1992-1-1 8.4", Kind.DETAILING,
-                    List.of(demand("lb_rqd", "mm"), demand("lbd", "mm"), capacity("available", "mm"))),
+            SharedDetailingChecks.ANCHORAGE_STARTERS,
             new CheckSpec("bearing-resistance", "Bearing resistance of the ground", "EN 1997-1 6.5.2, Annex D",
                     Kind.STRENGTH, List.of(demand("vd", "kN"), capacity("rd", "kN"), capacity("b_eff", "mm"),
                             capacity("l_eff", "mm"))),
@@ -53,20 +51,11 @@ public final class PadFootingChecks {
                     Kind.DETAILING, List.of(demand("as_min", "mm2"), capacity("as_provided", "mm2"))),
             new CheckSpec("min-steel-y", "Minimum steel, bottom bars parallel to y", "EN 1992-1-1 9.2.1.1, 9.8.2.1",
                     Kind.DETAILING, List.of(demand("as_min", "mm2"), capacity("as_provided", "mm2"))),
-            new CheckSpec("max-steel", "Maximum steel", "EN 1992-1-1 9.2.1.1(3)",
-                    Kind.DETAILING, List.of(capacity("as_max", "mm2"), demand("as_provided", "mm2"))),
-            new CheckSpec("bar-spacing-x", "Bar spacing, bars parallel to x", "EN 1992-1-1 8.2",
-                    Kind.DETAILING, List.of(demand("spacing", "mm"), capacity("clear", "mm"), demand("min_clear", "mm"),
-                            capacity("max_spacing", "mm"))),
-            new CheckSpec("bar-spacing-y", "Bar spacing, bars parallel to y", "EN 1992-1-1 8.2",
-                    Kind.DETAILING, List.of(demand("spacing", "mm"), capacity("clear", "mm"), demand("min_clear", "mm"),
-                            capacity("max_spacing", "mm"))),
-            new CheckSpec("cover", "Concrete cover", "EN 1992-1-1 4.4.1",
-                    Kind.DETAILING, List.of(demand("required", "mm"), capacity("provided", "mm"),
-                            demand("required_side", "mm"), capacity("provided_side", "mm"))),
-            new CheckSpec("crack-control", "Crack control without direct calculation", "EN 1992-1-1 7.3.3",
-                    Kind.DETAILING, List.of(demand("sigma_s", "MPa"), capacity("phi_max", "mm"),
-                            capacity("s_max", "mm")))));
+            SharedDetailingChecks.MAX_STEEL,
+            SharedDetailingChecks.BAR_SPACING_X,
+            SharedDetailingChecks.BAR_SPACING_Y,
+            SharedDetailingChecks.COVER,
+            SharedDetailingChecks.CRACK_CONTROL));
 
     private PadFootingChecks() {
     }

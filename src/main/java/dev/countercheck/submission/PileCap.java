@@ -21,7 +21,8 @@ public record PileCap(String id, String description, SourceLocation location, Ma
                       double planXMm, double planYMm, double depthMm, Casting castAgainst,
                       SelfWeight selfWeight, PileGroup piles, Column column, List<ActionCase> actions,
                       Optional<Reinforcement> reinforcement,
-                      TieMethod tieMethod, List<Claim> claims, List<CharacteristicLoad> loads) implements ElementInput {
+                      TieMethod tieMethod, List<Claim> claims, List<CharacteristicLoad> loads) implements ElementInput,
+        RectangularPlan {
 
     public static final String TYPE = "pile-cap";
 

@@ -23,7 +23,6 @@ public final class PileCapBinder {
     private static final List<String> KEYS = List.of("id", "type", "description", "materials", "plan", "depth",
             "cast_against", "self_weight", "piles", "column", "actions", "loads", "reinforcement", "claims",
             "punching_beta");
-    private static final List<String> PLAN_KEYS = List.of("x", "y");
     private static final List<String> CASTING_KEYS = List.of("bottom", "sides");
 
     /** Reads pile caps for the reader. */
@@ -47,7 +46,7 @@ public final class PileCapBinder {
     Optional<ElementInput> read(Fields f, String id, String description, MaterialsBinder.Draft fileMaterials) {
         Optional<Materials> materials = materialsBinder.complete(f.fields("materials", MaterialsBinder.KEYS)
                 .map(materialsBinder::read).orElse(MaterialsBinder.Draft.NONE).over(fileMaterials), f);
-        Optional<Plan> plan = f.fields("plan", PLAN_KEYS).flatMap(this::plan);
+        Optional<Plan> plan = f.fields("plan", Plan.KEYS).flatMap(Plan::read);
         Optional<Double> depth = f.quantity("depth", Dimension.LENGTH, Bound.POSITIVE);
         Optional<PileCap.Casting> castAgainst = casting(f);
         Optional<SelfWeight> selfWeight = f.choice("self_weight", Values.options(SelfWeight.values()), SelfWeight.ADD);
@@ -105,12 +104,6 @@ public final class PileCapBinder {
                     : Optional.of(CastAgainst.FORMWORK);
             return bottom.flatMap(b -> side.map(sd -> new PileCap.Casting(b, sd, c.has("sides"))));
         });
-    }
-
-    private Optional<Plan> plan(Fields f) {
-        Optional<Double> x = f.requiredQuantity("x", Dimension.LENGTH, Bound.POSITIVE);
-        Optional<Double> y = f.requiredQuantity("y", Dimension.LENGTH, Bound.POSITIVE);
-        return x.flatMap(a -> y.map(b -> new Plan(a, b)));
     }
 
     /** A stated {@code punching_beta} is the claim {@code punching-face.beta} (unless claimed there too). */

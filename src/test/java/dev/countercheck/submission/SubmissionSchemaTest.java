@@ -68,9 +68,9 @@ class SubmissionSchemaTest {
         m.put("/properties/basis", new KeyList(SubmissionBinder.class, "BASIS_KEYS"));
         m.put("/$defs/materials", new KeyList(MaterialsBinder.class, "KEYS"));
         m.put("/$defs/pile-cap", new KeyList(PileCapBinder.class, "KEYS"));
-        m.put("/$defs/pile-cap/properties/plan", new KeyList(PileCapBinder.class, "PLAN_KEYS"));
+        m.put("/$defs/pile-cap/properties/plan", new KeyList(Plan.class, "KEYS"));
         m.put("/$defs/pad-footing", new KeyList(PadFootingBinder.class, "KEYS"));
-        m.put("/$defs/pad-footing/properties/plan", new KeyList(PadFootingBinder.class, "PLAN_KEYS"));
+        m.put("/$defs/pad-footing/properties/plan", new KeyList(Plan.class, "KEYS"));
         m.put("/$defs/pad-footing/properties/soil", new KeyList(PadFootingBinder.class, "SOIL_KEYS"));
         m.put("/$defs/casting", new KeyList(PileCapBinder.class, "CASTING_KEYS"));
         m.put("/$defs/piles", new KeyList(PileGroupBinder.class, "KEYS"));
@@ -88,7 +88,7 @@ class SubmissionSchemaTest {
     }
 
     private static final List<Class<?>> BINDERS = List.of(SubmissionBinder.class, MaterialsBinder.class,
-            PileCapBinder.class, PadFootingBinder.class, PileGroupBinder.class, ColumnBinder.class, ActionsBinder.class, LoadsBinder.class,
+            PileCapBinder.class, PadFootingBinder.class, Plan.class, PileGroupBinder.class, ColumnBinder.class, ActionsBinder.class, LoadsBinder.class,
             ReinforcementBinder.class, ClaimsBinder.class);
 
     @Test
@@ -112,7 +112,8 @@ class SubmissionSchemaTest {
                 }
             }
         }
-        assertThat(MAPPINGS.values()).as("every key list of a binder is mapped to the schema")
+        // A shared key list (a plan) may stand at several places in the schema.
+        assertThat(Set.copyOf(MAPPINGS.values())).as("every key list of a binder is mapped to the schema")
                 .containsExactlyInAnyOrderElementsOf(declared);
 
         List<String> schemaMappings = new ArrayList<>();

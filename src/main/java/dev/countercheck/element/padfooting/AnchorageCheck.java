@@ -1,5 +1,6 @@
 package dev.countercheck.element.padfooting;
 
+import dev.countercheck.element.Axis;
 import dev.countercheck.eurocode.Anchorage;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;

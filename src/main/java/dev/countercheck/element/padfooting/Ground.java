@@ -1,5 +1,6 @@
 package dev.countercheck.element.padfooting;
 
+import dev.countercheck.element.Axis;
 import dev.countercheck.element.padfooting.PadContext.Resultant;
 import dev.countercheck.statics.ContactPressure;
 import dev.countercheck.statics.PlanPoint;

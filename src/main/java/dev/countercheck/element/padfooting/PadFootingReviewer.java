@@ -1,5 +1,7 @@
 package dev.countercheck.element.padfooting;
 
+import dev.countercheck.element.Axis;
+import dev.countercheck.element.DetailingVariables;
 import dev.countercheck.element.RuleChecks;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.OutOfRangeException;
@@ -8,7 +10,6 @@ import dev.countercheck.review.Drawing;
 import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Value;
-import dev.countercheck.ruleset.Rule;
 import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.submission.PadFooting;
@@ -19,7 +20,6 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import java.util.Set;
 import java.util.function.Function;
 
@@ -57,7 +57,7 @@ final class PadFootingReviewer {
             "geo_gamma_rv", "geo_gamma_rh", "equ_gamma_g_inf", "water_unit_weight");
 
     /** What the detailing rules of a ruleset may use and define for pad footings: the checks not computed in Java. */
-    static final ElementRules RULE_VOCABULARY = new ElementRules(PadScopes.SCOPES, PadScopes.subjects(),
+    static final ElementRules RULE_VOCABULARY = new ElementRules(PadScopes.SCOPES, DetailingVariables.subjects(),
             CATALOGUE.quantityUnits(id -> !checks().containsKey(id)));
 
     private final ElementAssembler assembler;
@@ -75,10 +75,11 @@ final class PadFootingReviewer {
             Value v = done.get("bending-" + axis.label()).result().values().get("as_required");
             asRequired.put(axis, v == null ? 0.0 : v.value());
         }
-        Map<String, PadScopes.Values> variables = new HashMap<>();
+        Map<String, DetailingVariables.Values> variables = new HashMap<>();
         List<CheckOutcome> outcomes = new ArrayList<>();
         for (String id : CATALOGUE.checks().keySet()) {
-            outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired, variables));
+            outcomes.add(done.containsKey(id) ? done.get(id) : RuleChecks.byRule(CATALOGUE, id, ctx.rules,
+                    PadScopes.SCOPES, (scope, subject) -> PadScopes.values(ctx, scope, subject, asRequired), variables));
         }
         return assembler.assemble(pad.id(), CATALOGUE, pad.description(), outcomes, pad.claims(), cautions(ctx),
                 DrawingNotes.of(ctx, outcomes).<Drawing>map(d -> d));
@@ -123,22 +124,6 @@ final class PadFootingReviewer {
         return m;
     }
 
-    /** A check the ruleset defines, run on the subject its id names (variables formed once per scope and subject). */
-    private static CheckOutcome byRule(String id, PadContext ctx, Map<Axis, Double> asRequired,
-                                       Map<String, PadScopes.Values> variables) {
-        Optional<Rule> rule = ctx.rules.rule(CATALOGUE.elementType(), id);
-        if (rule.isEmpty()) {
-            return Checks.builder(id).notChecked("ruleset " + ctx.rules.id() + " has no rule for this check").build();
-        }
-        String scope = rule.get().def().scope();
-        String subject = rule.get().subject();
-        PadScopes.Values v = variables.computeIfAbsent(scope + "/" + subject,
-                k -> PadScopes.values(ctx, scope, subject, asRequired));
-        if (v.missing().isPresent()) {
-            return Checks.builder(id).notChecked(v.missing().get()).build();
-        }
-        return RuleChecks.run(CATALOGUE, rule.get(), ctx.rules, PadScopes.SCOPES.get(scope), v.values());
-    }
 
     /**
      * A formula asked outside its valid range, or a contact pressure the solver could not find, makes the check

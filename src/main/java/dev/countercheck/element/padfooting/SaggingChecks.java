@@ -1,5 +1,6 @@
 package dev.countercheck.element.padfooting;
 
+import dev.countercheck.element.Axis;
 import dev.countercheck.element.Section;
 import dev.countercheck.element.StressBlock;
 import dev.countercheck.element.padfooting.PadContext.Resultant;

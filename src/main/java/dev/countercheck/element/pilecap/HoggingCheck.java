@@ -1,5 +1,6 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
 import dev.countercheck.element.Section;
 import dev.countercheck.element.StressBlock;
 
@@ -59,7 +60,7 @@ final class HoggingCheck {
         b.trace(ctx.fyd);
         Step moment = b.value("moment", Step.of("M,hog", "Σ |P_i|·l_i + γG·γconc·b·h·L²/2 (tension side)",
                 worst.terms + " (" + worst.caseName + ")", worst.momentKnm, "kNm", "EN 1992-1-1 6.1"));
-        double width = axis.capWidth(ctx.cap);
+        double width = axis.width(ctx.cap);
         double as = sets.stream().mapToDouble(BarSet::areaMm2).sum();
         Step provided = b.value("as_provided", Step.of("As,top", "Σ n·π·φ²/4 (top bars)", sets.isEmpty() ? "no bars"
                 : String.join(" + ", sets.stream().map(s -> s.count() + "·π·" + Num.f(s.diameterMm()) + "²/4")
@@ -118,12 +119,12 @@ final class HoggingCheck {
             return null;
         }
         if (ctx.addsSelfWeight()) {
-            double length = Math.max(0, axis.capLength(ctx.cap) / 2 - sign * face);
-            double perMetre = gamma * ctx.rules.number("concrete_unit_weight") * axis.capWidth(ctx.cap) / 1000
+            double length = Math.max(0, axis.length(ctx.cap) / 2 - sign * face);
+            double perMetre = gamma * ctx.rules.number("concrete_unit_weight") * axis.width(ctx.cap) / 1000
                     * ctx.cap.depthMm() / 1000;
             sum += perMetre * Math.pow(length / 1000, 2) / 2;
             terms.add(Num.f(gamma) + "·" + Num.f(ctx.rules.number("concrete_unit_weight")) + "·"
-                    + Num.f(axis.capWidth(ctx.cap) / 1000) + "·" + Num.f(ctx.cap.depthMm() / 1000) + "·"
+                    + Num.f(axis.width(ctx.cap) / 1000) + "·" + Num.f(ctx.cap.depthMm() / 1000) + "·"
                     + Num.f(length / 1000) + "²/2");
         }
         return new Side(sum, String.join(" + ", terms), caseName, action);

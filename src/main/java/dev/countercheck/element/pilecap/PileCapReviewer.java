@@ -1,6 +1,8 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
 import dev.countercheck.element.Combinations;
+import dev.countercheck.element.DetailingVariables;
 import dev.countercheck.element.CombinationsCheck;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.OutOfRangeException;
@@ -9,7 +11,6 @@ import dev.countercheck.review.GeneratedCase;
 import dev.countercheck.submission.ActionCase;
 import dev.countercheck.element.RuleChecks;
 import dev.countercheck.review.Value;
-import dev.countercheck.ruleset.Rule;
 import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.ElementAssembler;
@@ -79,7 +80,7 @@ final class PileCapReviewer {
     }
 
     /** What the detailing rules of a ruleset may use and define for pile caps: the checks not computed in Java. */
-    static final ElementRules RULE_VOCABULARY = new ElementRules(DetailingScopes.SCOPES, DetailingScopes.subjects(),
+    static final ElementRules RULE_VOCABULARY = new ElementRules(DetailingScopes.SCOPES, DetailingVariables.subjects(),
             CATALOGUE.quantityUnits(id -> !checks().containsKey(id) && !id.equals(CombinationsCheck.ID)));
 
     ElementReview review(PileCap cap, Ruleset rules) {
@@ -127,11 +128,13 @@ final class PileCapReviewer {
             Value v = done.get("tie-" + axis.label()).result().values().get("as_required");
             asRequired.put(axis, v == null ? 0.0 : v.value());
         }
-        Map<String, DetailingScopes.Values> variables = new HashMap<>();
+        Map<String, DetailingVariables.Values> variables = new HashMap<>();
         List<CheckOutcome> outcomes = new ArrayList<>();
         for (String id : CATALOGUE.checks().keySet()) {
             if (!id.equals(CombinationsCheck.ID)) {
-                outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired, variables));
+                outcomes.add(done.containsKey(id) ? done.get(id) : RuleChecks.byRule(CATALOGUE, id, ctx.rules,
+                        DetailingScopes.SCOPES, (scope, subject) -> DetailingScopes.values(ctx, scope, subject, asRequired),
+                        variables));
             }
         }
         return new Run(ctx, outcomes);
@@ -197,26 +200,6 @@ final class PileCapReviewer {
         return map;
     }
 
-    /**
-     * A check the ruleset defines, run on the subject its id names.
-     *
-     * @param variables the scope variables formed so far for this cap, by scope and subject (formed once each)
-     */
-    private static CheckOutcome byRule(String id, PileCapContext ctx, Map<Axis, Double> asRequired,
-                                       Map<String, DetailingScopes.Values> variables) {
-        Optional<Rule> rule = ctx.rules.rule(CATALOGUE.elementType(), id);
-        if (rule.isEmpty()) {
-            return Checks.builder(id).notChecked("ruleset " + ctx.rules.id() + " has no rule for this check").build();
-        }
-        String scope = rule.get().def().scope();
-        String subject = rule.get().subject();
-        DetailingScopes.Values v = variables.computeIfAbsent(scope + "/" + subject,
-                k -> DetailingScopes.values(ctx, scope, subject, asRequired));
-        if (v.missing().isPresent()) {
-            return Checks.builder(id).notChecked(v.missing().get()).build();
-        }
-        return RuleChecks.run(CATALOGUE, rule.get(), ctx.rules, DetailingScopes.SCOPES.get(scope), v.values());
-    }
 
     /** A formula asked outside its valid range makes the check not-checked, with the reason. */
     private static CheckOutcome guarded(String id, Function<PileCapContext, CheckOutcome> check, PileCapContext ctx) {

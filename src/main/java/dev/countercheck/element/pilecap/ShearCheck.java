@@ -1,5 +1,6 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
 import dev.countercheck.element.Section;
 
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;

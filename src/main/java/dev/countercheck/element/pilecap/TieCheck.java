@@ -1,5 +1,6 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
 import dev.countercheck.element.Section;
 import dev.countercheck.element.StressBlock;
 
@@ -57,7 +58,7 @@ final class TieCheck {
                     + " column face, rectangular stress block (EN 1992-1-1 3.1.7(3)).");
             Step moment = b.value("moment", Step.of("M", "Σ P_i·(distance beyond the column face)",
                     side.terms + " (" + side.caseName + ")", side.sumKnMm / 1000, "kNm", "EN 1992-1-1 6.1"));
-            double width = axis.capWidth(ctx.cap);
+            double width = axis.width(ctx.cap);
             Optional<Step> lever = StressBlock.leverArm(ctx.rules, ctx.fck.value(), b, moment.value(), width, d.value(), "");
             if (lever.isEmpty()) {
                 return b.build();
