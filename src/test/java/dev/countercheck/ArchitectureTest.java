@@ -39,6 +39,16 @@ class ArchitectureTest {
     }
 
     @Test
+    void combinationsArePureAndUseOnlyTheFormulaLibrary() {
+        noClasses().that().resideInAPackage("dev.countercheck.actions")
+                .should().dependOnClassesThat(DescribedPredicate.describe("are in a project package other than eurocode",
+                        c -> c.getPackageName().startsWith("dev.countercheck")
+                                && !c.getPackageName().equals("dev.countercheck.actions")
+                                && !c.getPackageName().equals("dev.countercheck.eurocode")))
+                .check(CLASSES);
+    }
+
+    @Test
     void onlyTheListOfKindsNamesAnElementKind() {
         noClasses().that().resideOutsideOfPackages("dev.countercheck.element.pilecap..")
                 .and().doNotHaveFullyQualifiedName("dev.countercheck.element.ElementKinds")

@@ -10,7 +10,7 @@ import java.util.concurrent.Callable;
 /** The top-level command: only sub-commands; alone it prints the help and exits as a usage error. */
 @Command(name = "countercheck", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Independent design review of reinforced-concrete foundations to EN 1992-1-1.",
-        subcommands = {ReviewCommand.class, ValidateCommand.class, RulesCommand.class, ExampleCommand.class,
+        subcommands = {ReviewCommand.class, ValidateCommand.class, RulesCommand.class, ExampleCommand.class, CombineCommand.class,
                 SchemaCommand.class, CompareCommand.class, CommandLine.HelpCommand.class})
 public final class CountercheckCommand implements Callable<Integer> {
 

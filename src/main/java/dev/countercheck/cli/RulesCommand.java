@@ -3,10 +3,12 @@ package dev.countercheck.cli;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.ruleset.CheckDef;
 import dev.countercheck.ruleset.Parameter;
+import dev.countercheck.ruleset.RuleOption;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.ruleset.SeverityDef;
 import dev.countercheck.ruleset.RulesetException;
 import dev.countercheck.ruleset.TableDef;
+import dev.countercheck.ruleset.ValueSource;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -63,8 +65,13 @@ public final class RulesCommand implements Callable<Integer> {
         out.println();
         out.println("PARAMETERS");
         for (Parameter p : r.parameters().values()) {
-            out.printf("%-34s %-18s %10s %-6s %s  [%s]%n", p.name(), p.symbol(), Num.f(p.value()), p.unit(),
-                    p.clause(), p.origin());
+            out.printf("%-34s %-18s %10s %-6s %s  [%s]%s%n", p.name(), p.symbol(), Num.f(p.value()), p.unit(),
+                    p.clause(), p.origin(), mark(p.source()));
+        }
+        out.println();
+        out.println("OPTIONS");
+        for (RuleOption o : r.options().values()) {
+            out.printf("%-34s %-24s %s  [%s]%n", o.name(), o.value(), o.clause(), o.origin());
         }
         out.println();
         out.println("SEVERITIES");
@@ -74,7 +81,8 @@ public final class RulesCommand implements Callable<Integer> {
         out.println();
         out.println("TABLES");
         for (TableDef t : r.tables().values()) {
-            out.printf("%-26s %-10s %-4s %s  [%s]%n", t.name(), t.symbol(), t.unit(), t.clause(), t.origin());
+            out.printf("%-26s %-10s %-4s %s  [%s]%s%n", t.name(), t.symbol(), t.unit(), t.clause(), t.origin(),
+                    mark(t.source()));
         }
         for (CheckDef c : r.checks().values()) {
             out.println();
@@ -90,6 +98,11 @@ public final class RulesCommand implements Callable<Integer> {
         }
     }
 
+    /** The mark of a value recalled from memory, as the listing shows it after the value's line. */
+    private static String mark(ValueSource source) {
+        return source.recalled() ? " (" + ValueSource.MARK + ")" : "";
+    }
+
     private static void markdown(Ruleset r, PrintWriter out) {
         out.println("# Ruleset " + r.id());
         out.println();
@@ -102,7 +115,18 @@ public final class RulesCommand implements Callable<Integer> {
         out.println("|---|---|---|---|---|---|---|");
         for (Parameter p : r.parameters().values()) {
             out.println("| `" + p.name() + "` | " + p.symbol() + " | " + Num.f(p.value()) + " | " + p.unit() + " | "
-                    + p.clause() + " | " + p.note() + " | " + p.origin() + " |");
+                    + p.clause() + " | " + p.note() + mark(p.source()) + " | " + p.origin() + " |");
+        }
+        out.println();
+        out.println("## Options");
+        out.println();
+        out.println("The methods the ruleset chooses among those the review offers.");
+        out.println();
+        out.println("| option | choice | clause | note | set in |");
+        out.println("|---|---|---|---|---|");
+        for (RuleOption o : r.options().values()) {
+            out.println("| `" + o.name() + "` | `" + o.value() + "` | " + o.clause() + " | " + o.note() + " | "
+                    + o.origin() + " |");
         }
         out.println();
         out.println("## Severities");
@@ -122,7 +146,7 @@ public final class RulesCommand implements Callable<Integer> {
             out.println();
             out.println(t.clause() + ". " + t.note() + (t.interpolate() ? " Rows interpolated linearly." : "")
                     + t.beyond().map(v -> " A blank cell or a row beyond the last reads " + Num.f(v) + ".").orElse("")
-                    + " Set in " + t.origin() + ".");
+                    + " Set in " + t.origin() + "." + mark(t.source()));
             out.println();
             out.println("| row | " + String.join(" | ", t.columns()) + " |");
             out.println("|---" + "|---".repeat(t.columns().size()) + "|");

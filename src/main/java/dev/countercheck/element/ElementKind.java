@@ -34,6 +34,11 @@ public interface ElementKind<E extends ElementInput> {
     /** The ruleset parameters the reviewer reads in Java (a ruleset lacking one is refused at load). */
     Set<String> parameters();
 
+    /** The methods a ruleset chooses for this kind (option name → the choices), e.g. the column node's basis. */
+    default java.util.Map<String, List<String>> options() {
+        return java.util.Map.of();
+    }
+
     /** The assumptions every review of this type makes, for the report. */
     List<String> assumptions();
 

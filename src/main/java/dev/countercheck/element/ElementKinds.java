@@ -1,5 +1,6 @@
 package dev.countercheck.element;
 
+import dev.countercheck.element.padfooting.PadFootingKind;
 import dev.countercheck.element.pilecap.PileCapKind;
 import dev.countercheck.ruleset.RuleVocabulary;
 import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
@@ -16,7 +17,7 @@ import java.util.Set;
 public final class ElementKinds {
 
     /** Every kind, in the order their types are listed to the user. */
-    public static final List<ElementKind<?>> ALL = List.of(new PileCapKind());
+    public static final List<ElementKind<?>> ALL = List.of(new PileCapKind(), new PadFootingKind());
 
     private ElementKinds() {
     }
@@ -35,6 +36,9 @@ public final class ElementKinds {
     static RuleVocabulary vocabulary(Set<String> requiredParameters, Set<String> findingKinds) {
         Map<String, ElementRules> types = new LinkedHashMap<>();
         ALL.forEach(k -> types.put(k.type(), k.ruleVocabulary()));
-        return new RuleVocabulary(Collections.unmodifiableMap(types), requiredParameters, findingKinds);
+        Map<String, List<String>> options = new LinkedHashMap<>();
+        ALL.forEach(k -> options.putAll(k.options()));
+        return new RuleVocabulary(Collections.unmodifiableMap(types), requiredParameters, findingKinds,
+                Collections.unmodifiableMap(options));
     }
 }

@@ -23,20 +23,35 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.function.Function;
 import java.util.stream.Collectors;
+import java.util.stream.Stream;
 
-/** Reviews a whole submission: each element by the kind of its type, then the summary. */
+/**
+ * Reviews a whole submission: each element by the kind of its type, then the summary. The elements
+ * are independent, so several are reviewed at once on the common fork-join pool (one per core); the
+ * results keep the submission's order and are the same as one at a time. The system property
+ * {@value #PARALLEL_PROPERTY}{@code =false} reviews them one at a time.
+ */
 public final class ProjectReviewer {
+
+    /** Set to {@code false} to review the elements of a submission one at a time. */
+    public static final String PARALLEL_PROPERTY = "countercheck.parallel";
 
     /** Stated on every report and in the README (rule of the product). */
     public static final String GENERAL_CAUTION = "This review assists a competent engineer and does not replace one."
             + " Local codes, the applicable National Annex and licensed engineering practice govern.";
 
     /** What the tool does not review at all, stated in every report beside the checks it did not do. */
-    public static final String OUT_OF_SCOPE = "This tool reviews pile caps only. It does not review other foundation"
-            + " elements (pad and strip footings, ground beams, rafts), the piles themselves (their design resistances"
-            + " are taken as submitted), the ground (bearing, settlement, pile group effects), or the columns and walls"
-            + " above; nothing about them is checked here.";
+    public static final String OUT_OF_SCOPE = "This tool reviews pile caps and pad footings only. It does not review"
+            + " other foundation elements (strip footings, ground beams, rafts), the piles themselves (their design"
+            + " resistances are taken as submitted), the ground beyond the pad checks it names (settlement, pile group"
+            + " effects, the ground under pile caps), or the columns and walls above; nothing about them is checked here.";
+
+    /** The ruleset parameter that holds the absolute claim tolerance of each catalogue unit. */
+    private static final Map<String, String> CLAIM_FLOORS = Map.of("kN", "claim_floor_force",
+            "kNm", "claim_floor_moment", "mm", "claim_floor_length", "mm2", "claim_floor_area",
+            "MPa", "claim_floor_stress", "deg", "claim_floor_angle", "-", "claim_floor_ratio");
 
     /** Every ruleset parameter a review reads in Java; the ruleset loader refuses a chain that lacks one. */
     public static final Set<String> REQUIRED_PARAMETERS = requiredParameters();
@@ -46,35 +61,51 @@ public final class ProjectReviewer {
             Arrays.stream(FindingKind.values()).map(FindingKind::key).collect(Collectors.toUnmodifiableSet()));
 
     private final Review.ToolInfo tool;
+    private final boolean parallel;
 
+    /** Reviews elements in parallel unless the system property {@value #PARALLEL_PROPERTY} is {@code false}. */
     public ProjectReviewer(Review.ToolInfo tool) {
+        this(tool, !"false".equals(System.getProperty(PARALLEL_PROPERTY)));
+    }
+
+    /** @param parallel whether several elements are reviewed at once */
+    public ProjectReviewer(Review.ToolInfo tool, boolean parallel) {
         this.tool = tool;
+        this.parallel = parallel;
     }
 
     public Review review(Submission submission, Ruleset rules, String reviewDate) {
         SeverityPolicy severities = new SeverityPolicy(rules::severity);
-        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance")),
-                severities);
-        List<ElementReview> elements = new ArrayList<>();
-        for (ElementInput e : submission.elements()) {
+        ElementAssembler assembler = new ElementAssembler(new ClaimComparer(rules.number("claim_tolerance"),
+                claimFloors(rules)), severities);
+        Function<ElementInput, ElementReview> one = e -> {
             ElementKind<?> kind = ElementKinds.of(e.type()).orElseThrow(
                     () -> new IllegalStateException("no element kind of type " + e.type()));
-            elements.add(e instanceof IncompleteElement inc ? incomplete(inc, severities)
-                    : review(kind, e, rules, assembler));
-        }
+            return e instanceof IncompleteElement inc ? incomplete(inc, severities) : review(kind, e, rules, assembler);
+        };
+        Stream<ElementInput> inputs = submission.elements().stream();
+        List<ElementReview> elements = (parallel ? inputs.parallel() : inputs).map(one).toList();
         List<String> assumptions = new ArrayList<>();
         assumptions.add(GENERAL_CAUTION);
         assumptions.add("Nationally determined parameters come from ruleset " + rules.id() + " (" + rules.title()
                 + "); every value used is shown in the calculation trace with the file that set it.");
+        if (!rules.recalled().isEmpty()) {
+            assumptions.add("Values of ruleset " + rules.id() + " recalled from memory, not yet verified against the"
+                    + " printed standard or annex (verify them before relying on a check that uses them; the trace"
+                    + " marks each step that does): " + String.join("; ", rules.recalled()) + ".");
+        }
         ElementKinds.ALL.stream().filter(k -> submission.elements().stream().anyMatch(e -> e.type().equals(k.type())))
                 .forEach(k -> assumptions.addAll(k.assumptions()));
+        if (elements.stream().anyMatch(e -> !e.combinations().isEmpty())) {
+            assumptions.add(Combinations.ASSUMPTION);
+        }
         assumptions.add("Checks marked not-checked were not performed; the review says nothing about them.");
         var p = submission.project();
         return new Review(tool,
                 new Review.SubmissionInfo(submission.file(), submission.sha256(), p.title(), p.reference(),
                         p.revision(), p.preparedBy(), p.date()),
                 new Review.RulesetInfo(rules.id(), rules.title(), rules.sha256(), rules.files()),
-                reviewDate, ElementAssembler.overall(elements), List.copyOf(elements), summary(elements),
+                reviewDate, ElementAssembler.overall(elements), elements, summary(elements),
                 List.copyOf(assumptions));
     }
 
@@ -93,8 +124,17 @@ public final class ProjectReviewer {
                 List.of("No check of " + e.id() + " was performed."), Optional.empty());
     }
 
+    /** The absolute claim tolerance by unit, from the ruleset (pile-cap-method.md, Revision 2 item 13). */
+    private static Map<String, Double> claimFloors(Ruleset rules) {
+        Map<String, Double> floors = new java.util.HashMap<>();
+        CLAIM_FLOORS.forEach((unit, name) -> floors.put(unit, rules.number(name)));
+        return floors;
+    }
+
     private static Set<String> requiredParameters() {
         Set<String> all = new TreeSet<>(Set.of("claim_tolerance", "cover_deviation"));
+        all.addAll(Combinations.PARAMETERS);
+        all.addAll(CLAIM_FLOORS.values());
         ElementKinds.ALL.forEach(k -> all.addAll(k.parameters()));
         return Set.copyOf(all);
     }

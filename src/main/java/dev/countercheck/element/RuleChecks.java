@@ -12,6 +12,7 @@ import dev.countercheck.ruleset.CheckDef.RequirementDef;
 import dev.countercheck.ruleset.Rule;
 import dev.countercheck.ruleset.RuleExpressions;
 import dev.countercheck.ruleset.Ruleset;
+import dev.countercheck.ruleset.ValueSource;
 import dev.countercheck.ruleset.Variable;
 import dev.countercheck.submission.CheckCatalogue;
 
@@ -19,7 +20,9 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.BiFunction;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -35,8 +38,36 @@ public final class RuleChecks {
     /** Formulas and messages split once at their names: the rulesets' texts are few, the elements many. */
     private static final Map<String, String[]> FORMULAS = new ConcurrentHashMap<>();
     private static final Map<String, String[]> MESSAGES = new ConcurrentHashMap<>();
+    private static final Pattern IDENTIFIER = Pattern.compile("[A-Za-z_][A-Za-z0-9_]*");
+    private static final Map<String, List<String>> IDENTIFIERS = new ConcurrentHashMap<>();
 
     private RuleChecks() {
+    }
+
+    /**
+     * The ruleset's rule for check {@code id} of an element, run on the subject the id names; not-checked
+     * when the ruleset has no rule for it or the scope's variables cannot be formed.
+     *
+     * @param scopes    the variables of each scope of the type, with units and descriptions
+     * @param form      forms the variables of a scope for a subject
+     * @param formed    the variables formed so far for this element, by scope and subject (formed once each)
+     */
+    public static CheckOutcome byRule(CheckCatalogue catalogue, String id, Ruleset rules,
+                                      Map<String, Map<String, Variable>> scopes,
+                                      BiFunction<String, String, DetailingVariables.Values> form,
+                                      Map<String, DetailingVariables.Values> formed) {
+        Optional<Rule> rule = rules.rule(catalogue.elementType(), id);
+        if (rule.isEmpty()) {
+            return new CheckBuilder(catalogue.check(id))
+                    .notChecked("ruleset " + rules.id() + " has no rule for this check").build();
+        }
+        String scope = rule.get().def().scope();
+        String subject = rule.get().subject();
+        DetailingVariables.Values v = formed.computeIfAbsent(scope + "/" + subject, k -> form.apply(scope, subject));
+        if (v.missing().isPresent()) {
+            return new CheckBuilder(catalogue.check(id)).notChecked(v.missing().get()).build();
+        }
+        return run(catalogue, rule.get(), rules, scopes.get(scope), v.values());
     }
 
     /**
@@ -52,8 +83,8 @@ public final class RuleChecks {
         CheckBuilder b = new CheckBuilder(catalogue.check(def.idFor(subject)));
         Map<String, Object> values = new HashMap<>(variables);
         values.put("dir", subject);
-        rules.parameters().forEach((name, p) -> values.put(name, p.value()));
         RuleExpressions ex = rules.expressions();
+        values.putAll(ex.parameterValues());
         try {
             if (def.appliesWhen().isPresent() && !ex.bool(def.appliesWhen().get(), values)) {
                 return b.notApplicable(fill(def.notApplicable(), values)).build();
@@ -62,8 +93,8 @@ public final class RuleChecks {
             for (DerivedDef d : def.derived()) {
                 double v = ex.number(d.formula(), values);
                 values.put(d.name(), v);
-                steps.put(d.name(), b.trace(Step.of(d.symbol(), d.formula(), substitute(d.formula(), values), v, d.unit(),
-                        d.clause() + " (" + def.origin() + ")")));
+                steps.put(d.name(), b.trace(marked(Step.of(d.symbol(), d.formula(), substitute(d.formula(), values), v,
+                        d.unit(), d.clause() + " (" + def.origin() + ")"), d.formula(), rules)));
             }
             for (String name : def.values()) {
                 Step step = steps.get(name);
@@ -95,6 +126,26 @@ public final class RuleChecks {
                     + e.getMessage()).build();
         }
         return b.build();
+    }
+
+    /** The step, remarked when its formula uses a parameter or table the ruleset marks as recalled from memory. */
+    private static Step marked(Step step, String formula, Ruleset rules) {
+        List<String> recalled = IDENTIFIERS.computeIfAbsent(formula, RuleChecks::identifiers).stream()
+                .filter(rules::isRecalled).toList();
+        return recalled.isEmpty() ? step
+                : step.remarked(String.join(", ", recalled) + " " + ValueSource.MARK);
+    }
+
+    /** Every name a formula writes (variables, parameters, tables), once each, in order. */
+    private static List<String> identifiers(String formula) {
+        List<String> names = new ArrayList<>();
+        Matcher m = IDENTIFIER.matcher(formula);
+        while (m.find()) {
+            if (!names.contains(m.group()) && (m.start() == 0 || formula.charAt(m.start() - 1) != '"')) {
+                names.add(m.group());
+            }
+        }
+        return List.copyOf(names);
     }
 
     /** The formula with each known value put in for its name (names of no value stay as written). */

@@ -11,6 +11,7 @@ public final class Anchorage {
     private static final String C_8_4_3 = "EN 1992-1-1 8.4.3(2), Exp. (8.3)";
     private static final String C_8_4_4 = "EN 1992-1-1 8.4.4(1), Exp. (8.4), (8.6), (8.7)";
     /** Bars up to this diameter have η2 = 1 (8.4.2(2)). */
+    private static final String TABLE_8_2 = "EN 1992-1-1 8.4.4, Table 8.2";
     private static final double ETA2_LIMIT_MM = 32;
 
     private Anchorage() {
@@ -83,5 +84,46 @@ public final class Anchorage {
                 + (tension ? " (tension)" : " (compression)");
         return Step.withRemark("lbd", "max(α1·α2·α3·α5·α4·lb,rqd; lb,min)", substituted, Math.max(lbd, lbMin),
                 "mm", C_8_4_4, remark);
+    }
+
+    /**
+     * α1 for the form of the bars, EN 1992-1-1 8.4.4, Table 8.2 (tension): 0.7 for bent or hooked ends with
+     * cd &gt; 3φ, otherwise 1.0.
+     *
+     * @param bent  whether the bars end in a bend or hook
+     * @param cdMm  cd of Figure 8.3, mm, ≥ 0
+     * @param phiMm bar diameter φ, mm, &gt; 0
+     * @return α1, -
+     */
+    public static Step alpha1(boolean bent, double cdMm, double phiMm) {
+        Bounds.nonNegative("cd", cdMm, "mm", TABLE_8_2);
+        Bounds.positive("φ", phiMm, "mm", TABLE_8_2);
+        double alpha = bent && cdMm > 3 * phiMm ? 0.7 : 1.0;
+        return Step.of("α1", bent ? "0.7 if cd > 3φ, else 1.0" : "1.0 (straight bars)", bent ? Num.f(cdMm) + " vs 3·"
+                + Num.f(phiMm) : "straight", alpha, "-", TABLE_8_2);
+    }
+
+    /**
+     * α2 for the concrete cover, EN 1992-1-1 8.4.4, Table 8.2 (tension): 1 − 0.15·(cd − φ)/φ for straight
+     * bars, 1 − 0.15·(cd − 3φ)/φ for bent or hooked ends, within 0.7 ≤ α2 ≤ 1.0 (the bound applied is in the
+     * remark).
+     *
+     * @param bent  whether the bars end in a bend or hook
+     * @param cdMm  cd of Figure 8.3, mm, ≥ 0
+     * @param phiMm bar diameter φ, mm, &gt; 0
+     * @return α2, -
+     */
+    public static Step alpha2(boolean bent, double cdMm, double phiMm) {
+        Bounds.nonNegative("cd", cdMm, "mm", TABLE_8_2);
+        Bounds.positive("φ", phiMm, "mm", TABLE_8_2);
+        double k = bent ? 3 : 1;
+        double raw = 1 - 0.15 * (cdMm - k * phiMm) / phiMm;
+        double alpha = Math.max(0.7, Math.min(1.0, raw));
+        String formula = bent ? "1 − 0.15·(cd − 3φ)/φ, 0.7…1.0" : "1 − 0.15·(cd − φ)/φ, 0.7…1.0";
+        String substituted = "1 − 0.15·(" + Num.f(cdMm) + " − " + (bent ? "3·" : "") + Num.f(phiMm) + ")/"
+                + Num.f(phiMm);
+        return alpha == raw ? Step.of("α2", formula, substituted, alpha, "-", TABLE_8_2)
+                : Step.withRemark("α2", formula, substituted, alpha, "-", TABLE_8_2, Num.f(raw) + " bounded to "
+                + Num.f(alpha));
     }
 }

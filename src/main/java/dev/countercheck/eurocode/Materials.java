@@ -55,6 +55,27 @@ public final class Materials {
     }
 
     /**
+     * The fck that enters the shear resistance of concrete without shear reinforcement (vRd,c, vmin of
+     * 6.2.2(1) and 6.4.4(1)): fck,v = min(fck, fck,max,v). EN 1992-1-1 allows classes up to Cmax = C90/105
+     * (3.1.2(2)P, an NDP); a National Annex may limit the class taken in shear (the UK annex to C50/60).
+     *
+     * @param fckMpa    fck, MPa, 12 ≤ fck ≤ 90
+     * @param fckMaxMpa the largest fck taken in shear (ruleset), MPa, &gt; 0
+     * @param clause    where the limit is set (the ruleset parameter's clause)
+     * @return fck,v, MPa; the remark says when the limit applied
+     */
+    public static Step fckShear(double fckMpa, double fckMaxMpa, String clause) {
+        Bounds.fck(fckMpa);
+        Bounds.positive("fck,max,v", fckMaxMpa, "MPa", clause);
+        String substituted = "min(" + Num.f(fckMpa) + ", " + Num.f(fckMaxMpa) + ")";
+        if (fckMpa > fckMaxMpa) {
+            return Step.withRemark("fck,v", "min(fck, fck,max,v)", substituted, fckMaxMpa, "MPa", clause,
+                    "fck limited to " + Num.f(fckMaxMpa) + " MPa in shear");
+        }
+        return Step.of("fck,v", "min(fck, fck,max,v)", substituted, fckMpa, "MPa", clause);
+    }
+
+    /**
      * Design tensile strength, EN 1992-1-1 3.1.6(2), Exp. (3.16): fctd = αct·fctk,0.05/γc.
      *
      * @param alphaCt     αct (NDP; recommended 1.0), -, 0 &lt; αct ≤ 1.0

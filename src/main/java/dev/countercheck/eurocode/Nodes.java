@@ -40,6 +40,30 @@ public final class Nodes {
     }
 
     /**
+     * Resistance of a partially loaded area per unit of the loaded area, EN 1992-1-1 6.7(2), Exp. (6.63):
+     * FRdu/Ac0 = fcd·√(Ac1/Ac0) ≤ 3.0·fcd, Ac1 the largest design distribution area similar to Ac0 and
+     * concentric with it (Figure 6.29).
+     *
+     * @param fcdMpa fcd, MPa, &gt; 0
+     * @param ac1Mm2 Ac1, mm², ≥ Ac0
+     * @param ac0Mm2 Ac0, the loaded area, mm², &gt; 0
+     * @return FRdu/Ac0, MPa; the remark says when the 3.0·fcd cap applied
+     */
+    public static Step partiallyLoadedLimit(double fcdMpa, double ac1Mm2, double ac0Mm2) {
+        String clause = "EN 1992-1-1 6.7(2), Exp. (6.63)";
+        Bounds.positive("fcd", fcdMpa, "MPa", clause);
+        Bounds.positive("Ac0", ac0Mm2, "mm2", clause);
+        OutOfRangeException.requireWithin("Ac1/Ac0", ac1Mm2 / ac0Mm2, "-", 1.0 - 1e-9, Double.MAX_VALUE, clause);
+        double ratio = Math.sqrt(ac1Mm2 / ac0Mm2);
+        String substituted = Num.f(fcdMpa) + "·√(" + Num.f(ac1Mm2) + "/" + Num.f(ac0Mm2) + ")";
+        if (ratio > 3.0) {
+            return Step.withRemark("FRdu/Ac0", "fcd·√(Ac1/Ac0) ≤ 3.0·fcd", substituted, 3.0 * fcdMpa, "MPa", clause,
+                    "capped at 3.0·fcd");
+        }
+        return Step.of("FRdu/Ac0", "fcd·√(Ac1/Ac0) ≤ 3.0·fcd", substituted, fcdMpa * ratio, "MPa", clause);
+    }
+
+    /**
      * Stress in compressed reinforcement at the concrete's strain limit, EN 1992-1-1 3.1.7 and 3.2.7:
      * σsc = min(fyd; Es·εc2).
      *

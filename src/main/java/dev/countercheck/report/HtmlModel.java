@@ -7,8 +7,10 @@ import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.CheckStatus;
 import dev.countercheck.review.ClaimComparison;
 import dev.countercheck.review.Drawing;
+import dev.countercheck.review.PadFootingDrawing;
 import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.review.ElementReview;
+import dev.countercheck.review.GeneratedCase;
 import dev.countercheck.review.Finding;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
@@ -124,7 +126,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      */
     public record ElementView(String anchor, String number, String id, String type, String description,
                               String verdict, List<CheckView> checks, List<FindingRow> findings, int cautionCount,
-                              Supplier<List<DrawingView>> drawingsOf) {
+                              Supplier<List<DrawingView>> drawingsOf, List<CombinationRow> combinations) {
 
         /** The checks with a utilisation, largest first, then the others in their order. */
         public List<CheckView> checksByUtilisation() {
@@ -153,11 +155,21 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      */
     public record CheckView(String anchor, String id, String title, String basis, String status, boolean failing,
                             String utilisation, String bar, boolean over, String reason, List<QuantityView> quantities,
-                            List<StepView> trace) {
+                            List<StepView> trace, String governingCase) {
 
         Optional<Double> utilisationValue() {
             return utilisation.isEmpty() ? Optional.empty() : Optional.of(Double.parseDouble(utilisation));
         }
+    }
+
+    /**
+     * A combination generated from the element's characteristic loads, a row of its collapsed table.
+     *
+     * @param factors the factors of its actions and the clauses
+     * @param governs the ids of the checks it governs (empty when it governs none)
+     */
+    public record CombinationRow(String name, String kind, String n, String mx, String my, String hx, String hy,
+                                 String factors, String clause, String governs) {
     }
 
     /**
@@ -269,7 +281,14 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 .map(d -> List.of(drawing(anchor, element, d))).orElse(List.of());
         return new ElementView(anchor, "2." + position, element.id(), element.type(), element.description(),
                 element.verdict().label(), checks, findingRows(element, anchor, round), element.cautions().size(),
-                drawings);
+                drawings, element.combinations().stream().map(HtmlModel::combinationRow).toList());
+    }
+
+    private static CombinationRow combinationRow(GeneratedCase c) {
+        return new CombinationRow(c.name(), c.kind(), ReportNumbers.display(c.nKn(), "kN"),
+                ReportNumbers.display(c.mxKnm(), "kNm"), ReportNumbers.display(c.myKnm(), "kNm"),
+                ReportNumbers.display(c.hxKn(), "kN"), ReportNumbers.display(c.hyKn(), "kN"), c.trace().substituted(),
+                c.trace().clause(), String.join(", ", c.governs()));
     }
 
     /** The anchor of the check at {@code index} (from 0) of the element at {@code elementAnchor}. */
@@ -289,6 +308,11 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 DrawingMarks marks = DrawingMarks.of(element, cap);
                 return new DrawingView(PlanDrawing.svg(anchor, cap, marks), SectionDrawing.svg(anchor, cap, marks),
                         DrawingLegend.rows(anchor, cap, !marks.all().isEmpty()), DrawingLegend.marks(marks));
+            }
+
+            @Override
+            public DrawingView padFooting(PadFootingDrawing pad) {
+                return PadDrawing.view(anchor, pad);
             }
         });
     }
@@ -318,7 +342,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
         boolean over = check.utilisation().isPresent() && check.utilisation().getAsDouble() > 1;
         return new CheckView(anchor, check.id(), check.title(), check.basis(), check.status().label(),
                 check.status() == CheckStatus.FAIL, utilisation, bar, over, text(check.reason()),
-                quantities(check, trace), trace);
+                quantities(check, trace), trace, check.governingCase().orElse(""));
     }
 
     /**

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import com.fasterxml.jackson.core.util.Separators;
+import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectWriter;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.json.JsonMapper;
@@ -14,11 +15,13 @@ import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.ClaimComparison;
 import dev.countercheck.review.ElementReview;
+import dev.countercheck.review.GeneratedCase;
 import dev.countercheck.review.Finding;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 import dev.countercheck.review.Value;
 import dev.countercheck.review.Verdict;
+import dev.countercheck.round.ReviewRound;
 
 import java.io.IOException;
 import java.io.StringWriter;
@@ -52,9 +55,17 @@ public final class JsonResultWriter {
 
     /** The JSON text of {@code review}, ending in a newline. */
     public String write(Review review) {
+        return write(review, ReviewRound.none(""));
+    }
+
+    /**
+     * The JSON text of {@code review} in its round: with the designer's responses and the comparison
+     * with the previous revision where the round has them ({@link RoundJson}).
+     */
+    public String write(Review review, ReviewRound round) {
         StringWriter out = new StringWriter();
         try {
-            write(review, out);
+            write(review, round, out);
         } catch (IOException e) {
             // A StringWriter does not fail; a tree of strings and numbers always serialises.
             throw new IllegalStateException("could not serialise the review result", e);
@@ -63,11 +74,11 @@ public final class JsonResultWriter {
     }
 
     /**
-     * Writes the JSON text of {@code review}, ending in a newline, into {@code out} element by
-     * element: only one element's part of the result is held in memory at a time. {@code out} is
-     * flushed, not closed.
+     * Writes the JSON text of {@code review} in its round, ending in a newline, into {@code out}
+     * element by element: only one element's part of the result is held in memory at a time.
+     * {@code out} is flushed, not closed.
      */
-    public void write(Review review, Writer out) throws IOException {
+    public void write(Review review, ReviewRound round, Writer out) throws IOException {
         try (JsonGenerator g = WRITER.createGenerator(out)) {
             g.writeStartObject();
             g.writeStringField("format", FORMAT);
@@ -82,6 +93,11 @@ public final class JsonResultWriter {
             }
             g.writeEndArray();
             field(g, "summary", summary(review.summary()));
+            ObjectNode roundFields = MAPPER.createObjectNode();
+            RoundJson.add(roundFields, review, round);
+            for (Map.Entry<String, JsonNode> field : roundFields.properties()) {
+                field(g, field.getKey(), field.getValue());
+            }
             g.writeArrayFieldStart("assumptions");
             for (String assumption : review.assumptions()) {
                 g.writeString(assumption);
@@ -94,7 +110,7 @@ public final class JsonResultWriter {
         out.flush();
     }
 
-    private static void field(JsonGenerator g, String name, ObjectNode value) throws IOException {
+    private static void field(JsonGenerator g, String name, JsonNode value) throws IOException {
         g.writeFieldName(name);
         MAPPER.writeTree(g, value);
     }
@@ -138,6 +154,25 @@ public final class JsonResultWriter {
         ArrayNode findings = node.putArray("findings");
         element.findings().forEach(f -> findings.add(finding(f)));
         strings(node.putArray("cautions"), element.cautions());
+        if (!element.combinations().isEmpty()) {
+            ArrayNode generated = node.putArray("combinations");
+            element.combinations().forEach(c -> generated.add(combination(c)));
+        }
+        return node;
+    }
+
+    private static ObjectNode combination(GeneratedCase c) {
+        ObjectNode node = MAPPER.createObjectNode();
+        node.put("name", c.name());
+        node.put("kind", c.kind());
+        node.put("N", ReportNumbers.quantity(c.nKn()));
+        node.put("Mx", ReportNumbers.quantity(c.mxKnm()));
+        node.put("My", ReportNumbers.quantity(c.myKnm()));
+        node.put("Hx", ReportNumbers.quantity(c.hxKn()));
+        node.put("Hy", ReportNumbers.quantity(c.hyKn()));
+        node.put("gamma_self_weight", ReportNumbers.ratio(c.selfWeightFactor()));
+        node.set("trace", step(c.trace()));
+        strings(node.putArray("governs"), c.governs());
         return node;
     }
 
@@ -148,6 +183,7 @@ public final class JsonResultWriter {
         node.put("basis", check.basis());
         node.put("status", check.status().label());
         check.utilisation().ifPresent(u -> node.put("utilisation", ReportNumbers.ratio(u)));
+        putIfPresent(node, "governing_case", check.governingCase());
         putIfPresent(node, "reason", check.reason());
         ObjectNode values = node.putObject("values");
         check.values().forEach((name, value) -> values.set(name, value(value)));

@@ -11,7 +11,8 @@ import java.util.Optional;
  * HTML report, each written straight into its temporary file when the set is committed (the JSON
  * element by element, the HTML as the template runs; a large project's HTML on several pages, see
  * {@link Paging}), and, when asked for, the PDF. The PDF is laid out once from the report as one
- * HTML page; for a report of one page, that very text is also the HTML file.
+ * HTML page, with the JSON result attached (which is then made as text once, for both files); for a
+ * report of one page, that very HTML text is also the HTML file.
  */
 public final class ReviewReports {
 
@@ -26,17 +27,21 @@ public final class ReviewReports {
      */
     public static List<String> addTo(OutputSet set, Review review, ReviewRound round, String json, String html,
                                      Optional<String> pdf) {
-        set.addText(json, out -> new JsonResultWriter().write(review, out));
         List<HtmlReportWriter.Page> pages = new HtmlReportWriter().pages(review, round, html);
-        if (pdf.isPresent() && pages.size() == 1) {
+        if (pdf.isEmpty()) {
+            set.addText(json, out -> new JsonResultWriter().write(review, round, out));
+            pages.forEach(p -> set.addText(p.fileName(), p.content()));
+        } else {
+            String result = new JsonResultWriter().write(review, round);
+            set.add(json, result);
             String page = new HtmlReportWriter().write(review, round);
-            set.add(html, page);
-            set.add(pdf.get(), out -> new PdfReportWriter().render(page, review, out));
-            return List.of();
+            if (pages.size() == 1) {
+                set.add(html, page);
+            } else {
+                pages.forEach(p -> set.addText(p.fileName(), p.content()));
+            }
+            set.add(pdf.get(), out -> new PdfReportWriter().render(page, review, json, result, out));
         }
-        pages.forEach(p -> set.addText(p.fileName(), p.content()));
-        pdf.ifPresent(name -> set.add(name,
-                out -> new PdfReportWriter().render(new HtmlReportWriter().write(review, round), review, out)));
         return pages.stream().skip(1).map(HtmlReportWriter.Page::fileName).toList();
     }
 }

@@ -8,8 +8,8 @@ package dev.countercheck.report;
  */
 final class Styles {
 
-    /** The font of every drawing: the one the PDF embeds, then common fallbacks. */
-    static final String FONT = "Liberation Sans, Arial, Helvetica, sans-serif";
+    /** The font of every drawing: a common sans-serif on screen; in the PDF the one it embeds ({@link PdfFonts#TEXT}). */
+    static final String FONT = "Liberation Sans, DejaVu Sans Condensed, Arial, Helvetica, sans-serif";
 
     static final String INK = "#1f2a33";
     static final String FAIL_COLOUR = "#b3261e";

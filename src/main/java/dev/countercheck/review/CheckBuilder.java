@@ -32,6 +32,7 @@ public final class CheckBuilder {
     private OptionalDouble utilisation = OptionalDouble.empty();
     private Optional<String> reason = Optional.of("not computed");
     private final List<String> failures = new ArrayList<>();
+    private Optional<String> governingCase = Optional.empty();
 
     public CheckBuilder(CheckSpec spec) {
         this.spec = spec;
@@ -136,6 +137,12 @@ public final class CheckBuilder {
         return this;
     }
 
+    /** Names the action case that governs this check (the one its demand comes from). */
+    public CheckBuilder governing(String caseName) {
+        governingCase = Optional.of(caseName);
+        return this;
+    }
+
     /** Records where a critical section of this check lies, for the drawing. */
     public CheckBuilder section(Drawing.SectionLine line) {
         sections.add(line);
@@ -168,7 +175,7 @@ public final class CheckBuilder {
                 .forEach(q -> ordered.put(q.name(), values.get(q.name())));
         Optional<String> why = status == CheckStatus.FAIL ? Optional.of(String.join("; ", failures)) : reason;
         CheckResult result = new CheckResult(spec.id(), spec.title(), spec.basis(), status, utilisation, why,
-                Collections.unmodifiableMap(ordered), List.of(), List.copyOf(trace));
+                Collections.unmodifiableMap(ordered), List.of(), List.copyOf(trace), governingCase);
         return new CheckOutcome(result, List.copyOf(findings), List.copyOf(cautions), List.copyOf(sections));
     }
 }

@@ -15,8 +15,22 @@ import java.util.OptionalDouble;
  * @param values      every quantity computed, by name, in catalogue order
  * @param claims      every claimed quantity of this check compared with the computed one
  * @param trace       the calculation, in the order it was done
+ * @param governingCase the name of the action case that governs the check, when the check depends on the cases
  */
 public record CheckResult(String id, String title, String basis, CheckStatus status, OptionalDouble utilisation,
                           Optional<String> reason, Map<String, Value> values, List<ClaimComparison> claims,
-                          List<Step> trace) {
+                          List<Step> trace, Optional<String> governingCase) {
+
+    /** A result that names no governing case. */
+    public CheckResult(String id, String title, String basis, CheckStatus status, OptionalDouble utilisation,
+                       Optional<String> reason, Map<String, Value> values, List<ClaimComparison> claims,
+                       List<Step> trace) {
+        this(id, title, basis, status, utilisation, reason, values, claims, trace, Optional.empty());
+    }
+
+    /** The same result with the claims compared. */
+    public CheckResult withClaims(List<ClaimComparison> compared) {
+        return new CheckResult(id, title, basis, status, utilisation, reason, values, List.copyOf(compared), trace,
+                governingCase);
+    }
 }

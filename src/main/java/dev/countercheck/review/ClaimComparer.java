@@ -5,17 +5,32 @@ import dev.countercheck.submission.CheckCatalogue.QuantitySpec;
 import dev.countercheck.submission.CheckCatalogue.SafeSide;
 import dev.countercheck.submission.Claim;
 
+import java.util.Map;
+
 /**
  * Compares one claimed value with the recomputed one (docs/results.md, docs/pile-cap.md).
- * The tolerance is inclusive: |claimed − computed| ≤ tolerance·|computed| agrees.
+ * The tolerance is inclusive: |claimed − computed| ≤ max(rel·|computed|, abs) agrees, abs the floor
+ * of the quantity's unit (1 kN, 1 kNm, 1 mm, ...: pile-cap-method.md, Revision 2 item 13), so that a
+ * claim of a value near zero is not judged by a share of almost nothing.
  */
 public final class ClaimComparer {
 
     private final double tolerance;
+    private final Map<String, Double> floors;
 
-    /** @param tolerance relative tolerance, e.g. 0.02 for ±2 %, from the ruleset */
-    public ClaimComparer(double tolerance) {
+    /**
+     * @param tolerance relative tolerance, e.g. 0.02 for ±2 %, from the ruleset
+     * @param floors    the absolute tolerance by catalogue unit ({@code kN} → 1), from the ruleset; a unit
+     *                  without one has the relative tolerance only
+     */
+    public ClaimComparer(double tolerance, Map<String, Double> floors) {
         this.tolerance = tolerance;
+        this.floors = Map.copyOf(floors);
+    }
+
+    /** The tolerance a claim of {@code computed} in {@code unit} has: max(rel·|computed|, abs). */
+    public double allowance(double computed, String unit) {
+        return Math.max(tolerance * Math.abs(computed), floors.getOrDefault(unit, 0.0));
     }
 
     /**
@@ -23,12 +38,13 @@ public final class ClaimComparer {
      * relative difference is undefined: it is reported as 0 when the claim is also zero and as ±1
      * (±100 %) otherwise.
      */
-    public ClaimComparison compare(Claim claim, double computed, SafeSide side) {
+    public ClaimComparison compare(Claim claim, double computed, QuantitySpec q) {
         double diff = computed == 0.0
                 ? Math.signum(claim.value())
                 : (claim.value() - computed) / Math.abs(computed);
+        SafeSide side = q.safeSide();
         ClaimVerdict verdict;
-        if (Math.abs(claim.value() - computed) <= tolerance * Math.abs(computed) + 1e-9) {
+        if (Math.abs(claim.value() - computed) <= allowance(computed, q.unit()) + 1e-9) {
             verdict = ClaimVerdict.AGREES;
         } else {
             boolean claimedLarger = claim.value() > computed;
@@ -36,6 +52,14 @@ public final class ClaimComparer {
             verdict = unsafe ? ClaimVerdict.DIFFERS_UNCONSERVATIVE : ClaimVerdict.DIFFERS_CONSERVATIVE;
         }
         return new ClaimComparison(claim.quantity(), claim.value(), computed, diff, verdict);
+    }
+
+    /** How the tolerance of a claim in {@code unit} is formed, for the finding: "the larger of 2 % and 10 mm2". */
+    private String toleranceRule(String unit) {
+        String relative = String.format(java.util.Locale.ROOT, "%s %%", dev.countercheck.eurocode.Num.f(tolerance * 100));
+        Double floor = floors.get(unit);
+        return floor == null || floor <= 0 ? relative + " of the recomputed value"
+                : "the larger of " + relative + " of the recomputed value and " + CheckBuilder.show(floor, unit);
     }
 
     /** The slug of every finding about a claim of {@code quantity}: {@code claim-} and the quantity's name. */
@@ -57,7 +81,8 @@ public final class ClaimComparer {
         String direction = c.claimed() > c.computed() ? "above" : "below";
         String message = "Claimed " + check.id() + "." + q.name() + " = " + CheckBuilder.show(c.claimed(), q.unit())
                 + " is " + percent + " " + direction + " the recomputed " + CheckBuilder.show(c.computed(), q.unit())
-                + (unsafe ? " (unconservative)." : " (conservative).");
+                + ", beyond the tolerance of ±" + CheckBuilder.show(allowance(c.computed(), q.unit()), q.unit())
+                + " (" + toleranceRule(q.unit()) + ")" + (unsafe ? " (unconservative)." : " (conservative).");
         return java.util.Optional.of(new DraftFinding(slug(q.name()),
                 unsafe ? FindingKind.CLAIM_UNCONSERVATIVE : FindingKind.CLAIM_CONSERVATIVE,
                 java.util.Optional.empty(), check.id(), message, check.basis()));

@@ -6,11 +6,13 @@ package dev.countercheck.review;
  * {@link Visitor}, so that it never asks for an element's type and a new kind's drawing cannot be
  * left unrendered.
  */
-public sealed interface Drawing permits PileCapDrawing {
+public sealed interface Drawing permits PileCapDrawing, PadFootingDrawing {
 
     /** Renders each kind's drawing; one method per member of the family. */
     interface Visitor<R> {
         R pileCap(PileCapDrawing drawing);
+
+        R padFooting(PadFootingDrawing drawing);
     }
 
     <R> R accept(Visitor<R> visitor);

@@ -56,7 +56,7 @@ public final class ElementAssembler {
                         + " was not compared: " + notComparedReason(r), spec.basis()));
                 continue;
             }
-            ClaimComparison c = comparer.compare(claim, computed.value(), q.safeSide());
+            ClaimComparison c = comparer.compare(claim, computed.value(), q);
             compared.computeIfAbsent(claim.checkId(), k -> new ArrayList<>()).add(c);
             comparer.findingFor(c, spec, q).ifPresent(list::add);
         }
@@ -76,8 +76,7 @@ public final class ElementAssembler {
     }
 
     private static CheckResult withClaims(CheckResult r, List<ClaimComparison> claims) {
-        return new CheckResult(r.id(), r.title(), r.basis(), r.status(), r.utilisation(), r.reason(), r.values(),
-                List.copyOf(claims), r.trace());
+        return r.withClaims(claims);
     }
 
     /**

@@ -15,6 +15,8 @@ public enum FindingKind {
     CLAIM_NOT_COMPARED("claim-not-compared"),
     /** A detailing or code rule checked by the engine itself (spacing, edge distance, restraint) not met. */
     RULE("rule"),
+    /** A combination generated from the characteristic loads governs a check beyond the tolerance. */
+    COMBINATION_MISSED("combination-missed"),
     /** Information for the designer that needs no change. */
     REMARK("remark"),
     /** An element that could not be reviewed at all. */

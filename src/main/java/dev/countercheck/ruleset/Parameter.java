@@ -12,12 +12,14 @@ import dev.countercheck.eurocode.Step;
  * @param clause  where the standard (or the annex) sets it, or "common practice"
  * @param note    one line on what it is
  * @param origin  the ruleset file that set the value
+ * @param source  how sure the file is of the value ({@code source: from-memory}: recalled, not verified)
  */
 public record Parameter(String name, String symbol, double value, String unit, String clause, String note,
-                        String origin) {
+                        String origin, ValueSource source) {
 
     /** The parameter as a trace step, so that the report shows where each value came from. */
     public Step asStep() {
-        return Step.of(symbol, "ruleset parameter " + name, Num.f(value) + " (" + origin + ")", value, unit, clause);
+        Step step = Step.of(symbol, "ruleset parameter " + name, Num.f(value) + " (" + origin + ")", value, unit, clause);
+        return source.recalled() ? step.remarked(ValueSource.MARK) : step;
     }
 }

@@ -24,7 +24,7 @@ import java.util.regex.Pattern;
 final class RuleDefinitions {
 
     private static final List<String> TABLE_KEYS = List.of("symbol", "unit", "clause", "note", "interpolate",
-            "several", "columns", "rows", "beyond");
+            "several", "columns", "rows", "beyond", "source");
     private static final List<String> CHECK_KEYS = List.of("applies_to", "scope", "applies_when", "not_applicable", "derived",
             "values", "requirements", "cautions");
     private static final List<String> CAUTION_KEYS = List.of("when", "text");
@@ -78,7 +78,7 @@ final class RuleDefinitions {
             into.put(e.key(), new TableDef(e.key(), text(t, "symbol").orElse(e.key()), required(t, "unit", path),
                     required(t, "clause", path), text(t, "note").orElse(""), origin, interpolate,
                     "least".equals(several) ? TableDef.Several.LEAST : TableDef.Several.LARGEST, columns, rows,
-                    beyond(t, path)));
+                    beyond(t, path), RulesetLoader.source(t, path, problems)));
         }
     }
 

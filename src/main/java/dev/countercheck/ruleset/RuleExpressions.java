@@ -10,6 +10,7 @@ import com.ezylang.evalex.parser.ParseException;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -22,15 +23,20 @@ import java.util.concurrent.ConcurrentHashMap;
  * ruleset. No access to Java objects: values in are numbers, text, booleans and lists of text.
  *
  * <p>Each expression is parsed once, the first time it is used, and evaluated with only the values
- * of the names it uses (names are case-insensitive, as EvalEx reads them).
+ * of the names it uses (names are case-insensitive, as EvalEx reads them). Each thread keeps one
+ * copy of each expression (they share the syntax tree) and binds its names anew for every
+ * evaluation; the parameters are converted to decimals once, when the ruleset is loaded.
  */
 public final class RuleExpressions {
 
     private final ExpressionConfiguration configuration;
     private final Set<String> tables;
+    private final Map<String, Object> parameterValues;
     private final Map<String, Parsed> parsed = new ConcurrentHashMap<>();
+    /** This thread's copy of each expression, bound anew for each evaluation. */
+    private final ThreadLocal<Map<String, Expression>> copies = ThreadLocal.withInitial(HashMap::new);
 
-    RuleExpressions(Map<String, TableDef> tables) {
+    RuleExpressions(Map<String, TableDef> tables, Map<String, Parameter> parameters) {
         List<Map.Entry<String, FunctionIfc>> functions = new ArrayList<>();
         tables.values().forEach(t -> functions.add(Map.entry(t.name(), new TableFunction(t))));
         @SuppressWarnings("unchecked")
@@ -43,6 +49,17 @@ public final class RuleExpressions {
                 .withAdditionalFunctions(array);
         this.tables = new TreeSet<>(String.CASE_INSENSITIVE_ORDER);
         this.tables.addAll(tables.keySet());
+        Map<String, Object> values = new HashMap<>();
+        parameters.forEach((name, p) -> values.put(name, BigDecimal.valueOf(p.value())));
+        this.parameterValues = Map.copyOf(values);
+    }
+
+    /**
+     * The value of every parameter by name, as the expressions take it (a decimal, whose
+     * {@code doubleValue()} is the parameter's value): put them among the values of an evaluation.
+     */
+    public Map<String, Object> parameterValues() {
+        return parameterValues;
     }
 
     /** The variable names an expression uses (table function names excluded); throws on a syntax error. */
@@ -54,9 +71,36 @@ public final class RuleExpressions {
         return used;
     }
 
-    /** Evaluates {@code expression} with {@code values} (Double, String, Boolean, or List of String). */
+    /**
+     * Evaluates {@code expression} with {@code values} (Double or BigDecimal, String, Boolean, or List of
+     * String). A name without a value is left unbound, and the evaluator says so.
+     */
     public EvaluationValue evaluate(String expression, Map<String, Object> values) throws BaseException {
         Parsed p = parse(expression);
+        List<String> names = p.variables();
+        Object[] bound = new Object[names.size()];
+        for (int i = 0; i < bound.length; i++) {
+            String key = keyOf(names.get(i), values);
+            if (key == null) {
+                return unbound(p, values);
+            }
+            Object value = values.get(key);
+            bound[i] = value instanceof Double d ? BigDecimal.valueOf(d) : value;
+        }
+        Map<String, Expression> mine = copies.get();
+        Expression e = mine.get(expression);
+        if (e == null) {
+            e = p.expression().copy();
+            mine.put(expression, e);
+        }
+        for (int i = 0; i < bound.length; i++) {
+            e.with(names.get(i), bound[i]);
+        }
+        return e.evaluate();
+    }
+
+    /** An evaluation in which some name has no value: on a fresh copy, so that no earlier value stands in. */
+    private static EvaluationValue unbound(Parsed p, Map<String, Object> values) throws BaseException {
         Expression e = p.expression().copy();
         for (String name : p.variables()) {
             String key = keyOf(name, values);

@@ -14,9 +14,17 @@ import java.util.Set;
  * @param elementTypes       what the rules of each element type may use and define, by type ({@code pile-cap})
  * @param requiredParameters parameters the engine reads in Java
  * @param findingKinds       the kinds of finding the engine raises, each of which the ruleset gives a severity
+ * @param options            the methods the engine lets a ruleset choose, by name, with the choices (each
+ *                           option the chain must set, e.g. {@code node_column_basis})
  */
 public record RuleVocabulary(Map<String, ElementRules> elementTypes, Set<String> requiredParameters,
-                             Set<String> findingKinds) {
+                             Set<String> findingKinds, Map<String, List<String>> options) {
+
+    /** A vocabulary with no options to choose. */
+    public RuleVocabulary(Map<String, ElementRules> elementTypes, Set<String> requiredParameters,
+                          Set<String> findingKinds) {
+        this(elementTypes, requiredParameters, findingKinds, Map.of());
+    }
 
     /**
      * What the rules of one element type may use and define.

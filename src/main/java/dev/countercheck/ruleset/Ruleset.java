@@ -19,11 +19,22 @@ import java.util.Optional;
  * @param rules       the rule of each check a ruleset defines, by element type and check id
  * @param severities  the severity of each kind of finding the engine raises, by kind
  * @param expressions the evaluator for the rules' expressions, with the tables as functions
+ * @param options     the methods the ruleset chooses, by name
  */
 public record Ruleset(String id, String title, String standard, String version, String sha256, List<String> files,
                       Map<String, Parameter> parameters, Map<String, TableDef> tables, Map<String, CheckDef> checks,
                       Map<String, Map<String, Rule>> rules, Map<String, SeverityDef> severities,
-                      RuleExpressions expressions) {
+                      RuleExpressions expressions, Map<String, RuleOption> options) {
+
+    /** The choice of option {@code name}; every option the engine offers is validated at load. */
+    public RuleOption option(String name) {
+        RuleOption o = options.get(name);
+        if (o == null) {
+            throw new IllegalStateException("ruleset " + id + " sets no option '" + name
+                    + "' (the loader should have refused it)");
+        }
+        return o;
+    }
 
     /** The rule for check {@code checkId} of {@code elementType}, when the ruleset defines one. */
     public Optional<Rule> rule(String elementType, String checkId) {
@@ -52,5 +63,25 @@ public record Ruleset(String id, String title, String standard, String version, 
 
     public double number(String name) {
         return parameter(name).value();
+    }
+
+    /**
+     * The parameters and tables the chain marks {@code source: from-memory}, each as
+     * "name = value unit (clause; file)" or "table name (clause; file)", for the review's assumptions.
+     */
+    public List<String> recalled() {
+        List<String> out = new java.util.ArrayList<>();
+        parameters.values().stream().filter(p -> p.source().recalled()).forEach(p -> out.add(p.name() + " = "
+                + dev.countercheck.eurocode.Num.f(p.value()) + ("-".equals(p.unit()) ? "" : " " + p.unit()) + " ("
+                + p.clause() + "; " + p.origin() + ")"));
+        tables.values().stream().filter(t -> t.source().recalled()).forEach(t -> out.add("table " + t.name() + " ("
+                + t.clause() + "; " + t.origin() + ")"));
+        return List.copyOf(out);
+    }
+
+    /** Whether a table or parameter of this name is marked as recalled from memory. */
+    public boolean isRecalled(String name) {
+        return (parameters.containsKey(name) && parameters.get(name).source().recalled())
+                || (tables.containsKey(name) && tables.get(name).source().recalled());
     }
 }

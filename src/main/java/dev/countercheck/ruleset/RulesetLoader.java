@@ -45,8 +45,11 @@ import java.util.regex.Pattern;
 public final class RulesetLoader {
 
     private static final List<String> TOP_KEYS = List.of("ruleset", "id", "extends", "title", "standard", "version",
-            "parameters", "severities", "tables", "checks");
-    private static final List<String> PARAMETER_KEYS = List.of("symbol", "value", "unit", "clause", "note");
+            "parameters", "options", "severities", "tables", "checks");
+    private static final List<String> OPTION_KEYS = List.of("value", "clause", "note");
+    private static final List<String> PARAMETER_KEYS = List.of("symbol", "value", "unit", "clause", "note", "source");
+    /** The keys a parameter must state; an override states its value and clause. */
+    private static final List<String> PARAMETER_NEEDED = List.of("symbol", "value", "unit", "clause", "note");
     private static final List<String> SEVERITY_KEYS = List.of("severity", "meaning");
     private static final List<String> SEVERITIES = List.of("critical", "major", "minor", "note");
 
@@ -146,6 +149,7 @@ public final class RulesetLoader {
         Map<String, TableDef> tables = new LinkedHashMap<>();
         Map<String, CheckDef> checks = new LinkedHashMap<>();
         Map<String, SeverityDef> severities = new LinkedHashMap<>();
+        Map<String, RuleOption> options = new LinkedHashMap<>();
         List<InputError> errors = new ArrayList<>();
         for (int i = 0; i < chain.size(); i++) {
             RulesetFile file = chain.get(i);
@@ -162,6 +166,7 @@ public final class RulesetLoader {
                         "expected a mapping of parameter names to their values");
             }
             readSeverities(file, severities);
+            readOptions(file, options);
             RuleDefinitions definitions = new RuleDefinitions(problems, file.name());
             file.root().entry("tables").ifPresent(t -> definitions.readTables(t.value(), tables));
             file.root().entry("checks").ifPresent(c -> definitions.readChecks(c.value(), checks));
@@ -173,6 +178,12 @@ public final class RulesetLoader {
             errors.add(new InputError(top.root().location(), "parameters", "the ruleset chain does not define "
                     + String.join(", ", missing) + ", which the review needs"));
         }
+        List<String> unchosen = vocabulary.options().keySet().stream().filter(o -> !options.containsKey(o)).sorted()
+                .toList();
+        if (!unchosen.isEmpty()) {
+            errors.add(new InputError(top.root().location(), "options", "the ruleset chain does not choose "
+                    + String.join(", ", unchosen) + ", which the review needs"));
+        }
         List<String> unset = vocabulary.findingKinds().stream().filter(k -> !severities.containsKey(k)).sorted().toList();
         if (!unset.isEmpty()) {
             errors.add(new InputError(top.root().location(), "severities", "the ruleset chain gives no severity to "
@@ -181,7 +192,7 @@ public final class RulesetLoader {
         if (!errors.isEmpty()) {
             throw new RulesetException(errors);
         }
-        RuleExpressions expressions = new RuleExpressions(tables);
+        RuleExpressions expressions = new RuleExpressions(tables, parameters);
         RuleValidator validator = new RuleValidator(vocabulary, parameters, expressions);
         Map<String, CheckDef> validated = validator.validate(checks);
         if (!validator.errors().isEmpty()) {
@@ -192,7 +203,42 @@ public final class RulesetLoader {
                 optionalText(root, "standard").orElse(""), optionalText(root, "version").orElse(""), hash(chain),
                 chain.stream().map(RulesetFile::name).toList(), Collections.unmodifiableMap(parameters),
                 Collections.unmodifiableMap(tables), Collections.unmodifiableMap(validated), validator.rules(),
-                Collections.unmodifiableMap(severities), expressions);
+                Collections.unmodifiableMap(severities), expressions, Collections.unmodifiableMap(options));
+    }
+
+    /**
+     * The {@code options} section: each method the engine lets a ruleset choose, with its choice, clause
+     * and note. A ruleset that extends another may change a choice (stating its clause).
+     */
+    private void readOptions(RulesetFile file, Map<String, RuleOption> options) {
+        Problems problems = file.problems();
+        for (Entry e : section(file, "options", "expected a mapping of options to their choice")) {
+            String path = "options." + e.key();
+            List<String> choices = vocabulary.options().get(e.key());
+            if (choices == null) {
+                problems.add(e.keyLocation(), path, "'" + Shown.text(e.key()) + "' is not an option the review offers"
+                        + Suggestions.hint(e.key(), vocabulary.options().keySet()));
+                continue;
+            }
+            Optional<MapNode> mapping = fields(e, path, OPTION_KEYS, problems);
+            if (mapping.isEmpty()) {
+                continue;
+            }
+            MapNode m = mapping.get();
+            Optional<String> value = optionalText(m, "value");
+            Optional<String> clause = optionalText(m, "clause");
+            RuleOption inherited = options.get(e.key());
+            if (value.isEmpty() || clause.isEmpty()) {
+                problems.add(m.location(), path, "'" + e.key() + "' needs a value and the clause that offers it");
+            } else if (!choices.contains(value.get())) {
+                problems.add(m.entry("value").get().value().location(), path + ".value", "'"
+                        + Shown.text(value.get()) + "' is not a choice of " + e.key() + "; the choices are "
+                        + String.join(", ", choices) + Suggestions.hint(value.get(), choices));
+            } else {
+                options.put(e.key(), new RuleOption(e.key(), value.get(), clause.get(), optionalText(m, "note")
+                        .orElse(inherited == null ? "" : inherited.note()), file.name()));
+            }
+        }
     }
 
     private void checkTop(RulesetFile file) {
@@ -224,17 +270,12 @@ public final class RulesetLoader {
                     + Suggestions.hint(e.key(), parameters.keySet()));
             return;
         }
-        if (!(e.value() instanceof MapNode map)) {
-            problems.add(e.value().location(), path, "expected a mapping with " + String.join(", ", PARAMETER_KEYS));
+        Optional<MapNode> mapping = fields(e, path, PARAMETER_KEYS, problems);
+        if (mapping.isEmpty()) {
             return;
         }
-        for (Entry f : map.entries()) {
-            if (!PARAMETER_KEYS.contains(f.key())) {
-                problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + Shown.text(f.key()) + "'"
-                        + Suggestions.hint(f.key(), PARAMETER_KEYS));
-            }
-        }
-        List<String> needed = base ? PARAMETER_KEYS : List.of("value", "clause");
+        MapNode map = mapping.get();
+        List<String> needed = base ? PARAMETER_NEEDED : List.of("value", "clause");
         for (String key : needed) {
             if (map.entry(key).isEmpty()) {
                 problems.add(map.location(), path, "'" + e.key() + "' has no '" + key + "'"
@@ -261,7 +302,22 @@ public final class RulesetLoader {
         parameters.put(e.key(), new Parameter(e.key(),
                 optionalText(map, "symbol").orElse(base ? e.key() : inherited.symbol()), value.get(),
                 unit, optionalText(map, "clause").orElse(""),
-                optionalText(map, "note").orElse(base ? "" : inherited.note()), origin));
+                optionalText(map, "note").orElse(base ? "" : inherited.note()), origin,
+                source(map, path, problems)));
+    }
+
+    /** The {@code source} of a parameter or table: how sure the file is of the value (not inherited). */
+    static ValueSource source(MapNode map, String path, Problems problems) {
+        Optional<String> written = optionalText(map, "source");
+        if (written.isEmpty()) {
+            return ValueSource.STATED;
+        }
+        Optional<ValueSource> source = ValueSource.of(written.get());
+        if (source.isEmpty()) {
+            problems.add(map.entry("source").get().value().location(), path + ".source", "unknown source '"
+                    + Shown.text(written.get()) + "'; expected one of " + String.join(", ", ValueSource.written()));
+        }
+        return source.orElse(ValueSource.STATED);
     }
 
     /**
@@ -270,16 +326,7 @@ public final class RulesetLoader {
      */
     private void readSeverities(RulesetFile file, Map<String, SeverityDef> severities) {
         Problems problems = file.problems();
-        Optional<Entry> section = file.root().entry("severities");
-        if (section.isEmpty()) {
-            return;
-        }
-        if (!(section.get().value() instanceof MapNode map)) {
-            problems.add(section.get().value().location(), "severities",
-                    "expected a mapping of finding kinds to their severity and meaning");
-            return;
-        }
-        for (Entry e : map.entries()) {
+        for (Entry e : section(file, "severities", "expected a mapping of finding kinds to their severity and meaning")) {
             String path = "severities." + e.key();
             SeverityDef inherited = severities.get(e.key());
             if (!vocabulary.findingKinds().contains(e.key())) {
@@ -287,16 +334,11 @@ public final class RulesetLoader {
                         + Suggestions.hint(e.key(), vocabulary.findingKinds()));
                 continue;
             }
-            if (!(e.value() instanceof MapNode m)) {
-                problems.add(e.value().location(), path, "expected a mapping with " + String.join(", ", SEVERITY_KEYS));
+            Optional<MapNode> mapping = fields(e, path, SEVERITY_KEYS, problems);
+            if (mapping.isEmpty()) {
                 continue;
             }
-            for (Entry f : m.entries()) {
-                if (!SEVERITY_KEYS.contains(f.key())) {
-                    problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + f.key() + "'"
-                            + Suggestions.hint(f.key(), SEVERITY_KEYS));
-                }
-            }
+            MapNode m = mapping.get();
             Optional<String> severity = optionalText(m, "severity");
             Optional<String> meaning = optionalText(m, "meaning").or(() -> Optional.ofNullable(inherited)
                     .map(SeverityDef::meaning));
@@ -310,6 +352,31 @@ public final class RulesetLoader {
                 severities.put(e.key(), new SeverityDef(e.key(), severity.get(), meaning.get(), file.name()));
             }
         }
+    }
+
+    /** The entries of a top-level section of the file; none when it is absent or not a mapping (reported). */
+    private static List<Entry> section(RulesetFile file, String key, String expected) {
+        Optional<Entry> section = file.root().entry(key);
+        if (section.isPresent() && !(section.get().value() instanceof MapNode)) {
+            file.problems().add(section.get().value().location(), key, expected);
+        }
+        return section.map(Entry::value).filter(MapNode.class::isInstance).map(v -> ((MapNode) v).entries())
+                .orElse(List.of());
+    }
+
+    /** The mapping of an entry (a parameter, a severity, an option), its unknown keys reported; empty if none. */
+    private static Optional<MapNode> fields(Entry e, String path, List<String> keys, Problems problems) {
+        if (!(e.value() instanceof MapNode map)) {
+            problems.add(e.value().location(), path, "expected a mapping with " + String.join(", ", keys));
+            return Optional.empty();
+        }
+        for (Entry f : map.entries()) {
+            if (!keys.contains(f.key())) {
+                problems.add(f.keyLocation(), path + "." + f.key(), "unknown key '" + Shown.text(f.key()) + "'"
+                        + Suggestions.hint(f.key(), keys));
+            }
+        }
+        return Optional.of(map);
     }
 
     private static Optional<Double> number(Node node, Problems problems, String path) {

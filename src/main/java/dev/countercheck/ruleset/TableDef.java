@@ -20,10 +20,11 @@ import java.util.Optional;
  * @param columns column keys in order: text, or numbers as written
  * @param rows    row key (as written) → one value per column, empty where the standard has none
  * @param beyond  the value of a blank cell and above the last row, when the table gives one
+ * @param source  how sure the file is of the values ({@code source: from-memory}: recalled, not verified)
  */
 public record TableDef(String name, String symbol, String unit, String clause, String note, String origin,
                        boolean interpolate, Several several, List<String> columns,
-                       Map<String, List<Optional<Double>>> rows, Optional<Double> beyond) {
+                       Map<String, List<Optional<Double>>> rows, Optional<Double> beyond, ValueSource source) {
 
     /** How a list-valued key combines. */
     public enum Several { LARGEST, LEAST }

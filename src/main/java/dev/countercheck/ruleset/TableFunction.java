@@ -40,16 +40,14 @@ final class TableFunction extends AbstractFunction {
         EvaluationException firstMiss = null;
         for (EvaluationValue row : rows) {
             for (String column : columns) {
-                double v;
-                try {
-                    v = lookup(token, row, column);
-                } catch (EvaluationException miss) {
-                    if (!several) {
-                        throw miss;
-                    }
-                    firstMiss = firstMiss == null ? miss : firstMiss;
+                if (several && !lists(row, column)) {
+                    // a class the table does not list (XF, XA in Table 4.4N) adds nothing; a blank cell of a
+                    // listed class is no value at all, never passed over
+                    firstMiss = firstMiss == null ? new EvaluationException(token, "table " + table.name() + " ("
+                            + table.clause() + ") lists none of the classes given") : firstMiss;
                     continue;
                 }
+                double v = lookup(token, row, column);
                 if (best == null || (table.several() == TableDef.Several.LARGEST ? v > best : v < best)) {
                     best = v;
                 }
@@ -102,6 +100,11 @@ final class TableFunction extends AbstractFunction {
         }
         throw new EvaluationException(token, "table " + table.name() + " (" + table.clause() + ") ends at "
                 + sorted.get(sorted.size() - 1).getKey() + "; " + key + " is beyond it");
+    }
+
+    /** Whether the table has the row (an interpolated table has every row) and the column. */
+    private boolean lists(EvaluationValue row, String column) {
+        return columnIndex(column) >= 0 && (table.interpolate() || table.rows().containsKey(text(row)));
     }
 
     private int columnIndex(String column) {

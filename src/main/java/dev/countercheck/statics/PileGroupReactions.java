@@ -28,9 +28,10 @@ public final class PileGroupReactions {
      * @param myStarKnm    My* about the pile-group centroid
      * @param reactionsKn  P_i in pile order
      * @param unresistedKnm the moment about the line of a collinear group (0 otherwise)
+     * @param plane        the reaction plane P_i = V/n + a·dx_i + b·dy_i that gave the reactions
      */
     public record Distribution(double totalKn, double mxStarKnm, double myStarKnm, double[] reactionsKn,
-                        double unresistedKnm) {
+                        double unresistedKnm, Plane plane) {
 
         public double max() {
             return java.util.Arrays.stream(reactionsKn).max().orElse(0);
@@ -39,6 +40,16 @@ public final class PileGroupReactions {
         public double min() {
             return java.util.Arrays.stream(reactionsKn).min().orElse(0);
         }
+    }
+
+    /**
+     * The plane of the reactions: slopes a along x and b along y (kN per m), each pile's offset from
+     * the group centroid (mm), and the second moments of the offsets (m²) the slopes were solved
+     * from; {@code collinear} when the group lies on one line (the slopes then carry the moment in
+     * that line only).
+     */
+    public record Plane(double aKnPerM, double bKnPerM, double[] dxMm, double[] dyMm, double sxxM2, double syyM2,
+                        double sxyM2, boolean collinear) {
     }
 
     private PileGroupReactions() {
@@ -68,9 +79,16 @@ public final class PileGroupReactions {
             my += load.forceKn() * (load.at().xMm() - xBar) / 1000.0;
         }
         double[] p = new double[n];
+        double[] dx = new double[n];
+        double[] dy = new double[n];
+        for (int i = 0; i < n; i++) {
+            dx[i] = piles.get(i).xMm() - xBar;
+            dy[i] = piles.get(i).yMm() - yBar;
+        }
+        Spread g = Spread.of(piles);
         if (n == 1) {
             p[0] = v;
-            return new Distribution(v, mx, my, p, Math.hypot(mx, my));
+            return new Distribution(v, mx, my, p, Math.hypot(mx, my), g.plane(0, 0, dx, dy, true));
         }
         if (line.isPresent()) {
             double ux = line.get()[0];
@@ -85,16 +103,17 @@ public final class PileGroupReactions {
             for (int i = 0; i < n; i++) {
                 p[i] = v / n + inLine * s[i] / ss;
             }
-            return new Distribution(v, mx, my, p, Math.abs(mx * ux - my * uy));
+            double slope = inLine / ss * 1000.0;
+            return new Distribution(v, mx, my, p, Math.abs(mx * ux - my * uy),
+                    g.plane(slope * ux, slope * uy, dx, dy, true));
         }
-        Spread g = Spread.of(piles);
         double det = g.sxx * g.syy - g.sxy * g.sxy;
         double a = (my * 1000.0 * g.syy - mx * 1000.0 * g.sxy) / det;
         double b = (mx * 1000.0 * g.sxx - my * 1000.0 * g.sxy) / det;
         for (int i = 0; i < n; i++) {
             p[i] = v / n + a * (piles.get(i).xMm() - xBar) + b * (piles.get(i).yMm() - yBar);
         }
-        return new Distribution(v, mx, my, p, 0.0);
+        return new Distribution(v, mx, my, p, 0.0, g.plane(a * 1000.0, b * 1000.0, dx, dy, false));
     }
 
     /** The unit direction of a group of two or more piles on one line; empty when they span an area. */
@@ -114,6 +133,10 @@ public final class PileGroupReactions {
     /** Second moments of the pile positions about their centroid: Σdx², Σdy², Σdx·dy (mm²). */
     private record Spread(double sxx, double syy, double sxy) {
 
+        Plane plane(double aKnPerM, double bKnPerM, double[] dx, double[] dy, boolean collinear) {
+            return new Plane(aKnPerM, bKnPerM, dx, dy, sxx / 1e6, syy / 1e6, sxy / 1e6, collinear);
+        }
+
         static Spread of(List<PlanPoint> piles) {
             double xBar = piles.stream().mapToDouble(PlanPoint::xMm).average().orElse(0);
             double yBar = piles.stream().mapToDouble(PlanPoint::yMm).average().orElse(0);
@@ -131,20 +154,50 @@ public final class PileGroupReactions {
         }
     }
 
-    /** Trace steps of a distribution: V, Mx*, My* and every P_i. */
+    /**
+     * Trace steps of a distribution: V, Mx*, My*, the slopes a and b of the reaction plane (each
+     * defined where it first appears) and every P_i with its numbers.
+     */
     public static List<Step> trace(Distribution d, String caseName) {
         String basis = "rigid cap, linear distribution (common practice)";
+        String c = " (" + caseName + ")";
+        Plane pl = d.plane();
+        int n = d.reactionsKn().length;
         List<Step> steps = new ArrayList<>();
-        steps.add(Step.of("V (" + caseName + ")", "Σ vertical loads", Num.f(d.totalKn()), d.totalKn(), "kN", basis));
-        steps.add(Step.of("Mx* (" + caseName + ")", "Mx + Hy·h + Σ F·(y_F − ȳ)", Num.f(d.mxStarKnm()),
+        steps.add(Step.of("V" + c, "Σ vertical loads", Num.f(d.totalKn()), d.totalKn(), "kN", basis));
+        steps.add(Step.of("Mx*" + c, "Mx + Hy·h + Σ F·(y_F − ȳ)", Num.f(d.mxStarKnm()),
                 d.mxStarKnm(), "kNm", basis));
-        steps.add(Step.of("My* (" + caseName + ")", "My + Hx·h + Σ F·(x_F − x̄)", Num.f(d.myStarKnm()),
+        steps.add(Step.of("My*" + c, "My + Hx·h + Σ F·(x_F − x̄)", Num.f(d.myStarKnm()),
                 d.myStarKnm(), "kNm", basis));
+        if (pl.collinear()) {
+            steps.add(Step.of("a" + c, "a, b: slopes of the reactions along x and y, the group on one line"
+                    + " carrying the moment in its line: (a, b) = M_line/Σs²·(ux, uy), s_i the offset along the line",
+                    "Σdx² = " + Num.f(pl.sxxM2()) + " m², Σdy² = " + Num.f(pl.syyM2()) + " m²",
+                    pl.aKnPerM(), "kN/m", basis));
+            steps.add(Step.of("b" + c, "b: slope of the reactions along y, as for a", "as for a",
+                    pl.bKnPerM(), "kN/m", basis));
+        } else {
+            String system = "Σdx² = " + Num.f(pl.sxxM2()) + " m², Σdy² = " + Num.f(pl.syyM2()) + " m², Σdx·dy = "
+                    + Num.f(pl.sxyM2()) + " m²; My* = " + Num.f(d.myStarKnm()) + ", Mx* = "
+                    + Num.f(d.mxStarKnm()) + " kNm";
+            steps.add(Step.of("a" + c, "a: slope of the reactions along x, from Σdx²·a + Σdx·dy·b = My*,"
+                    + " Σdx·dy·a + Σdy²·b = Mx* (dx, dy: pile offsets from the group centroid, in m)",
+                    system, pl.aKnPerM(), "kN/m", basis));
+            steps.add(Step.of("b" + c, "b: slope of the reactions along y, from the same two equations", system,
+                    pl.bKnPerM(), "kN/m", basis));
+        }
         double[] p = d.reactionsKn();
-        for (int i = 0; i < p.length; i++) {
-            steps.add(Step.of("P" + (i + 1) + " (" + caseName + ")", "V/n + a·(x_i − x̄) + b·(y_i − ȳ)",
-                    Num.f(p[i]), p[i], "kN", basis));
+        for (int i = 0; i < n; i++) {
+            steps.add(Step.of("P" + (i + 1) + c, "V/n + a·dx_i + b·dy_i",
+                    Num.f(d.totalKn()) + "/" + n + " + " + term(pl.aKnPerM()) + "·" + term(pl.dxMm()[i] / 1000.0)
+                            + " + " + term(pl.bKnPerM()) + "·" + term(pl.dyMm()[i] / 1000.0),
+                    p[i], "kN", basis));
         }
         return steps;
+    }
+
+    /** A number as a factor: in brackets when negative. */
+    private static String term(double value) {
+        return value < 0 ? "(" + Num.f(value) + ")" : Num.f(value);
     }
 }

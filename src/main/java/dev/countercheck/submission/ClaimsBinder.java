@@ -35,6 +35,11 @@ final class ClaimsBinder {
     }
 
     Optional<Claims> read(Node node, String path, CheckCatalogue catalogue) {
+        return read(node, path, catalogue, true);
+    }
+
+    /** @param takesMethod whether {@code method} (how the ties were designed) is a claim of this element type */
+    Optional<Claims> read(Node node, String path, CheckCatalogue catalogue, boolean takesMethod) {
         Map<String, CheckSpec> checks = catalogue.checks();
         return values.map(node, path).flatMap(map -> {
             Optional<TieMethod> method = Optional.of(TieMethod.TRUSS);
@@ -42,12 +47,12 @@ final class ClaimsBinder {
             boolean ok = true;
             for (Entry entry : map.entries()) {
                 String entryPath = Values.join(path, entry.key());
-                if (entry.key().equals(METHOD)) {
+                if (takesMethod && entry.key().equals(METHOD)) {
                     method = values.choice(entry.value(), entryPath, "method", Values.options(TieMethod.values()));
                 } else if (checks.containsKey(entry.key())) {
                     ok &= check(entry, entryPath, checks.get(entry.key()), claims);
                 } else {
-                    List<String> known = new ArrayList<>(List.of(METHOD));
+                    List<String> known = new ArrayList<>(takesMethod ? List.of(METHOD) : List.of());
                     known.addAll(checks.keySet());
                     values.problems().add(entry.keyLocation(), entryPath, "unknown check '" + Shown.text(entry.key()) + "'"
                             + Suggestions.hint(entry.key(), known));

@@ -18,6 +18,8 @@ import java.util.stream.Collectors;
  *   <li>stress 1000 MPa: reinforcing steel yields at 400 to 600 MPa, concrete crushes far lower;
  *   <li>area 10⁷ mm² (10 m²): the steel area of any cross-section of a cap stays far below;
  *   <li>angle 180°;
+ *   <li>pressure 100 MPa (10⁵ kPa): ground pressures and soil strengths stay below a few MPa;
+ *   <li>unit weight 100 kN/m³: soils and concrete weigh some 15 to 25 kN/m³;
  *   <li>plain number 100: the factors a submission states (β, ratios) lie near 1.
  * </ul>
  * Unit symbols are case-sensitive ({@code MN} is a force, {@code mm} a length).
@@ -32,6 +34,11 @@ enum Dimension {
     AREA("an area", 1e7, "10000000 mm2 (10 m2)", new Unit("mm2", 1), new Unit("mm²", 1), new Unit("cm2", 100),
             new Unit("m2", 1e6)),
     ANGLE("an angle", 180, "180°", new Unit("deg", 1), new Unit("°", 1)),
+    /** A ground pressure or a soil strength, kPa (kN/m²). */
+    PRESSURE("a pressure", 1e5, "100000 kPa (100 MPa)", new Unit("kPa", 1), new Unit("kN/m2", 1),
+            new Unit("kN/m²", 1), new Unit("MPa", 1e3)),
+    /** A unit weight, kN/m³. */
+    UNIT_WEIGHT("a unit weight", 100, "100 kN/m3", new Unit("kN/m3", 1), new Unit("kN/m³", 1)),
     /** A pure number (β, a ratio): no unit may be written. */
     NUMBER("a plain number", 100, "100", new Unit("-", 1));
 
@@ -60,8 +67,8 @@ enum Dimension {
      * The smallest magnitude other than zero a value of this kind may have, in the default unit: a
      * value closer to zero (a pile of 1e-200 mm) is a slip, and as a divisor it would make a
      * formula divide by zero. The bounds lie far below any dimension, load or stress of a
-     * foundation (common practice): 0.1 mm, 1 N, 1 Nm, 1 kPa, 0.1 mm², 0.01°, and 10⁻⁶ for a plain
-     * number.
+     * foundation (common practice): 0.1 mm, 1 N, 1 Nm, 1 kPa, 0.1 mm², 0.01°, 0.01 kPa, 0.01 kN/m³
+     * and 10⁻⁶ for a plain number.
      */
     double least() {
         return switch (this) {
@@ -71,6 +78,8 @@ enum Dimension {
             case STRESS -> 1e-3;
             case AREA -> 0.1;
             case ANGLE -> 0.01;
+            case PRESSURE -> 0.01;
+            case UNIT_WEIGHT -> 0.01;
             case NUMBER -> 1e-6;
         };
     }

@@ -2,6 +2,8 @@ package dev.countercheck.submission;
 
 import dev.countercheck.input.SourceLocation;
 
+import java.util.List;
+
 /** One element of a submission: a reviewable element of a known type, or one too incomplete to review. */
 public interface ElementInput {
 
@@ -13,4 +15,9 @@ public interface ElementInput {
     String description();
 
     SourceLocation location();
+
+    /** The characteristic loads by source ({@code loads:}), from which the review generates combinations. */
+    default List<CharacteristicLoad> loads() {
+        return List.of();
+    }
 }

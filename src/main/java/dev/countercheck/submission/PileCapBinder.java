@@ -1,24 +1,29 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.input.Node;
 import dev.countercheck.submission.ActionCase.Kind;
 import dev.countercheck.submission.PileCap.CastAgainst;
 import dev.countercheck.submission.PileCap.SelfWeight;
 import dev.countercheck.submission.Values.Bound;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
  * Reads one {@code type: pile-cap} element. An element that lacks an item every check needs (its
- * plan, depth, piles, column, actions, or a ULS action case) but is otherwise readable becomes an
- * {@link IncompleteElement} naming what is missing; whatever it does give is still validated.
+ * plan, depth, piles, column, and actions with a ULS case or else characteristic loads) but is otherwise
+ * readable becomes an {@link IncompleteElement} naming what is missing; whatever it does give is still
+ * validated.
  */
 public final class PileCapBinder {
 
     private static final List<String> KEYS = List.of("id", "type", "description", "materials", "plan", "depth",
-            "cast_against", "self_weight", "piles", "column", "actions", "reinforcement", "claims", "punching_beta");
-    private static final List<String> PLAN_KEYS = List.of("x", "y");
+            "cast_against", "self_weight", "piles", "column", "actions", "loads", "reinforcement", "claims",
+            "punching_beta");
+    private static final List<String> CASTING_KEYS = List.of("bottom", "sides");
 
     /** Reads pile caps for the reader. */
     public static final ElementBinder BINDER = new ElementBinder(KEYS, PileCapChecks.CATALOGUE) {
@@ -41,10 +46,9 @@ public final class PileCapBinder {
     Optional<ElementInput> read(Fields f, String id, String description, MaterialsBinder.Draft fileMaterials) {
         Optional<Materials> materials = materialsBinder.complete(f.fields("materials", MaterialsBinder.KEYS)
                 .map(materialsBinder::read).orElse(MaterialsBinder.Draft.NONE).over(fileMaterials), f);
-        Optional<Plan> plan = f.fields("plan", PLAN_KEYS).flatMap(this::plan);
+        Optional<Plan> plan = f.fields("plan", Plan.KEYS).flatMap(Plan::read);
         Optional<Double> depth = f.quantity("depth", Dimension.LENGTH, Bound.POSITIVE);
-        Optional<CastAgainst> castAgainst = f.choice("cast_against", Values.options(CastAgainst.values()),
-                CastAgainst.BLINDING);
+        Optional<PileCap.Casting> castAgainst = casting(f);
         Optional<SelfWeight> selfWeight = f.choice("self_weight", Values.options(SelfWeight.values()), SelfWeight.ADD);
         Optional<PileGroup> piles = f.fields("piles", PileGroupBinder.KEYS)
                 .flatMap(p -> new PileGroupBinder(values).read(p, plan, depth));
@@ -52,6 +56,9 @@ public final class PileCapBinder {
                 .flatMap(c -> new ColumnBinder(values).read(c, plan));
         Optional<List<ActionCase>> actions = f.get("actions")
                 .flatMap(n -> new ActionsBinder(values).read(n, f.path("actions")));
+        Optional<List<CharacteristicLoad>> loads = f.has("loads")
+                ? f.get("loads").flatMap(n -> new LoadsBinder(values).read(n, f.path("loads")))
+                : Optional.of(List.of());
         Optional<Double> punchingBeta = f.quantity("punching_beta", Dimension.NUMBER, Bound.POSITIVE)
                 .filter(beta -> atLeastOne(f, beta));
         Optional<Reinforcement> reinforcement = f.fields("reinforcement", ReinforcementBinder.KEYS)
@@ -60,7 +67,7 @@ public final class PileCapBinder {
                 ? f.get("claims").flatMap(n -> new ClaimsBinder(values).read(n, f.path("claims"), PileCapChecks.CATALOGUE))
                 : Optional.of(ClaimsBinder.Claims.NONE);
 
-        List<String> missing = missing(f, actions);
+        List<String> missing = missing(f, actions, loads);
         if (values.problems().any()) {
             return Optional.empty();
         }
@@ -69,14 +76,34 @@ public final class PileCapBinder {
         }
         return Optional.of(new PileCap(id, description, f.location(), materials.orElseThrow(),
                 plan.orElseThrow().xMm(), plan.orElseThrow().yMm(), depth.orElseThrow(), castAgainst.orElseThrow(),
-                selfWeight.orElseThrow(), piles.orElseThrow(), column.orElseThrow(), actions.orElseThrow(),
-                reinforcement, claims.orElseThrow().method(), withBeta(claims.orElseThrow().claims(), punchingBeta, f)));
+                selfWeight.orElseThrow(), piles.orElseThrow(), column.orElseThrow(), actions.orElse(List.of()),
+                reinforcement, claims.orElseThrow().method(), withBeta(claims.orElseThrow().claims(), punchingBeta, f),
+                loads.orElseThrow()));
     }
 
-    private Optional<Plan> plan(Fields f) {
-        Optional<Double> x = f.requiredQuantity("x", Dimension.LENGTH, Bound.POSITIVE);
-        Optional<Double> y = f.requiredQuantity("y", Dimension.LENGTH, Bound.POSITIVE);
-        return x.flatMap(a -> y.map(b -> new Plan(a, b)));
+    /**
+     * {@code cast_against}: a plain value is the bottom face (the sides are then taken as formed), a
+     * mapping {@code {bottom, sides}} names each; absent, the bottom is on blinding.
+     */
+    private Optional<PileCap.Casting> casting(Fields f) {
+        Map<String, CastAgainst> all = Values.options(CastAgainst.values());
+        if (!f.has("cast_against")) {
+            return Optional.of(PileCap.Casting.bottomOnly(CastAgainst.BLINDING));
+        }
+        Optional<Node> node = f.get("cast_against");
+        if (node.isPresent() && !(node.get() instanceof Node.MapNode)) {
+            return values.choice(node.get(), f.path("cast_against"), "cast_against", all)
+                    .map(PileCap.Casting::bottomOnly);
+        }
+        return node.flatMap(n -> Fields.of(n, f.path("cast_against"), values, CASTING_KEYS)).flatMap(c -> {
+            Map<String, CastAgainst> sides = new LinkedHashMap<>(all);
+            sides.remove("blinding");
+            Optional<CastAgainst> bottom = c.choice("bottom", all, CastAgainst.BLINDING);
+            Optional<CastAgainst> side = c.has("sides")
+                    ? c.get("sides").flatMap(n -> values.choice(n, c.path("sides"), "cast_against.sides", sides))
+                    : Optional.of(CastAgainst.FORMWORK);
+            return bottom.flatMap(b -> side.map(sd -> new PileCap.Casting(b, sd, c.has("sides"))));
+        });
     }
 
     /** A stated {@code punching_beta} is the claim {@code punching-face.beta} (unless claimed there too). */
@@ -99,12 +126,16 @@ public final class PileCapBinder {
     }
 
     /** The items every check needs that the element does not give. */
-    private static List<String> missing(Fields f, Optional<List<ActionCase>> actions) {
+    private static List<String> missing(Fields f, Optional<List<ActionCase>> actions,
+                                        Optional<List<CharacteristicLoad>> loads) {
         List<String> missing = new ArrayList<>();
         for (String key : List.of("plan", "depth", "piles", "column")) {
             if (!f.has(key)) {
                 missing.add(key);
             }
+        }
+        if (loads.map(l -> !l.isEmpty()).orElse(false)) {
+            return missing;
         }
         if (!f.has("actions") || actions.map(List::isEmpty).orElse(false)) {
             missing.add("actions");

@@ -17,6 +17,9 @@ public final class PileCapChecks {
 
     /** The checks of a pile cap, in report order. */
     public static final CheckCatalogue CATALOGUE = CheckCatalogue.of(PileCap.TYPE, List.of(
+            new CheckSpec("combinations", "Combinations of actions from the characteristic loads",
+                    "EN 1990 6.4.3, 6.5.3, Annex A1", Kind.STRENGTH, List.of(demand("cases_generated", "-"),
+                            capacity("cases_given", "-"), demand("worst_increase", "-"))),
             new CheckSpec("pile-reactions", "Pile reactions, rigid cap", "linear distribution (common practice)",
                     Kind.STRENGTH, List.of(demand("max", "kN"), capacity("min", "kN"))),
             new CheckSpec("pile-reactions-deviation", "Pile reactions with piles off position",
@@ -62,16 +65,10 @@ public final class PileCapChecks {
                     Kind.DETAILING, List.of(demand("as_min", "mm2"), capacity("as_provided", "mm2"))),
             new CheckSpec("min-steel-y", "Minimum tie steel, bars parallel to y", "EN 1992-1-1 9.2.1.1, 9.8.1(3)",
                     Kind.DETAILING, List.of(demand("as_min", "mm2"), capacity("as_provided", "mm2"))),
-            new CheckSpec("max-steel", "Maximum steel", "EN 1992-1-1 9.2.1.1(3)",
-                    Kind.DETAILING, List.of(capacity("as_max", "mm2"), demand("as_provided", "mm2"))),
-            new CheckSpec("bar-spacing-x", "Bar spacing, bars parallel to x", "EN 1992-1-1 8.2",
-                    Kind.DETAILING, List.of(demand("spacing", "mm"), capacity("clear", "mm"), demand("min_clear", "mm"),
-                            capacity("max_spacing", "mm"))),
-            new CheckSpec("bar-spacing-y", "Bar spacing, bars parallel to y", "EN 1992-1-1 8.2",
-                    Kind.DETAILING, List.of(demand("spacing", "mm"), capacity("clear", "mm"), demand("min_clear", "mm"),
-                            capacity("max_spacing", "mm"))),
-            new CheckSpec("cover", "Concrete cover", "EN 1992-1-1 4.4.1",
-                    Kind.DETAILING, List.of(demand("required", "mm"), capacity("provided", "mm"))),
+            SharedDetailingChecks.MAX_STEEL,
+            SharedDetailingChecks.BAR_SPACING_X,
+            SharedDetailingChecks.BAR_SPACING_Y,
+            SharedDetailingChecks.COVER,
             new CheckSpec("anchorage-x", "Anchorage of the x ties beyond the piles", "EN 1992-1-1 8.4, 9.8.1(5)",
                     Kind.DETAILING, List.of(demand("lb_rqd", "mm"), demand("lbd", "mm"), capacity("available", "mm"))),
             new CheckSpec("anchorage-y", "Anchorage of the y ties beyond the piles", "EN 1992-1-1 8.4, 9.8.1(5)",
@@ -80,12 +77,8 @@ public final class PileCapChecks {
                     List.of(demand("lb_rqd", "mm"), demand("l0", "mm"), capacity("provided", "mm"))),
             new CheckSpec("lap-y", "Laps of the bottom y-bars", "EN 1992-1-1 8.7.3", Kind.DETAILING,
                     List.of(demand("lb_rqd", "mm"), demand("l0", "mm"), capacity("provided", "mm"))),
-            new CheckSpec("anchorage-starters", "Anchorage of the column starter bars in compression",
-                    "EN 1992-1-1 8.4",
-                    Kind.DETAILING, List.of(demand("lb_rqd", "mm"), demand("lbd", "mm"), capacity("available", "mm"))),
-            new CheckSpec("crack-control", "Crack control without direct calculation", "EN 1992-1-1 7.3.3",
-                    Kind.DETAILING, List.of(demand("sigma_s", "MPa"), capacity("phi_max", "mm"),
-                            capacity("s_max", "mm")))));
+            SharedDetailingChecks.ANCHORAGE_STARTERS,
+            SharedDetailingChecks.CRACK_CONTROL));
 
     private PileCapChecks() {
     }

@@ -1,7 +1,22 @@
 package dev.countercheck.submission;
 
+import dev.countercheck.submission.Values.Bound;
+
+import java.util.List;
+import java.util.Optional;
+
 /** A rectangular plan centred on the origin, mm: to test whether piles and columns stand on it. */
 record Plan(double xMm, double yMm) {
+
+    /** The keys of an element's {@code plan}. */
+    static final List<String> KEYS = List.of("x", "y");
+
+    /** The {@code plan} of an element: both sides required, each positive. */
+    static Optional<Plan> read(Fields f) {
+        Optional<Double> x = f.requiredQuantity("x", Dimension.LENGTH, Bound.POSITIVE);
+        Optional<Double> y = f.requiredQuantity("y", Dimension.LENGTH, Bound.POSITIVE);
+        return x.flatMap(a -> y.map(b -> new Plan(a, b)));
+    }
 
     boolean containsCentre(Point p) {
         return Math.abs(p.xMm()) <= xMm / 2 && Math.abs(p.yMm()) <= yMm / 2;

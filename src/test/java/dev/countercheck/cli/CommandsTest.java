@@ -7,9 +7,14 @@ import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
 
 import static dev.countercheck.cli.SampleSubmissionsTest.run;
 import static org.assertj.core.api.Assertions.assertThat;
@@ -155,12 +160,55 @@ class CommandsTest {
                 "2026-12-01", "--pdf");
         // harbour-lane has critical findings (its comment says so): exit 1.
         assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.FINDINGS);
-        assertThat(r.err()).contains("[1/2]").contains("[2/2]");
-        for (String base : new String[] {"harbour-lane", "quayside-annex"}) {
+        assertThat(r.err()).contains("[1/4]").contains("[2/4]").contains("[4/4]");
+        for (String base : new String[] {"harbour-lane", "mill-road-depot", "orchard-yard-pads", "quayside-annex"}) {
             assertThat(out.resolve(base + ".json")).isNotEmptyFile();
             assertThat(out.resolve(base + ".html")).isNotEmptyFile();
             assertThat(out.resolve(base + ".pdf")).isNotEmptyFile();
         }
-        assertThat(out.resolve("index.html")).content().contains("harbour-lane.html").contains("quayside-annex.html");
+        assertThat(out.resolve("index.html")).content().contains("harbour-lane.html").contains("mill-road-depot.html")
+                .contains("quayside-annex.html");
+    }
+
+    /** The combinations of the Mill Road sample: text by default, YAML items ready to paste as actions. */
+    @Test
+    void combinePrintsTheGeneratedCasesOfEachElement() {
+        SampleSubmissionsTest.Run text = run("combine", "sample-submissions/mill-road-depot.yaml");
+        assertThat(text.exit()).as(text.err()).isEqualTo(ExitCodes.OK);
+        assertThat(text.out()).contains("# PC-M1: ").contains("6.10 G sup + Q(B) lead + S ψ0 + W− ψ0")
+                .contains("sls-quasi-permanent");
+        SampleSubmissionsTest.Run yaml = run("combine", "sample-submissions/mill-road-depot.yaml", "--format", "yaml");
+        assertThat(yaml.exit()).isEqualTo(ExitCodes.OK);
+        // PC-M2's G 1650 alone by Exp. (6.10) with γG,sup 1.35: N = 2227.5 kN
+        assertThat(yaml.out()).contains("  - {name: \"6.10 G sup\", kind: uls, N: 2227.5, Mx: 0, My: 0, Hx: 0, Hy: 0}");
+    }
+
+    @Test
+    void thePdfCarriesTheJsonWrittenBesideItIsRepeatableUnderADateAndTheLineNamesEveryFile(@TempDir Path dir)
+            throws IOException {
+        Path first = Files.createDirectories(dir.resolve("first"));
+        Path second = Files.createDirectories(dir.resolve("second"));
+        SampleSubmissionsTest.Run r = run("review", "sample-submissions/quayside-annex.yaml", "--out", first.toString(),
+                "--date", "2026-12-01", "--pdf");
+        run("review", "sample-submissions/quayside-annex.yaml", "--out", second.toString(), "--date", "2026-12-01",
+                "--pdf");
+        assertThat(r.exit()).as(r.err()).isIn(ExitCodes.OK, ExitCodes.FINDINGS);
+        List<Path> written;
+        try (Stream<Path> files = Files.list(first)) {
+            written = files.sorted().toList();
+        }
+        assertThat(written).extracting(p -> p.getFileName().toString()).contains("quayside-annex.json",
+                "quayside-annex.html", "quayside-annex.pdf", "quayside-annex.responses.csv");
+        for (Path file : written) {
+            assertThat(r.out()).as("the output line names " + file).contains(file.toString());
+        }
+        byte[] pdf = Files.readAllBytes(first.resolve("quayside-annex.pdf"));
+        assertThat(Files.readAllBytes(second.resolve("quayside-annex.pdf"))).as("same bytes under --date").isEqualTo(pdf);
+        try (PDDocument document = Loader.loadPDF(pdf)) {
+            var attached = document.getDocumentCatalog().getNames().getEmbeddedFiles().getNames()
+                    .get("quayside-annex.json").getEmbeddedFile();
+            assertThat(attached.toByteArray()).as("the attachment is the JSON file, byte for byte")
+                    .isEqualTo(Files.readAllBytes(first.resolve("quayside-annex.json")));
+        }
     }
 }

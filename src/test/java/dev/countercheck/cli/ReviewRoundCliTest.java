@@ -22,7 +22,9 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 import static dev.countercheck.cli.SampleSubmissionsTest.run;
 import static org.assertj.core.api.Assertions.assertThat;
@@ -81,6 +83,24 @@ class ReviewRoundCliTest {
         assertThat(changeOf(html, disagreeing.get(1).findingId())).isEqualTo("changed");
         assertThat(changeOf(html, agreeing.findingId())).isEqualTo("new");
 
+        JsonNode revised = JSON.readTree(dir.resolve("r2/p02.json").toFile()).path("revision");
+        assertThat(revised.path("previous").asText()).isEqualTo("P01");
+        assertThat(revised.path("counts").toString()).isEqualTo("{\"closed\":1,\"still-open\":" + (before - 2)
+                + ",\"changed\":1,\"new\":1}");
+        Map<String, JsonNode> byId = new HashMap<>();
+        revised.path("findings").forEach(f -> byId.put(f.path("id").asText(), f));
+        JsonNode closed = byId.get(disagreeing.get(0).findingId().replace("\u200b", ""));
+        assertThat(closed.path("change").asText()).isEqualTo("closed");
+        assertThat(closed.has("before")).isTrue();
+        assertThat(closed.has("now")).as("a closed finding no longer stands").isFalse();
+        JsonNode changed = byId.get(disagreeing.get(1).findingId().replace("\u200b", ""));
+        assertThat(changed.path("change").asText()).isEqualTo("changed");
+        assertThat(changed.path("before").path("message").asText())
+                .isNotEqualTo(changed.path("now").path("message").asText());
+        assertThat(byId.get(agreeing.findingId().replace("\u200b", "")).path("change").asText()).isEqualTo("new");
+        assertThat(JSON.readTree(dir.resolve("r1/p01.json").toFile()).has("revision"))
+                .as("a review without --previous has no revision part").isFalse();
+
         SampleSubmissionsTest.Run compare = run("compare", dir.resolve("r1/p01.json").toString(),
                 dir.resolve("r2/p02.json").toString());
         assertThat(compare.exit()).isEqualTo(ExitCodes.OK);
@@ -127,6 +147,18 @@ class ReviewRoundCliTest {
                 .orElseThrow();
         assertThat(row.selectFirst("td.response").wholeText()).contains("agreed").contains(answer);
         assertThat(html.select("table.orphan-table td").eachText()).anyMatch(t -> t.contains("an answer to nothing"));
+
+        JsonNode responses = JSON.readTree(dir.resolve("r2/harbour-lane.json").toFile()).path("responses");
+        assertThat(responses.path("answered")).hasSize(1);
+        JsonNode answered = responses.path("answered").get(0);
+        assertThat(answered.path("finding").asText()).isEqualTo(rows.get(1).get(0));
+        assertThat(answered.path("status").asText()).isEqualTo("agreed");
+        assertThat(answered.path("response").asText()).as("kept whole: quotes, line break, non-ASCII").isEqualTo(answer);
+        JsonNode unmatched = responses.path("unmatched").get(0);
+        assertThat(unmatched.path("finding").asText()).isEqualTo("PC-Z9/tie-x/capacity");
+        assertThat(unmatched.path("where").asText()).endsWith("Sheet1!A" + rows.size());
+        assertThat(JSON.readTree(out.resolve("harbour-lane.json").toFile()).has("responses"))
+                .as("a review without --responses has no responses part").isFalse();
     }
 
     @Test

@@ -104,7 +104,46 @@ class SampleSubmissionsTest {
                 });
                 assertThat(matching).as(expectation).isNotEmpty();
             }
+            case "check" -> assertCheck(expectation, words, element(result, words[1]));
+            case "governing" -> assertThat(check(result, words[1], words[2]).path("governing_case").asText())
+                    .as(expectation).isEqualTo(expectation.split("\\s+", 4)[3]);
             default -> throw new AssertionError("unknown expectation: " + expectation);
+        }
+    }
+
+    /** Check {@code checkId} of element {@code elementId}. */
+    private static JsonNode check(JsonNode result, String elementId, String checkId) {
+        for (JsonNode c : element(result, elementId).get("checks")) {
+            if (c.get("id").asText().equals(checkId)) {
+                return c;
+            }
+        }
+        throw new AssertionError("no check " + checkId + " on " + elementId);
+    }
+
+    /**
+     * {@code check <element> <check> <status> [quantity=value[±tolerance]]...}: the check's status and values
+     * (a value without a tolerance to 0.05 %).
+     */
+    private static void assertCheck(String expectation, String[] words, JsonNode element) {
+        JsonNode check = null;
+        for (JsonNode c : element.get("checks")) {
+            if (c.get("id").asText().equals(words[2])) {
+                check = c;
+            }
+        }
+        assertThat(check).as(expectation + ": no such check").isNotNull();
+        assertThat(check.get("status").asText()).as(expectation + " " + check.path("reason").asText())
+                .isEqualTo(words[3]);
+        for (int i = 4; i < words.length; i++) {
+            String[] nameValue = words[i].split("=");
+            String[] valueTolerance = nameValue[1].split("±");
+            double expected = Double.parseDouble(valueTolerance[0]);
+            double tolerance = valueTolerance.length > 1 ? Double.parseDouble(valueTolerance[1]) : Math.abs(expected) * 5e-4;
+            JsonNode value = check.get("values").get(nameValue[0]);
+            assertThat(value).as(expectation + ": " + nameValue[0] + " computed").isNotNull();
+            assertThat(value.get("value").asDouble()).as(expectation + ": " + nameValue[0])
+                    .isCloseTo(expected, org.assertj.core.api.Assertions.within(tolerance));
         }
     }
 

@@ -28,7 +28,9 @@ import static org.assertj.core.api.Assertions.assertThat;
  * The report of every sample, and the index of all of them, opened in real headless Chromium
  * (Debian's {@code chromium}, which {@code .ci/run} installs): the page logs nothing to the console,
  * the browser's own DOM holds every element and every drawing, and a screenshot of the top of each
- * page is left under {@code target/screenshots/} for people to look at.
+ * page is left under {@code target/screenshots/} for people to look at, and so are page one of a
+ * sample's report and one of its elements on its own ({@code <sample>-page-one.png},
+ * {@code <sample>-element-<id>.png}).
  *
  * <p>Skipped, with the reason, where {@code /usr/bin/chromium} is absent.
  */
@@ -111,6 +113,37 @@ class ChromiumReportTest {
     }
 
     @Test
+    void pageOneAndOneElementAreKeptAsScreenshots() throws Exception {
+        Path sample = SampleReviews.samples().get(0);
+        Review review = SampleReviews.review(sample);
+        String name = SampleReviews.name(sample);
+        String html = new HtmlReportWriter().write(review);
+
+        // Page one: the top of the report in a window of about one printed page.
+        Path whole = PAGES.resolve(name + "-page-one.html");
+        Files.writeString(whole, html, StandardCharsets.UTF_8);
+        Opened pageOne = open(whole, name + "-page-one", "1280,1500");
+        assertThat(pageOne.console()).isEmpty();
+        assertScreenshot(pageOne.screenshot());
+
+        // One element: the page with only that element's section, as the report draws it.
+        ElementReview shown = review.elements().stream().filter(e -> e.drawing().isPresent()).findFirst()
+                .orElseThrow();
+        Document alone = Jsoup.parse(html);
+        Element section = alone.selectFirst("section.element[aria-label=" + shown.id() + "]");
+        alone.body().children().remove();
+        alone.body().appendChild(section);
+        Path element = PAGES.resolve(name + "-element.html");
+        Files.writeString(element, alone.outerHtml(), StandardCharsets.UTF_8);
+        Opened one = open(element, name + "-element-" + shown.id(), "1280,2400");
+        assertThat(one.console()).isEmpty();
+        assertThat(one.dom().select("section.element svg.drawing")).as("plan and section").hasSize(2);
+        assertScreenshot(one.screenshot());
+        assertThat(Files.readAllBytes(one.screenshot())).as("two different pictures")
+                .isNotEqualTo(Files.readAllBytes(pageOne.screenshot()));
+    }
+
+    @Test
     void consoleMessagesWouldBeCaught() throws Exception {
         // The control for the tests above: a page that does log must be seen to log.
         Path page = PAGES.resolve("console-control.html");
@@ -124,6 +157,11 @@ class ChromiumReportTest {
 
     /** Opens {@code page} once: the DOM as Chromium built it, its console lines, and a 1280 px wide screenshot. */
     private static Opened open(Path page, String name) throws IOException, InterruptedException {
+        return open(page, name, "1280,5200");
+    }
+
+    /** As {@link #open(Path, String)}, in a window of {@code size} ("width,height" in px). */
+    private static Opened open(Path page, String name, String size) throws IOException, InterruptedException {
         Path profile = Files.createTempDirectory("countercheck-chromium-");
         Path screenshot = SCREENSHOTS.resolve(name + ".png").toAbsolutePath();
         Path dom = PAGES.resolve(name + ".dom.html");
@@ -133,7 +171,7 @@ class ChromiumReportTest {
             Process chromium = new ProcessBuilder(CHROMIUM.toString(), "--headless", "--no-sandbox", "--disable-gpu",
                     "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update",
                     "--disable-sync", "--hide-scrollbars", "--user-data-dir=" + profile, "--enable-logging=stderr",
-                    "--v=0", "--window-size=1280,5200", "--screenshot=" + screenshot, "--dump-dom",
+                    "--v=0", "--window-size=" + size, "--screenshot=" + screenshot, "--dump-dom",
                     page.toAbsolutePath().toUri().toString())
                     .redirectOutput(dom.toFile())
                     .redirectError(log.toFile())

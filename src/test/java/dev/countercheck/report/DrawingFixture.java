@@ -57,7 +57,8 @@ final class DrawingFixture {
                 List.of(new BarSet(Direction.X, 4, 12, 1, BarEnds.STRAIGHT, Optional.empty(), Optional.empty())),
                 Optional.empty());
         return new PileCap(id, "Four-pile cap (invented)", new SourceLocation("fixture.yaml", 1, 1), materials,
-                PLAN_MM, PLAN_MM, 1000, PileCap.CastAgainst.BLINDING, PileCap.SelfWeight.ADD, piles, column,
+                PLAN_MM, PLAN_MM, 1000, PileCap.Casting.bottomOnly(PileCap.CastAgainst.BLINDING),
+                PileCap.SelfWeight.ADD, piles, column,
                 List.of(), Optional.of(reinforcement), PileCap.TieMethod.TRUSS, List.of());
     }
 

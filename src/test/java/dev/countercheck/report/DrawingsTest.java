@@ -1,5 +1,6 @@
 package dev.countercheck.report;
 
+import dev.countercheck.review.PadFootingDrawing;
 import dev.countercheck.review.PileCapDrawing;
 import dev.countercheck.review.ElementReview;
 import org.junit.jupiter.api.Test;
@@ -143,9 +144,15 @@ class DrawingsTest {
                 if (e.drawing().isEmpty()) {
                     continue;
                 }
-                DrawingMarks m = DrawingMarks.of(e, (PileCapDrawing) e.drawing().get());
-                for (String svg : List.of(PlanDrawing.svg("e", (PileCapDrawing) e.drawing().get(), m),
-                        SectionDrawing.svg("e", (PileCapDrawing) e.drawing().get(), m))) {
+                List<String> svgs;
+                if (e.drawing().get() instanceof PileCapDrawing cap) {
+                    DrawingMarks m = DrawingMarks.of(e, cap);
+                    svgs = List.of(PlanDrawing.svg("e", cap, m), SectionDrawing.svg("e", cap, m));
+                } else {
+                    HtmlModel.DrawingView pad = PadDrawing.view("e", (PadFootingDrawing) e.drawing().get());
+                    svgs = List.of(pad.plan(), pad.section());
+                }
+                for (String svg : svgs) {
                     assertInsideCanvas(e.id(), xml(svg));
                 }
             }

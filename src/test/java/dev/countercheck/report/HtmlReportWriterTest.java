@@ -97,8 +97,11 @@ class HtmlReportWriterTest {
         assertThat(footing.select("svg.drawing")).as("the pad footing of the fixture has no drawing").isEmpty();
         for (ElementReview e : review.elements()) {
             Element section = page.selectFirst("section.element[aria-label=" + e.id() + "]");
-            assertThat(section.select("div.check code").eachText()).containsAll(
-                    e.checks().stream().map(CheckResult::id).toList());
+            assertThat(section.select("table.checklist code").eachText()).as("the element lists its checks")
+                    .containsAll(e.checks().stream().map(CheckResult::id).toList());
+            Element appendix = page.getElementById("calc-" + section.id());
+            assertThat(appendix.select("div.check .check-title code").eachText()).as("their values in the appendix")
+                    .containsExactlyElementsOf(e.checks().stream().map(CheckResult::id).toList());
             assertThat(section.select("h4 + table.grid tbody tr td:first-child").eachText())
                     .containsExactlyElementsOf(e.findings().stream().map(Finding::id).toList());
         }

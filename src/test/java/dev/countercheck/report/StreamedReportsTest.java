@@ -56,6 +56,9 @@ class StreamedReportsTest {
 
         assertThat(Files.readString(dir.resolve("r.html"), StandardCharsets.UTF_8))
                 .isEqualTo(new HtmlReportWriter().write(review));
-        assertThat(Files.readAllBytes(dir.resolve("r.pdf"))).isEqualTo(new PdfReportWriter().write(review));
+        assertThat(Files.readString(dir.resolve("r.json"), StandardCharsets.UTF_8))
+                .isEqualTo(new JsonResultWriter().write(review));
+        assertThat(Files.readAllBytes(dir.resolve("r.pdf"))).isEqualTo(new PdfReportWriter()
+                .write(review, ReviewRound.none(""), "r.json", new JsonResultWriter().write(review)));
     }
 }

@@ -92,6 +92,36 @@ class RulesetLoaderTest {
     }
 
     @Test
+    void aRecalledValueIsMarkedAndAnOverrideStatesItsOwnSource(@TempDir Path dir) throws Exception {
+        Files.writeString(dir.resolve("base.yaml"), BASE.replace("note: steel}", "note: steel, source: from-memory}"));
+        Files.writeString(dir.resolve("annex.yaml"), """
+                ruleset: 1
+                id: annex
+                extends: base
+                title: Annex
+                parameters:
+                  gamma_c: {value: 1.4, clause: "NA 2.4.2.4", source: from-memory}
+                  gamma_s: {value: 1.15, clause: "NA 2.4.2.4", source: published}
+                """);
+        Ruleset base = loader(dir).load("base");
+        assertThat(base.parameter("gamma_s").source()).isEqualTo(ValueSource.FROM_MEMORY);
+        assertThat(base.parameter("gamma_c").source()).isEqualTo(ValueSource.STATED);
+        assertThat(base.parameter("gamma_s").asStep().remark()).hasValue(ValueSource.MARK);
+        Ruleset annex = loader(dir).load("annex");
+        assertThat(annex.parameter("gamma_s").source()).as("verified in the annex").isEqualTo(ValueSource.PUBLISHED);
+        assertThat(annex.recalled()).singleElement().satisfies(r -> assertThat(r).startsWith("gamma_c = 1.4 (NA"));
+    }
+
+    @Test
+    void anUnknownSourceIsLocated(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("base.yaml"), BASE.replace("note: steel}", "note: steel, source: memory}"));
+        assertThat(errors(dir, "base")).singleElement().satisfies(e -> {
+            assertThat(e.location().line()).as("the gamma_s line").isEqualTo(6);
+            assertThat(e.message()).contains("unknown source 'memory'").contains("from-memory");
+        });
+    }
+
+    @Test
     void overridingAParameterTheParentLacksIsLocatedWithASuggestion(@TempDir Path dir) throws IOException {
         Files.writeString(dir.resolve("base.yaml"), BASE);
         Files.writeString(dir.resolve("annex.yaml"), """

@@ -75,4 +75,27 @@ class PileGroupReactionsTest {
         assertThat(d.reactionsKn()).containsExactly(new double[] {1000, 1000, 1000}, within(1e-9));
         assertThat(d.unresistedKnm()).isCloseTo(45, within(1e-9));
     }
+
+    @Test
+    void theTraceDefinesTheSlopesOfTheReactionPlaneAndWritesEachReactionOutInNumbers() {
+        // Hand calculation (the four-pile group above): Σdx² = Σdy² = 4·0.6² = 1.44 m², Σdx·dy = 0;
+        // Mx* = 240 kNm, My* = 0: a = 0, b = 240/1.44 = 166.7 kN/m; P1 = 4000/4 + 0·(−0.6) + 166.7·(−0.6) = 900 kN.
+        List<PlanPoint> piles = List.of(new PlanPoint(-600, -600), new PlanPoint(600, -600), new PlanPoint(600, 600),
+                new PlanPoint(-600, 600));
+        Distribution d = PileGroupReactions.solve(piles, List.of(column(4000, 0, 0)), 240, 0);
+        List<dev.countercheck.eurocode.Step> trace = PileGroupReactions.trace(d, "ULS-1");
+        assertThat(trace).extracting(dev.countercheck.eurocode.Step::symbol).containsExactly("V (ULS-1)",
+                "Mx* (ULS-1)", "My* (ULS-1)", "a (ULS-1)", "b (ULS-1)", "P1 (ULS-1)", "P2 (ULS-1)", "P3 (ULS-1)",
+                "P4 (ULS-1)");
+        var a = trace.get(3);
+        var b = trace.get(4);
+        assertThat(a.formula()).as("a is defined where it first appears").startsWith("a: slope of the reactions along x");
+        assertThat(a.substituted()).contains("Σdx² = 1.44 m²", "Σdy² = 1.44 m²", "Mx* = 240 kNm");
+        assertThat(a.value()).isCloseTo(0, within(1e-9));
+        assertThat(b.value()).isCloseTo(166.6667, within(1e-3));
+        assertThat(b.unit()).isEqualTo("kN/m");
+        var p1 = trace.get(5);
+        assertThat(p1.substituted()).isEqualTo("4000/4 + 0·(-0.6) + 166.7·(-0.6)");
+        assertThat(p1.value()).isCloseTo(900, within(1e-9));
+    }
 }

@@ -20,6 +20,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 class CheckCatalogueDocsTest {
 
     static final Path PAGE = Path.of("docs/pile-cap.md");
+    static final Path PAD_PAGE = Path.of("docs/pad-footing.md");
     static final String START = "<!-- generated from the check catalogue: do not edit by hand (CheckCatalogueDocsTest) -->\n";
     static final String END = "<!-- end of generated part -->\n";
 
@@ -44,26 +45,39 @@ class CheckCatalogueDocsTest {
 
     @Test
     void theClaimsTableOfThePileCapPageIsTheCatalogue() throws IOException {
-        String page = Files.readString(PAGE, StandardCharsets.UTF_8);
+        assertTableIsTheCatalogue(PAGE, PileCapChecks.CATALOGUE);
+    }
+
+    @Test
+    void theClaimsTableOfThePadFootingPageIsTheCatalogue() throws IOException {
+        assertTableIsTheCatalogue(PAD_PAGE, PadFootingChecks.CATALOGUE);
+    }
+
+    private static void assertTableIsTheCatalogue(Path file, CheckCatalogue catalogue) throws IOException {
+        String page = Files.readString(file, StandardCharsets.UTF_8);
         int start = page.indexOf(START);
         int end = page.indexOf(END);
         assertThat(start).as("the page marks its generated part").isNotNegative();
         assertThat(end).isGreaterThan(start);
-        String generated = table(PileCapChecks.CATALOGUE);
+        String generated = table(catalogue);
         String expected = page.substring(0, start + START.length()) + generated + page.substring(end);
         if (Boolean.getBoolean("countercheck.writeDocs")) {
-            Files.writeString(PAGE, expected, StandardCharsets.UTF_8);
+            Files.writeString(file, expected, StandardCharsets.UTF_8);
         }
-        assertThat(page).as("docs/pile-cap.md is behind the check catalogue: rerun this test with "
+        assertThat(page).as(file + " is behind the check catalogue: rerun this test with "
                 + "-Dcountercheck.writeDocs=true").isEqualTo(expected);
     }
 
     @Test
     void everyCheckOfThePageIsInTheCatalogueAndEveryCatalogueCheckHasASection() throws IOException {
-        String page = Files.readString(PAGE, StandardCharsets.UTF_8);
-        String prose = page.substring(0, page.indexOf(START));
-        for (String id : PileCapChecks.CATALOGUE.checks().keySet()) {
-            assertThat(prose).as("a method section names " + id).containsPattern("### [^\\n]*\\b" + id + "\\b");
+        for (var page : java.util.Map.of(PAGE, PileCapChecks.CATALOGUE, PAD_PAGE, PadFootingChecks.CATALOGUE)
+                .entrySet()) {
+            String text = Files.readString(page.getKey(), StandardCharsets.UTF_8);
+            String prose = text.substring(0, text.indexOf(START));
+            for (String id : page.getValue().checks().keySet()) {
+                assertThat(prose).as(page.getKey() + ": a method section names " + id)
+                        .containsPattern("### [^\\n]*\\b" + id + "\\b");
+            }
         }
     }
 }

@@ -67,7 +67,8 @@ class SubmissionReaderTest {
         assertThat(cap.planXMm()).isEqualTo(4200);
         assertThat(cap.planYMm()).as("\"2.7 m\": hand calculation 2.7 × 1000 = 2700 mm").isEqualTo(2700, within(1e-9));
         assertThat(cap.depthMm()).isEqualTo(1300);
-        assertThat(cap.castAgainst()).isEqualTo(CastAgainst.SOIL);
+        assertThat(cap.castAgainst()).as("a plain cast_against is the bottom face; the sides are taken as formed")
+                .isEqualTo(new PileCap.Casting(CastAgainst.SOIL, CastAgainst.FORMWORK, false));
         assertThat(cap.selfWeight()).isEqualTo(SelfWeight.ADD);
         assertThat(cap.claims()).as("punching_beta is the claim punching-face.beta")
                 .anyMatch(c -> c.checkId().equals("punching-face") && c.quantity().equals("beta") && c.value() == 1.15);
@@ -127,11 +128,24 @@ class SubmissionReaderTest {
     }
 
     @Test
+    void readsWhatEachFaceIsCastAgainst(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("faces.yaml");
+        String text = Files.readString(GOOD.resolve("harbour-lane.yaml"), StandardCharsets.UTF_8);
+        assertThat(text).contains("cast_against: soil");
+        Files.writeString(file, text.replace("cast_against: soil", "cast_against: {bottom: blinding, sides: soil}"),
+                StandardCharsets.UTF_8);
+
+        PileCap cap = pileCap(reader.read(file), 0);
+
+        assertThat(cap.castAgainst()).isEqualTo(new PileCap.Casting(CastAgainst.BLINDING, CastAgainst.SOIL, true));
+    }
+
+    @Test
     void appliesTheDefaultsOfTheFormat() throws Exception {
         PileCap cap = pileCap(readGood("harbour-lane.yaml"), 1);
 
         assertThat(cap.description()).as("description is optional").isEmpty();
-        assertThat(cap.castAgainst()).as("cast_against defaults to blinding").isEqualTo(CastAgainst.BLINDING);
+        assertThat(cap.castAgainst().bottom()).as("cast_against defaults to blinding").isEqualTo(CastAgainst.BLINDING);
         assertThat(cap.selfWeight()).as("self_weight defaults to add").isEqualTo(SelfWeight.ADD);
         assertThat(cap.claims()).as("no punching_beta, no β claim").noneMatch(c -> c.quantity().equals("beta")
                 && c.checkId().equals("punching-face"));

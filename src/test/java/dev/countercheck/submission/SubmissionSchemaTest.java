@@ -68,12 +68,17 @@ class SubmissionSchemaTest {
         m.put("/properties/basis", new KeyList(SubmissionBinder.class, "BASIS_KEYS"));
         m.put("/$defs/materials", new KeyList(MaterialsBinder.class, "KEYS"));
         m.put("/$defs/pile-cap", new KeyList(PileCapBinder.class, "KEYS"));
-        m.put("/$defs/pile-cap/properties/plan", new KeyList(PileCapBinder.class, "PLAN_KEYS"));
+        m.put("/$defs/pile-cap/properties/plan", new KeyList(Plan.class, "KEYS"));
+        m.put("/$defs/pad-footing", new KeyList(PadFootingBinder.class, "KEYS"));
+        m.put("/$defs/pad-footing/properties/plan", new KeyList(Plan.class, "KEYS"));
+        m.put("/$defs/pad-footing/properties/soil", new KeyList(PadFootingBinder.class, "SOIL_KEYS"));
+        m.put("/$defs/casting", new KeyList(PileCapBinder.class, "CASTING_KEYS"));
         m.put("/$defs/piles", new KeyList(PileGroupBinder.class, "KEYS"));
         m.put("/$defs/piles/properties/capacity", new KeyList(PileGroupBinder.class, "CAPACITY_KEYS"));
         m.put("/$defs/column", new KeyList(ColumnBinder.class, "KEYS"));
         m.put("/$defs/column/properties/starter_bars", new KeyList(ColumnBinder.class, "STARTER_KEYS"));
         m.put("/$defs/action", new KeyList(ActionsBinder.class, "KEYS"));
+        m.put("/$defs/load", new KeyList(LoadsBinder.class, "KEYS"));
         m.put("/$defs/reinforcement", new KeyList(ReinforcementBinder.class, "KEYS"));
         m.put("/$defs/reinforcement/properties/cover", new KeyList(ReinforcementBinder.class, "COVER_KEYS"));
         m.put("/$defs/reinforcement/properties/sides", new KeyList(ReinforcementBinder.class, "SIDE_KEYS"));
@@ -83,7 +88,7 @@ class SubmissionSchemaTest {
     }
 
     private static final List<Class<?>> BINDERS = List.of(SubmissionBinder.class, MaterialsBinder.class,
-            PileCapBinder.class, PileGroupBinder.class, ColumnBinder.class, ActionsBinder.class,
+            PileCapBinder.class, PadFootingBinder.class, Plan.class, PileGroupBinder.class, ColumnBinder.class, ActionsBinder.class, LoadsBinder.class,
             ReinforcementBinder.class, ClaimsBinder.class);
 
     @Test
@@ -107,7 +112,8 @@ class SubmissionSchemaTest {
                 }
             }
         }
-        assertThat(MAPPINGS.values()).as("every key list of a binder is mapped to the schema")
+        // A shared key list (a plan) may stand at several places in the schema.
+        assertThat(Set.copyOf(MAPPINGS.values())).as("every key list of a binder is mapped to the schema")
                 .containsExactlyInAnyOrderElementsOf(declared);
 
         List<String> schemaMappings = new ArrayList<>();
@@ -123,32 +129,45 @@ class SubmissionSchemaTest {
         choices.put("/$defs/materials/properties/concrete", ((Map<?, ?>) staticField(MaterialsBinder.class, "CLASSES")).keySet());
         choices.put("/$defs/materials/properties/exposure/items", ((Map<?, ?>) staticField(MaterialsBinder.class, "EXPOSURE")).keySet());
         choices.put("/$defs/materials/properties/structural_class", ((Map<?, ?>) staticField(MaterialsBinder.class, "STRUCTURAL")).keySet());
-        choices.put("/$defs/pile-cap/properties/cast_against", Values.options(CastAgainst.values()).keySet());
+        choices.put("/$defs/pile-cap/properties/cast_against/anyOf/0", Values.options(CastAgainst.values()).keySet());
+        choices.put("/$defs/casting/properties/bottom", Values.options(CastAgainst.values()).keySet());
+        choices.put("/$defs/casting/properties/sides", List.of("soil", "formwork"));
+        choices.put("/$defs/pad-footing/properties/cast_against", Values.options(CastAgainst.values()).keySet());
         choices.put("/$defs/pile-cap/properties/self_weight", Values.options(SelfWeight.values()).keySet());
         choices.put("/$defs/column/properties/shape", Values.options(ColumnShape.values()).keySet());
         choices.put("/$defs/action/properties/kind", Values.options(Kind.values()).keySet());
+        choices.put("/$defs/load/properties/source", ((Map<?, ?>) staticField(LoadsBinder.class, "SOURCES")).keySet());
+        choices.put("/$defs/load/properties/category", ((Map<?, ?>) staticField(LoadsBinder.class, "CATEGORIES")).keySet());
         choices.put("/$defs/bar-set/properties/direction", Values.options(Direction.values()).keySet());
         choices.put("/$defs/bar-set/properties/ends", Values.options(BarEnds.values()).keySet());
         choices.put("/$defs/claims/properties/method", Values.options(TieMethod.values()).keySet());
         choices.forEach((pointer, expected) -> assertThat(texts(schema.at(pointer).get("enum"))).as(pointer)
                 .containsExactlyElementsOf(expected.stream().map(String::valueOf).toList()));
 
-        assertThat(schema.at("/$defs/pile-cap/properties/type/const").asText())
-                .as("the element types the reader supports")
-                .isEqualTo(String.join(",", ElementKinds.binders().stream().map(ElementBinder::type).toList()));
-        assertThat(schema.at("/properties/elements/items/$ref").asText()).isEqualTo("#/$defs/pile-cap");
+        List<String> kinds = new ArrayList<>();
+        schema.at("/properties/elements/items/oneOf").forEach(ref -> kinds.add(schema.at(ref.get("$ref").asText()
+                .substring(1) + "/properties/type/const").asText()));
+        assertThat(kinds).as("the element types the reader supports, one definition each")
+                .containsExactlyElementsOf(ElementKinds.binders().stream().map(ElementBinder::type).toList());
         assertThat(schema.at("/properties/countercheck/const").asInt()).isEqualTo(SubmissionBinder.FORMAT_VERSION);
-        assertThat(schema.at("/$defs/pile-cap/properties/id/pattern").asText())
-                .isEqualTo("^" + staticField(SubmissionBinder.class, "ID") + "$");
+        for (String kind : kinds) {
+            assertThat(schema.at("/$defs/" + kind + "/properties/id/pattern").asText())
+                    .isEqualTo("^" + staticField(SubmissionBinder.class, "ID") + "$");
+        }
     }
 
     @Test
     void claimsAreTheCataloguesChecksAndQuantitiesInTheirUnits() {
-        JsonNode claims = schema.at("/$defs/claims/properties");
-        Map<String, CheckSpec> checks = PileCapChecks.CATALOGUE.checks();
+        assertClaims("/$defs/claims/properties", PileCapChecks.CATALOGUE, Set.of("method"));
+        assertClaims("/$defs/claims-pad-footing/properties", PadFootingChecks.CATALOGUE, Set.of());
+    }
+
+    private void assertClaims(String pointer, CheckCatalogue catalogue, Set<String> others) {
+        JsonNode claims = schema.at(pointer);
+        Map<String, CheckSpec> checks = catalogue.checks();
         Set<String> expected = new TreeSet<>(checks.keySet());
-        expected.add("method");
-        assertThat(new TreeSet<>(names(claims))).isEqualTo(expected);
+        expected.addAll(others);
+        assertThat(new TreeSet<>(names(claims))).as(pointer).isEqualTo(expected);
         checks.values().forEach(check -> {
             JsonNode quantities = claims.get(check.id()).get("properties");
             assertThat(names(quantities)).as(check.id())
@@ -179,6 +198,7 @@ class SubmissionSchemaTest {
         limits.put("/properties/elements/maxItems", Limits.ELEMENTS);
         limits.put("/$defs/piles/properties/positions/maxItems", Limits.PILES);
         limits.put("/$defs/pile-cap/properties/actions/maxItems", Limits.ACTION_CASES);
+        limits.put("/$defs/pad-footing/properties/actions/maxItems", Limits.ACTION_CASES);
         limits.put("/$defs/reinforcement/properties/bottom/maxItems", Limits.BAR_SETS);
         limits.put("/$defs/reinforcement/properties/top/maxItems", Limits.BAR_SETS);
         limits.put("/$defs/bar-set/properties/count/maximum", Limits.BARS_IN_A_SET);

@@ -40,6 +40,8 @@ final class DeviationCheck {
         String where = "";
         double least = Double.POSITIVE_INFINITY;
         String whereLeast = "";
+        String worstCase = "";
+        String leastCase = "";
         double nominalMax = Double.NEGATIVE_INFINITY;
         for (UlsCase u : ctx.uls) {
             nominalMax = Math.max(nominalMax, u.withSelfWeight().max());
@@ -50,18 +52,20 @@ final class DeviationCheck {
                     Point p = nominal.get(moved);
                     shifted.set(moved, new Point(p.xMm() + delta.value() * Math.cos(angle),
                             p.yMm() + delta.value() * Math.sin(angle)));
-                    double[] r = ctx.reactions(shifted, u.action(), ctx.gammaGSup()).reactionsKn();
-                    double[] rInf = ctx.reactions(shifted, u.action(), ctx.gammaGInf()).reactionsKn();
+                    double[] r = ctx.reactions(shifted, u.action(), ctx.gammaSup(u.action())).reactionsKn();
+                    double[] rInf = ctx.reactions(shifted, u.action(), ctx.gammaInf(u.action())).reactionsKn();
                     for (int i = 0; i < r.length; i++) {
                         String at = "pile " + (i + 1) + " in " + u.action().name() + " when pile " + (moved + 1)
                                 + " is " + Num.f(delta.value()) + " mm off position at " + (45 * dir) + "° from +x";
                         if (r[i] > worst) {
                             worst = r[i];
                             where = at;
+                            worstCase = u.action().name();
                         }
                         if (rInf[i] < least) {
                             least = rInf[i];
                             whereLeast = at;
+                            leastCase = u.action().name();
                         }
                     }
                 }
@@ -72,6 +76,7 @@ final class DeviationCheck {
         b.value("min", Step.of("P,min,δ", "min P_i with one pile off position by δ (own weight × γG,inf)",
                 whereLeast, least, "kN", BASIS));
         double rc = ctx.cap.piles().compressionKn();
+        b.governing(least < 0 && -least / ctx.cap.piles().tensionKn() > worst / rc ? leastCase : worstCase);
         b.require(worst, rc, FindingKind.CAPACITY, "capacity", capitalised(where) + " carries " + Num.f(worst)
                 + " kN, more than its design resistance " + Num.f(rc) + " kN.");
         if (least < 0) {

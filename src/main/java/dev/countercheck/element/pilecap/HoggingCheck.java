@@ -1,5 +1,9 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
+import dev.countercheck.element.Section;
+import dev.countercheck.element.StressBlock;
+
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Bending;
 import dev.countercheck.eurocode.Num;
@@ -29,7 +33,7 @@ final class HoggingCheck {
     }
 
     /** The governing side: moment (kNm), its substituted terms, case and γG. */
-    private record Side(double momentKnm, String terms, String caseName) {
+    private record Side(double momentKnm, String terms, String caseName, String action) {
     }
 
     static CheckOutcome run(PileCapContext ctx, Axis axis) {
@@ -38,6 +42,7 @@ final class HoggingCheck {
         if (worst == null) {
             return b.notApplicable("no pile is in tension in any ULS case (own weight × γG,sup or γG,inf)").build();
         }
+        b.governing(worst.action);
         if (ctx.cap.reinforcement().isEmpty()) {
             return b.notChecked("no reinforcement given: the top steel and its depth are unknown").build();
         }
@@ -51,16 +56,16 @@ final class HoggingCheck {
         List<BarSet> sets = top.stream().filter(s -> s.direction() == axis.bars()).toList();
         double phi1 = top.stream().filter(s -> s.layer() == 1).mapToDouble(BarSet::diameterMm).max()
                 .orElse(top.stream().mapToDouble(BarSet::diameterMm).max().orElse(0));
-        Step d = b.trace(CapSection.depth("d,top", sets, ctx.cap.depthMm(), r.cover().topMm(), phi1));
+        Step d = b.trace(Section.depth("d,top", sets, ctx.cap.depthMm(), r.cover().topMm(), phi1));
         b.trace(ctx.fyd);
         Step moment = b.value("moment", Step.of("M,hog", "Σ |P_i|·l_i + γG·γconc·b·h·L²/2 (tension side)",
                 worst.terms + " (" + worst.caseName + ")", worst.momentKnm, "kNm", "EN 1992-1-1 6.1"));
-        double width = axis.capWidth(ctx.cap);
+        double width = axis.width(ctx.cap);
         double as = sets.stream().mapToDouble(BarSet::areaMm2).sum();
         Step provided = b.value("as_provided", Step.of("As,top", "Σ n·π·φ²/4 (top bars)", sets.isEmpty() ? "no bars"
                 : String.join(" + ", sets.stream().map(s -> s.count() + "·π·" + Num.f(s.diameterMm()) + "²/4")
                 .toList()), as, "mm2", "bar areas"));
-        Optional<Step> lever = StressBlock.leverArm(ctx, b, moment.value(), width, d.value(),
+        Optional<Step> lever = StressBlock.leverArm(ctx.rules, ctx.fck.value(), b, moment.value(), width, d.value(),
                 " for the hogging moment");
         if (lever.isEmpty()) {
             return b.build();
@@ -82,10 +87,11 @@ final class HoggingCheck {
         for (UlsCase u : ctx.uls) {
             for (boolean sup : new boolean[] {true, false}) {
                 Distribution dist = sup ? u.withSelfWeight() : u.withFavourableSelfWeight();
-                double gamma = sup ? ctx.gammaGSup() : ctx.gammaGInf();
-                String caseName = u.action().name() + (ctx.addsSelfWeight() ? (sup ? ", γG,sup" : ", γG,inf") : "");
+                double gamma = sup ? ctx.gammaSup(u.action()) : ctx.gammaInf(u.action());
+                String caseName = u.action().name() + (ctx.addsSelfWeight() && !u.action().generated()
+                        ? (sup ? ", γG,sup" : ", γG,inf") : "");
                 for (int sign : new int[] {1, -1}) {
-                    Side side = side(ctx, axis, sign, dist.reactionsKn(), gamma, caseName);
+                    Side side = side(ctx, axis, sign, dist.reactionsKn(), gamma, caseName, u.action().name());
                     if (side != null && (best == null || side.momentKnm > best.momentKnm)) {
                         best = side;
                     }
@@ -96,7 +102,8 @@ final class HoggingCheck {
     }
 
     /** One side of one distribution, or null when no pile beyond the face on that side is in tension. */
-    private static Side side(PileCapContext ctx, Axis axis, int sign, double[] p, double gamma, String caseName) {
+    private static Side side(PileCapContext ctx, Axis axis, int sign, double[] p, double gamma, String caseName,
+                             String action) {
         double face = axis.along(ctx.cap.column().position()) + sign * axis.columnHalf(ctx.cap.column());
         List<Point> piles = ctx.cap.piles().positions();
         double sum = 0;
@@ -112,14 +119,14 @@ final class HoggingCheck {
             return null;
         }
         if (ctx.addsSelfWeight()) {
-            double length = Math.max(0, axis.capLength(ctx.cap) / 2 - sign * face);
-            double perMetre = gamma * ctx.rules.number("concrete_unit_weight") * axis.capWidth(ctx.cap) / 1000
+            double length = Math.max(0, axis.length(ctx.cap) / 2 - sign * face);
+            double perMetre = gamma * ctx.rules.number("concrete_unit_weight") * axis.width(ctx.cap) / 1000
                     * ctx.cap.depthMm() / 1000;
             sum += perMetre * Math.pow(length / 1000, 2) / 2;
             terms.add(Num.f(gamma) + "·" + Num.f(ctx.rules.number("concrete_unit_weight")) + "·"
-                    + Num.f(axis.capWidth(ctx.cap) / 1000) + "·" + Num.f(ctx.cap.depthMm() / 1000) + "·"
+                    + Num.f(axis.width(ctx.cap) / 1000) + "·" + Num.f(ctx.cap.depthMm() / 1000) + "·"
                     + Num.f(length / 1000) + "²/2");
         }
-        return new Side(sum, String.join(" + ", terms), caseName);
+        return new Side(sum, String.join(" + ", terms), caseName, action);
     }
 }

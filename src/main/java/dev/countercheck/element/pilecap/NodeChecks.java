@@ -8,12 +8,16 @@ import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.FindingKind;
+import dev.countercheck.ruleset.RuleOption;
 import dev.countercheck.submission.Column;
 import dev.countercheck.statics.PileGroupReactions;
 import dev.countercheck.submission.Point;
 
 /** {@code node-column} and {@code node-pile}: node stresses of the strut-and-tie model (6.5.4). */
 final class NodeChecks {
+
+    /** The choice of {@code node_column_basis} that bears the column node as a partially loaded area. */
+    static final String PARTIALLY_LOADED = "partially-loaded-area";
 
     private NodeChecks() {
     }
@@ -39,6 +43,7 @@ final class NodeChecks {
         double side = Math.sqrt(c.areaMm2());
         Step worst = null;
         Step worstArea = null;
+        String worstCase = "";
         for (UlsCase u : ctx.uls) {
             double n = u.action().nKn();
             if (n <= 0) {
@@ -63,14 +68,19 @@ final class NodeChecks {
             if (worst == null || stress.value() > worst.value()) {
                 worst = stress;
                 worstArea = aEff;
+                worstCase = u.action().name();
             }
         }
         if (worst == null) {
             return b.notApplicable("no ULS case presses the column onto the cap").build();
         }
         b.trace(worstArea);
+        b.governing(worstCase);
         Step stress = b.value("stress", worst);
-        Step limit = b.value("limit", limit(ctx, b, NodeType.CCC, "node_k1"));
+        RuleOption basis = ctx.rules.option(PileCapReviewer.NODE_COLUMN_BASIS);
+        Step limit = b.value("limit", (PARTIALLY_LOADED.equals(basis.value())
+                ? partiallyLoaded(ctx, b, area) : limit(ctx, b, NodeType.CCC, "node_k1"))
+                .remarked(basis.name() + ": " + basis.value() + " (" + basis.origin() + ")"));
         b.require(stress.value(), limit.value(), FindingKind.CAPACITY, "capacity", "Column node stress " + Num.f(stress.value())
                 + " MPa exceeds σRd,max = " + Num.f(limit.value()) + " MPa.");
         return b.build();
@@ -80,6 +90,8 @@ final class NodeChecks {
         CheckBuilder b = Checks.builder("node-pile");
         int n = ctx.cap.piles().count();
         double pMax = maxReaction(ctx);
+        ctx.uls.stream().filter(u -> u.withSelfWeight().max() == pMax).findFirst()
+                .ifPresent(u -> b.governing(u.action().name()));
         double phi = ctx.cap.piles().diameterMm();
         Step area = b.trace(Step.of("Ap", "π·φ²/4", "π·" + Num.f(phi) + "²/4", Math.PI * phi * phi / 4, "mm2",
                 "circular pile head"));
@@ -106,6 +118,30 @@ final class NodeChecks {
             }
         }
         return b.build();
+    }
+
+    /**
+     * The column node's limit as a partially loaded area (6.7(2)): Ac1 is the column's section scaled about
+     * its centre as far as it fits in the plan and within the depth rule of Figure 6.29 (b2 − b1 ≤ h and
+     * d2 − d1 ≤ h).
+     */
+    private static Step partiallyLoaded(PileCapContext ctx, CheckBuilder b, Step ac0) {
+        Column c = ctx.cap.column();
+        double h = ctx.cap.depthMm();
+        double toEdgeX = ctx.cap.planXMm() / 2 - Math.abs(c.position().xMm());
+        double toEdgeY = ctx.cap.planYMm() / 2 - Math.abs(c.position().yMm());
+        boolean circular = c.shape() == Column.ColumnShape.CIRCULAR;
+        double scale = circular
+                ? Math.min(2 * Math.min(toEdgeX, toEdgeY) / c.cxMm(), 1 + h / c.cxMm())
+                : Math.min(Math.min(2 * toEdgeX / c.cxMm(), 2 * toEdgeY / c.cyMm()),
+                        Math.min(1 + h / c.cxMm(), 1 + h / c.cyMm()));
+        Step ac1 = b.trace(Step.of("Ac1", circular
+                        ? "λ²·Ac0, λ = min(2·e,min/D; 1 + h/D)"
+                        : "λ²·Ac0, λ = min(2·ex,edge/cx; 2·ey,edge/cy; 1 + h/cx; 1 + h/cy)",
+                "λ = " + Num.f(scale) + " (e,edge " + Num.f(toEdgeX) + ", " + Num.f(toEdgeY) + " mm; h " + Num.f(h)
+                        + " mm)", scale * scale * ac0.value(), "mm2", "EN 1992-1-1 6.7(2), (3), Figure 6.29"));
+        b.trace(ctx.fcd);
+        return Nodes.partiallyLoadedLimit(ctx.fcd.value(), ac1.value(), ac0.value());
     }
 
     private static Step limit(PileCapContext ctx, CheckBuilder b, NodeType type, String kParameter) {

@@ -1,5 +1,8 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
+import dev.countercheck.element.PlanGeometry;
+import dev.countercheck.element.Section;
 import dev.countercheck.statics.PileGroupReactions;
 import dev.countercheck.statics.PileGroupReactions.Distribution;
 import dev.countercheck.statics.PileGroupReactions.Load;
@@ -34,7 +37,7 @@ final class PileCapContext {
 
     final PileCap cap;
     final Ruleset rules;
-    final Optional<CapSection> section;
+    final Optional<Section> section;
     final List<UlsCase> uls;
     final Step selfWeight;
     final Step fck;
@@ -42,13 +45,15 @@ final class PileCapContext {
     final Step fctk005;
     final Step fcd;
     final Step fcdShear;
+    /** fck as the shear resistance of concrete takes it (limited by the ruleset's fck_max_shear). */
+    final Step fckShear;
     final Step fctd;
     final Step fyd;
 
     PileCapContext(PileCap cap, Ruleset rules) {
         this.cap = cap;
         this.rules = rules;
-        this.section = CapSection.of(cap);
+        this.section = Section.of(cap.reinforcement(), cap.depthMm());
         double fckMpa = cap.materials().fckMpa();
         this.fck = Step.of("fck", "characteristic cylinder strength",
                 cap.materials().concreteClass().orElse("fck given"), fckMpa, "MPa", "EN 1992-1-1 Table 3.1");
@@ -57,6 +62,7 @@ final class PileCapContext {
         double gammaC = rules.number("gamma_c");
         this.fcd = Materials.fcd(rules.number("alpha_cc"), fckMpa, gammaC);
         this.fcdShear = Materials.fcd(rules.number("alpha_cc_shear"), fckMpa, gammaC);
+        this.fckShear = Materials.fckShear(fckMpa, rules.number("fck_max_shear"), clauseOf("fck_max_shear"));
         this.fctd = Materials.fctd(rules.number("alpha_ct"), fctk005.value(), gammaC);
         this.fyd = Materials.fyd(cap.materials().fykMpa(), rules.number("gamma_s"));
         double weight = rules.number("concrete_unit_weight") * cap.planXMm() * cap.planYMm() * cap.depthMm() / 1e9;
@@ -66,8 +72,8 @@ final class PileCapContext {
         List<UlsCase> cases = new ArrayList<>();
         for (ActionCase a : cap.actions()) {
             if (a.kind() == ActionCase.Kind.ULS) {
-                cases.add(new UlsCase(a, reactions(a, addsSelfWeight()), reactions(a, false),
-                        reactions(cap.piles().positions(), a, gammaGInf())));
+                cases.add(new UlsCase(a, reactions(cap.piles().positions(), a, gammaSup(a)), reactions(a, false),
+                        reactions(cap.piles().positions(), a, gammaInf(a))));
             }
         }
         this.uls = List.copyOf(cases);
@@ -97,6 +103,16 @@ final class PileCapContext {
         return rules.number("gamma_g_inf");
     }
 
+    /** The factor on the own weight where it adds to the effect: a generated case's own γG, else γG,sup. */
+    double gammaSup(ActionCase a) {
+        return a.selfWeightFactor().orElse(gammaGSup());
+    }
+
+    /** The factor on the own weight where it relieves the effect: a generated case's own γG, else γG,inf. */
+    double gammaInf(ActionCase a) {
+        return a.selfWeightFactor().orElse(gammaGInf());
+    }
+
     Distribution reactions(ActionCase a, boolean withSelfWeight) {
         return reactions(cap.piles().positions(), a, withSelfWeight);
     }
@@ -115,21 +131,13 @@ final class PileCapContext {
      */
     Distribution reactions(List<Point> piles, ActionCase a, double gammaG) {
         List<Load> loads = new ArrayList<>();
-        loads.add(new Load("N", a.nKn(), plan(cap.column().position())));
+        loads.add(new Load("N", a.nKn(), PlanGeometry.point(cap.column().position())));
         if (gammaG > 0 && addsSelfWeight()) {
             loads.add(new Load("γG·Wcap", factoredSelfWeightKn(gammaG), new PlanPoint(0, 0)));
         }
         double h = cap.depthMm() / 1000.0;
-        return PileGroupReactions.solve(plan(piles), loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h,
-                PileGroupReactions.lineOf(plan(cap.piles().positions())));
-    }
-
-    private static PlanPoint plan(Point p) {
-        return new PlanPoint(p.xMm(), p.yMm());
-    }
-
-    private static List<PlanPoint> plan(List<Point> points) {
-        return points.stream().map(PileCapContext::plan).toList();
+        return PileGroupReactions.solve(PlanGeometry.points(piles), loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h,
+                PileGroupReactions.lineOf(PlanGeometry.points(cap.piles().positions())));
     }
 
     /**

@@ -36,6 +36,11 @@ public final class PileCapKind implements ElementKind<PileCap> {
     }
 
     @Override
+    public java.util.Map<String, List<String>> options() {
+        return PileCapReviewer.OPTIONS;
+    }
+
+    @Override
     public List<String> assumptions() {
         return PileCapReviewer.ASSUMPTIONS;
     }

@@ -1,9 +1,16 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
+import dev.countercheck.element.Combinations;
+import dev.countercheck.element.DetailingVariables;
+import dev.countercheck.element.CombinationsCheck;
+import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.OutOfRangeException;
+import dev.countercheck.review.CheckResult;
+import dev.countercheck.review.GeneratedCase;
+import dev.countercheck.submission.ActionCase;
 import dev.countercheck.element.RuleChecks;
 import dev.countercheck.review.Value;
-import dev.countercheck.ruleset.Rule;
 import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.ElementAssembler;
@@ -20,6 +27,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.function.Function;
+import java.util.stream.Collectors;
 
 import static dev.countercheck.submission.PileCapChecks.CATALOGUE;
 
@@ -56,7 +64,14 @@ final class PileCapReviewer {
             "eps_c2", "stress_block_lambda", "xi_limit", "concrete_unit_weight", "lever_arm_factor", "pile_tolerance",
             "min_edge_distance", "pile_spacing_factor", "pile_spacing_factor_end_bearing", "strut_angle_min",
             "shear_section_inside_pile", "band_spacing_limit", "band_half_width",
-            "shear_strip_width");
+            "shear_strip_width", "cover_k2_soil", "fck_max_shear");
+
+    /** The option that chooses the basis of the column node's limit. */
+    static final String NODE_COLUMN_BASIS = "node_column_basis";
+
+    /** The methods a ruleset chooses for pile caps, each with its choices (the default, recommended, first). */
+    static final Map<String, List<String>> OPTIONS = Map.of(NODE_COLUMN_BASIS,
+            List.of("effective-area", NodeChecks.PARTIALLY_LOADED));
 
     private final ElementAssembler assembler;
 
@@ -65,10 +80,45 @@ final class PileCapReviewer {
     }
 
     /** What the detailing rules of a ruleset may use and define for pile caps: the checks not computed in Java. */
-    static final ElementRules RULE_VOCABULARY = new ElementRules(DetailingScopes.SCOPES, DetailingScopes.subjects(),
-            CATALOGUE.quantityUnits(id -> !checks().containsKey(id)));
+    static final ElementRules RULE_VOCABULARY = new ElementRules(DetailingScopes.SCOPES, DetailingVariables.subjects(),
+            CATALOGUE.quantityUnits(id -> !checks().containsKey(id) && !id.equals(CombinationsCheck.ID)));
 
     ElementReview review(PileCap cap, Ruleset rules) {
+        if (cap.loads().isEmpty()) {
+            Run run = run(cap, rules);
+            return assemble(cap, run, CombinationsCheck.notAsked(CATALOGUE), List.of());
+        }
+        Combinations generated;
+        try {
+            generated = Combinations.of(cap.loads(), rules);
+        } catch (IllegalArgumentException e) {
+            CheckOutcome why = CombinationsCheck.notFormed(CATALOGUE, e.getMessage());
+            if (!hasUls(cap.actions())) {
+                return assembler.assemble(cap.id(), CATALOGUE, cap.description(), CATALOGUE.checks().keySet().stream()
+                        .map(id -> id.equals(CombinationsCheck.ID) ? why : Checks.builder(id)
+                                .notChecked("the combinations of the loads could not be formed: " + e.getMessage())
+                                .build()).toList(), cap.claims(), List.of(), Optional.empty());
+            }
+            return assemble(cap, run(cap, rules), why, List.of());
+        }
+        List<ActionCase> cases = generated.cases(cap.location());
+        List<ActionCase> both = new ArrayList<>(cap.actions());
+        both.addAll(cases);
+        Run union = run(cap.withActions(both), rules);
+        CheckOutcome comparison = hasUls(cap.actions())
+                ? CombinationsCheck.compare(CATALOGUE, results(run(cap, rules)), results(run(cap.withActions(cases),
+                        rules)), cap.actions().size(), cases.size(), rules.number("claim_tolerance"))
+                : CombinationsCheck.generatedOnly(CATALOGUE, cases.size(), cap.actions().size());
+        Set<String> names = cases.stream().map(ActionCase::name).collect(Collectors.toSet());
+        return assemble(cap, union, comparison, generated.forReport(CombinationsCheck.governed(
+                union.outcomes.stream().map(CheckOutcome::result).toList(), names)));
+    }
+
+    /** The context and the outcomes of every check but {@code combinations}, in catalogue order. */
+    private record Run(PileCapContext ctx, List<CheckOutcome> outcomes) {
+    }
+
+    private Run run(PileCap cap, Ruleset rules) {
         PileCapContext ctx = new PileCapContext(cap, rules);
         Map<String, Function<PileCapContext, CheckOutcome>> checks = checks();
         Map<String, CheckOutcome> done = new LinkedHashMap<>();
@@ -78,13 +128,47 @@ final class PileCapReviewer {
             Value v = done.get("tie-" + axis.label()).result().values().get("as_required");
             asRequired.put(axis, v == null ? 0.0 : v.value());
         }
-        Map<String, DetailingScopes.Values> variables = new HashMap<>();
+        Map<String, DetailingVariables.Values> variables = new HashMap<>();
         List<CheckOutcome> outcomes = new ArrayList<>();
         for (String id : CATALOGUE.checks().keySet()) {
-            outcomes.add(done.containsKey(id) ? done.get(id) : byRule(id, ctx, asRequired, variables));
+            if (!id.equals(CombinationsCheck.ID)) {
+                outcomes.add(done.containsKey(id) ? done.get(id) : RuleChecks.byRule(CATALOGUE, id, ctx.rules,
+                        DetailingScopes.SCOPES, (scope, subject) -> DetailingScopes.values(ctx, scope, subject, asRequired),
+                        variables));
+            }
         }
-        return assembler.assemble(cap.id(), CATALOGUE, cap.description(), outcomes, cap.claims(), List.of(),
-                Optional.of(DrawingNotes.of(ctx, outcomes)));
+        return new Run(ctx, outcomes);
+    }
+
+    private ElementReview assemble(PileCap cap, Run run, CheckOutcome combinations, List<GeneratedCase> generated) {
+        List<CheckOutcome> outcomes = new ArrayList<>();
+        for (String id : CATALOGUE.checks().keySet()) {
+            outcomes.add(id.equals(CombinationsCheck.ID) ? combinations
+                    : run.outcomes.stream().filter(o -> o.result().id().equals(id)).findFirst().orElseThrow());
+        }
+        return assembler.assemble(cap.id(), CATALOGUE, cap.description(), outcomes, cap.claims(), cautions(run.ctx),
+                Optional.of(DrawingNotes.of(run.ctx, outcomes))).withCombinations(generated);
+    }
+
+    private static Map<String, CheckResult> results(Run run) {
+        Map<String, CheckResult> map = new LinkedHashMap<>();
+        run.outcomes.forEach(o -> map.put(o.result().id(), o.result()));
+        return map;
+    }
+
+    private static boolean hasUls(List<ActionCase> actions) {
+        return actions.stream().anyMatch(a -> a.kind() == ActionCase.Kind.ULS);
+    }
+
+    /** What the review took as given about the element as a whole. */
+    private static List<String> cautions(PileCapContext ctx) {
+        if (ctx.cap.castAgainst().sidesStated()) {
+            return List.of();
+        }
+        return List.of("The side faces are taken as cast against formwork: the submission does not say what they"
+                + " are cast against (cast_against names the bottom face only). A side cast against soil needs at"
+                + " least k2 = " + Num.f(ctx.rules.number("cover_k2_soil")) + " mm cover (EN 1992-1-1 4.4.1.3(4));"
+                + " say so with cast_against: {bottom: ..., sides: soil}.");
     }
 
     /** The checks computed in Java, in catalogue order; the others come from the ruleset. */
@@ -116,26 +200,6 @@ final class PileCapReviewer {
         return map;
     }
 
-    /**
-     * A check the ruleset defines, run on the subject its id names.
-     *
-     * @param variables the scope variables formed so far for this cap, by scope and subject (formed once each)
-     */
-    private static CheckOutcome byRule(String id, PileCapContext ctx, Map<Axis, Double> asRequired,
-                                       Map<String, DetailingScopes.Values> variables) {
-        Optional<Rule> rule = ctx.rules.rule(CATALOGUE.elementType(), id);
-        if (rule.isEmpty()) {
-            return Checks.builder(id).notChecked("ruleset " + ctx.rules.id() + " has no rule for this check").build();
-        }
-        String scope = rule.get().def().scope();
-        String subject = rule.get().subject();
-        DetailingScopes.Values v = variables.computeIfAbsent(scope + "/" + subject,
-                k -> DetailingScopes.values(ctx, scope, subject, asRequired));
-        if (v.missing().isPresent()) {
-            return Checks.builder(id).notChecked(v.missing().get()).build();
-        }
-        return RuleChecks.run(CATALOGUE, rule.get(), ctx.rules, DetailingScopes.SCOPES.get(scope), v.values());
-    }
 
     /** A formula asked outside its valid range makes the check not-checked, with the reason. */
     private static CheckOutcome guarded(String id, Function<PileCapContext, CheckOutcome> check, PileCapContext ctx) {

@@ -1,5 +1,7 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.PlanGeometry;
+import dev.countercheck.element.Section;
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Punching;
@@ -8,9 +10,11 @@ import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.FindingKind;
+import dev.countercheck.statics.ColumnOutline;
+import dev.countercheck.statics.ControlPerimeter;
+import dev.countercheck.statics.PlanPoint;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.Column.ColumnShape;
-import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -39,7 +43,7 @@ final class PunchingChecks {
             if (n <= 0) {
                 continue;
             }
-            Step caseBeta = beta(c, 2 * d.value(), n, u.action().mxKnm(), u.action().myKnm());
+            Step caseBeta = ControlPerimeter.beta(PlanGeometry.outline(c), 2 * d.value(), n, u.action().mxKnm(), u.action().myKnm());
             if (caseBeta.value() * n > worst) {
                 worst = caseBeta.value() * n;
                 beta = caseBeta;
@@ -50,6 +54,7 @@ final class PunchingChecks {
             return b.notApplicable("no ULS case presses the column onto the cap").build();
         }
         b.value("beta", beta);
+        b.governing(worstCase);
         Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
                 + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
         Step u0 = b.value("u0", c.shape() == ColumnShape.CIRCULAR
@@ -62,28 +67,6 @@ final class PunchingChecks {
         b.require(ved.value(), vrdMax.value(), FindingKind.CAPACITY, "capacity", "VEd = " + Num.f(ved.value())
                 + " kN at the column face exceeds vRd,max·u0·d = " + Num.f(vrdMax.value()) + " kN.");
         return b.build();
-    }
-
-    /**
-     * β for the column's moments at the perimeter at distance a (EN 1992-1-1 6.4.3(3), Exp. (6.39) with
-     * W of Exp. (6.41) and k of Table 6.1, summed over both axes; 6.4.4(2), Exp. (6.51) within 2d); a
-     * circular column by Exp. (6.42) with the resultant eccentricity. At the face a = 2d (u1, W1).
-     *
-     * @param vEdKn VEd (VEd,red at a perimeter within 2d), kN, &gt; 0
-     */
-    static Step beta(Column c, double aMm, double vEdKn, double mxKnm, double myKnm) {
-        if (c.shape() == ColumnShape.CIRCULAR) {
-            return Punching.betaCircular(Math.hypot(mxKnm, myKnm) * 1000 / vEdKn, c.cxMm(), aMm);
-        }
-        Step u = Punching.u1Rectangular(c.cxMm(), c.cyMm(), aMm);
-        // My turns about y: the eccentricity lies along x, c1 = cx; Mx: along y, c1 = cy.
-        Step alongX = Punching.betaEccentric(Punching.kEccentricity(c.cxMm(), c.cyMm()).value(), myKnm, vEdKn,
-                u.value(), Punching.w1Rectangular(c.cxMm(), c.cyMm(), aMm).value());
-        Step alongY = Punching.betaEccentric(Punching.kEccentricity(c.cyMm(), c.cxMm()).value(), mxKnm, vEdKn,
-                u.value(), Punching.w1Rectangular(c.cyMm(), c.cxMm(), aMm).value());
-        return Step.of("β", "1 + kx·(|My|/VEd)·(u/Wx) + ky·(|Mx|/VEd)·(u/Wy)", alongX.substituted() + " + "
-                + alongY.substituted().substring(4), alongX.value() + alongY.value() - 1, "-",
-                "EN 1992-1-1 6.4.3(3), Exp. (6.39), (6.41), Table 6.1; 6.4.4(2), Exp. (6.51)");
     }
 
     /** One control perimeter at distance a: its length on the cap, the reduced load and the resistance. */
@@ -103,7 +86,7 @@ final class PunchingChecks {
         if (ctx.section.isEmpty()) {
             return b.notChecked("no bottom reinforcement given: d and ρ are unknown").build();
         }
-        CapSection section = ctx.section.get();
+        Section section = ctx.section.get();
         Step d = b.trace(section.dMean());
         Step step = b.trace(ctx.rules.parameter("punching_search_step").asStep());
         double rhoX = section.asX().value() / (ctx.cap.planYMm() * section.dx().value());
@@ -111,8 +94,9 @@ final class PunchingChecks {
         Step rho = b.trace(Punching.rhoMean(rhoX, rhoY));
         Step k = b.trace(Shear.kSize(d.value()));
         double cRdc = ctx.rules.number("c_rdc_factor") / ctx.rules.number("gamma_c");
-        Step stress = b.trace(Shear.vRdcStress(cRdc, k.value(), rho.value(), ctx.fck.value()));
-        Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), ctx.fck.value()));
+        double fckV = b.trace(ctx.fckShear).value();
+        Step stress = b.trace(Shear.vRdcStress(cRdc, k.value(), rho.value(), fckV));
+        Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), fckV));
         int count = (int) Math.ceil(2 / step.value() - 1e-9);
         Perimeter governing = null;
         for (int j = 1; j <= count; j++) {
@@ -129,7 +113,7 @@ final class PunchingChecks {
         Perimeter g = governing;
         b.value("a", Step.of("a", "the distance of greatest VEd,red/VRd, searched in steps of (Δa/d)·d up to 2d",
                 count + " perimeters", g.aMm, "mm", "EN 1992-1-1 6.4.4(2)"));
-        Step full = ControlPerimeter.full(ctx.cap.column(), g.aMm);
+        Step full = ControlPerimeter.full(PlanGeometry.outline(ctx.cap.column()), g.aMm);
         Step u = new Step("u", full.formula(), full.substituted(), g.uMm, "mm", full.clause(), full.remark());
         if (g.uMm < full.value() - 1e-6) {
             u = u.remarked("only the " + Num.f(g.uMm) + " mm of the " + Num.f(full.value())
@@ -146,6 +130,7 @@ final class PunchingChecks {
                 g.caseName + (relief.isEmpty() ? ", no pile inside" : ", inside: " + String.join(" + ", relief)),
                 g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2)"));
         Step beta = b.trace(g.beta);
+        b.governing(g.caseName);
         Step ved = b.value("ved", Step.of("β·VEd,red", "β·VEd,red", Num.f(beta.value()) + "·"
                 + Num.f(reduced.value()), beta.value() * reduced.value(), "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.51)"));
         Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), g.aMm));
@@ -159,8 +144,8 @@ final class PunchingChecks {
 
     /** The perimeter at distance a, the worst ULS case (column actions alone) and its resistance. */
     private static Perimeter at(PileCapContext ctx, double a, double d, Step vRd) {
-        Column column = ctx.cap.column();
-        List<Point> piles = ctx.cap.piles().positions();
+        ColumnOutline column = PlanGeometry.outline(ctx.cap.column());
+        List<PlanPoint> piles = PlanGeometry.points(ctx.cap.piles().positions());
         double u = ControlPerimeter.lengthInPlan(column, a, ctx.cap.planXMm(), ctx.cap.planYMm());
         double[] shares = new double[piles.size()];
         for (int i = 0; i < piles.size(); i++) {
@@ -175,7 +160,7 @@ final class PunchingChecks {
                 v -= p[i] * shares[i];
             }
             if (v > LOAD_RESIDUE * c.action().nKn()) {
-                Perimeter here = new Perimeter(a, u, shares, v, beta(column, a, v, c.action().mxKnm(),
+                Perimeter here = new Perimeter(a, u, shares, v, ControlPerimeter.beta(column, a, v, c.action().mxKnm(),
                         c.action().myKnm()), c.action().name(), vRd.value(), vRd.value() * u * d / 1000);
                 if (here.utilisation() > worst.utilisation()) {
                     worst = here;

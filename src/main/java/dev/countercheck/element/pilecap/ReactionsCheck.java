@@ -37,11 +37,12 @@ final class ReactionsCheck {
             PileGroupReactions.trace(min.distribution, label).forEach(b::trace);
         }
         b.value("max", Step.of("P,max", "max P_i over piles and ULS cases",
-                "pile " + max.pile + " in " + max.caseName, max.value, "kN", BASIS));
+                "pile " + max.pile + " in " + max.caseName + governing(max.distribution), max.value, "kN", BASIS));
         b.value("min", Step.of("P,min", "min P_i over piles and ULS cases (own weight × γG,inf)",
-                "pile " + min.pile + " in " + min.caseName, min.value, "kN", BASIS));
+                "pile " + min.pile + " in " + min.caseName + governing(min.distribution), min.value, "kN", BASIS));
         double rc = ctx.cap.piles().compressionKn();
         double rt = ctx.cap.piles().tensionKn();
+        b.governing(min.value < 0 && -min.value / rt > max.value / rc ? min.caseName : max.caseName);
         b.require(max.value, rc, FindingKind.CAPACITY, "compression", "Pile " + max.pile + " carries " + show(max.value) + " in "
                 + max.caseName + ", more than its design resistance " + show(rc) + ".");
         if (min.value < 0) {
@@ -85,5 +86,11 @@ final class ReactionsCheck {
             }
             return best;
         }
+    }
+
+    /** The governing case written out as numbers: " (V = 3000 kN, Mx* = 0 kNm, My* = 90 kNm)". */
+    private static String governing(PileGroupReactions.Distribution d) {
+        return " (V = " + Num.f(d.totalKn()) + " kN, Mx* = " + Num.f(d.mxStarKnm()) + " kNm, My* = "
+                + Num.f(d.myStarKnm()) + " kNm)";
     }
 }

@@ -1,5 +1,8 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
+import dev.countercheck.element.Section;
+
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Shear;
@@ -35,7 +38,7 @@ final class ShearCheck {
         if (ctx.section.isEmpty()) {
             return b.notChecked("no bottom reinforcement given: d and ρl are unknown").build();
         }
-        CapSection section = ctx.section.get();
+        Section section = ctx.section.get();
         Step d = b.trace(section.d(axis.bars()));
         ctx.equivalentSquare().ifPresent(b::trace);
         Side worst = null;
@@ -57,6 +60,7 @@ final class ShearCheck {
         if (worst == null) {
             return b.notApplicable("no pile centre lies beyond the column face along " + axis.label()).build();
         }
+        b.governing(worst.caseName);
         worst.steps.forEach(b::trace);
         b.value("av", worst.av);
         b.value("beta", worst.beta);
@@ -75,8 +79,9 @@ final class ShearCheck {
         double cRdcFactor = ctx.rules.number("c_rdc_factor");
         Step cRdc = b.trace(Step.of("CRd,c", "0.18/γc", Num.f(cRdcFactor) + "/" + Num.f(gammaC), cRdcFactor / gammaC,
                 "-", ctx.clauseOf("c_rdc_factor")));
-        Step stress = b.trace(Shear.vRdcStress(cRdc.value(), k.value(), rho.value(), ctx.fck.value()));
-        Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), ctx.fck.value()));
+        double fckV = b.trace(ctx.fckShear).value();
+        Step stress = b.trace(Shear.vRdcStress(cRdc.value(), k.value(), rho.value(), fckV));
+        Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), fckV));
         Step vrdc = b.value("vrdc", Shear.vRdc(stress, vMin, width, d.value()));
         b.require(ved.value(), vrdc.value(), FindingKind.CAPACITY, "capacity", "VEd = " + Num.f(ved.value()) + " kN exceeds VRd,c = "
                 + Num.f(vrdc.value()) + " kN on the section across " + axis.label() + " (" + worst.caseName + ").");

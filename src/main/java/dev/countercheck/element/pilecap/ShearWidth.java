@@ -1,5 +1,8 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
+import dev.countercheck.element.Section;
+
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.submission.Point;
@@ -20,8 +23,8 @@ import java.util.List;
 record ShearWidth(Step width, Step as) {
 
     /** The width and steel of the section across {@code axis} loaded by {@code piles}; the full cap when not widely spaced. */
-    static ShearWidth of(PileCapContext ctx, Axis axis, List<Point> piles, CapSection section) {
-        double capWidth = axis.capWidth(ctx.cap);
+    static ShearWidth of(PileCapContext ctx, Axis axis, List<Point> piles, Section section) {
+        double capWidth = axis.width(ctx.cap);
         Step all = section.as(axis.bars());
         if (!TieBands.widelySpaced(ctx)) {
             return new ShearWidth(Step.of("b", "cap width", Num.f(capWidth), capWidth, "mm", "EN 1992-1-1 6.2.2(1)"),

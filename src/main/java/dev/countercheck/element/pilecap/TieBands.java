@@ -1,5 +1,6 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.submission.PileCap;
@@ -70,7 +71,7 @@ record TieBands(Step counted, List<Integer> outside, int count) {
     static double[] barCentres(PileCap cap, Axis axis, List<BarSet> sets) {
         int n = sets.stream().mapToInt(BarSet::count).sum();
         double barPhi = sets.stream().mapToDouble(BarSet::diameterMm).max().orElse(0);
-        double width = axis.capWidth(cap);
+        double width = axis.width(cap);
         double side = cap.reinforcement().orElseThrow().cover().sideMm();
         double spacing = n < 2 ? 0 : (width - 2 * side - barPhi) / (n - 1);
         double first = n < 2 ? 0 : -width / 2 + side + barPhi / 2;

@@ -1,5 +1,9 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.Axis;
+import dev.countercheck.element.Section;
+import dev.countercheck.element.StressBlock;
+
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Bending;
 import dev.countercheck.eurocode.Num;
@@ -39,12 +43,13 @@ final class TieCheck {
         if (ctx.section.isEmpty()) {
             return b.notChecked("no bottom reinforcement given: d and As,prov are unknown").build();
         }
-        CapSection section = ctx.section.get();
+        Section section = ctx.section.get();
         Step d = b.trace(section.d(axis.bars()));
         b.trace(ctx.fyd);
         boolean bending = ctx.cap.tieMethod() == TieMethod.BENDING;
         double offset = bending ? ctx.columnHalf(axis) : 0.0;
         Side side = governing(ctx, axis, offset);
+        b.governing(side.caseName);
         Step force;
         Step required;
         if (bending) {
@@ -53,8 +58,8 @@ final class TieCheck {
                     + " column face, rectangular stress block (EN 1992-1-1 3.1.7(3)).");
             Step moment = b.value("moment", Step.of("M", "Σ P_i·(distance beyond the column face)",
                     side.terms + " (" + side.caseName + ")", side.sumKnMm / 1000, "kNm", "EN 1992-1-1 6.1"));
-            double width = axis.capWidth(ctx.cap);
-            Optional<Step> lever = StressBlock.leverArm(ctx, b, moment.value(), width, d.value(), "");
+            double width = axis.width(ctx.cap);
+            Optional<Step> lever = StressBlock.leverArm(ctx.rules, ctx.fck.value(), b, moment.value(), width, d.value(), "");
             if (lever.isEmpty()) {
                 return b.build();
             }

@@ -28,11 +28,20 @@ final class CapReviews {
     }
 
     static Review review(String resource, String rulesetId) {
+        return review(resource, java.util.Optional.of(rulesetId));
+    }
+
+    /** The first element of a test submission, reviewed with the ruleset its basis names (else recommended). */
+    static ElementReview elementAsSubmitted(String resource) {
+        return review(resource, java.util.Optional.empty()).elements().get(0);
+    }
+
+    private static Review review(String resource, java.util.Optional<String> rulesetId) {
         try {
             Path file = Path.of(CapReviews.class.getResource(resource).toURI());
             Submission s = new SubmissionReader(ElementKinds.binders()).read(file);
-            return new ProjectReviewer(new Review.ToolInfo("countercheck", "test")).review(s, ruleset(rulesetId),
-                    "2026-01-01");
+            Ruleset rules = ruleset(rulesetId.or(s::ruleset).orElse("en1992-recommended"));
+            return new ProjectReviewer(new Review.ToolInfo("countercheck", "test")).review(s, rules, "2026-01-01");
         } catch (URISyntaxException e) {
             throw new IllegalStateException(e);
         } catch (dev.countercheck.submission.SubmissionException e) {

@@ -43,7 +43,7 @@ class PileCapProperties {
 
     static final Ruleset RULES = CapReviews.ruleset("en1992-recommended");
     static final PileCapReviewer REVIEWER =
-            new PileCapReviewer(new ElementAssembler(new ClaimComparer(RULES.number("claim_tolerance")),
+            new PileCapReviewer(new ElementAssembler(new ClaimComparer(RULES.number("claim_tolerance"), java.util.Map.of()),
                     new SeverityPolicy(RULES::severity)));
     private static final SourceLocation HERE = new SourceLocation("generated", 1, 1);
 
@@ -110,7 +110,8 @@ class PileCapProperties {
                 List.of(new BarSet(Direction.X, l.barsX, l.barPhi, 1, BarEnds.BENT, Optional.empty(), Optional.empty()),
                         new BarSet(Direction.Y, l.barsY, l.barPhi, 2, BarEnds.BENT, Optional.empty(), Optional.empty())),
                 List.of(), Optional.empty());
-        return new PileCap("P", "generated", HERE, materials, lx, ly, l.depth, PileCap.CastAgainst.BLINDING,
+        return new PileCap("P", "generated", HERE, materials, lx, ly, l.depth,
+                PileCap.Casting.bottomOnly(PileCap.CastAgainst.BLINDING),
                 PileCap.SelfWeight.ADD, group, column, List.of(uls), Optional.of(r),
                 PileCap.TieMethod.TRUSS, List.of());
     }

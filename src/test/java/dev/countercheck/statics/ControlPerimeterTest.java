@@ -1,11 +1,6 @@
-package dev.countercheck.element.pilecap;
+package dev.countercheck.statics;
 
-import dev.countercheck.submission.Column;
-import dev.countercheck.submission.Column.ColumnShape;
-import dev.countercheck.submission.Point;
 import org.junit.jupiter.api.Test;
-
-import java.util.Optional;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
@@ -14,10 +9,8 @@ import static org.assertj.core.api.Assertions.withinPercentage;
 /** The geometry of control perimeters: length on the cap, share of a pile head inside. Invented sizes. */
 class ControlPerimeterTest {
 
-    private static final Column SQUARE = new Column(ColumnShape.RECTANGULAR, 400, 400, new Point(0, 0),
-            Optional.empty());
-    private static final Column ROUND = new Column(ColumnShape.CIRCULAR, 400, 400, new Point(0, 0),
-            Optional.empty());
+    private static final ColumnOutline SQUARE = ColumnOutline.rectangular(400, 400, new PlanPoint(0, 0));
+    private static final ColumnOutline ROUND = ColumnOutline.circular(400, new PlanPoint(0, 0));
 
     @Test
     void aFreeEdgeCutsThePerimeter() {
@@ -37,16 +30,16 @@ class ControlPerimeterTest {
     @Test
     void aPileHeadCountsByTheShareOfItsAreaInside() {
         // A head wholly inside, wholly outside, and centred on a straight side (half inside by symmetry).
-        assertThat(ControlPerimeter.headShareInside(SQUARE, 300, new Point(250, 0), 200)).isCloseTo(1, within(1e-9));
-        assertThat(ControlPerimeter.headShareInside(SQUARE, 300, new Point(900, 0), 200)).isCloseTo(0, within(1e-9));
-        assertThat(ControlPerimeter.headShareInside(SQUARE, 300, new Point(500, 0), 200))
+        assertThat(ControlPerimeter.headShareInside(SQUARE, 300, new PlanPoint(250, 0), 200)).isCloseTo(1, within(1e-9));
+        assertThat(ControlPerimeter.headShareInside(SQUARE, 300, new PlanPoint(900, 0), 200)).isCloseTo(0, within(1e-9));
+        assertThat(ControlPerimeter.headShareInside(SQUARE, 300, new PlanPoint(500, 0), 200))
                 .isCloseTo(0.5, within(0.002));
         // A head of D = 4000 over the column takes in the whole rounded rectangle at a = 100:
         // 400² + 4·400·100 + π·100² = 351 416 mm² of π·2000² = 12 566 371 mm²: share 0.027965 (hand calculation).
-        assertThat(ControlPerimeter.headShareInside(SQUARE, 100, new Point(0, 0), 4000))
+        assertThat(ControlPerimeter.headShareInside(SQUARE, 100, new PlanPoint(0, 0), 4000))
                 .isCloseTo(0.027965, withinPercentage(0.5));
         // Circular column, a = 100: the disc of radius 300, π·300²/(π·2000²) = 0.0225 (hand calculation).
-        assertThat(ControlPerimeter.headShareInside(ROUND, 100, new Point(0, 0), 4000))
+        assertThat(ControlPerimeter.headShareInside(ROUND, 100, new PlanPoint(0, 0), 4000))
                 .isCloseTo(0.0225, withinPercentage(0.5));
     }
 }

@@ -1,8 +1,7 @@
-package dev.countercheck.element.pilecap;
+package dev.countercheck.element;
 
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
-import dev.countercheck.submission.PileCap;
 import dev.countercheck.submission.Reinforcement;
 import dev.countercheck.submission.Reinforcement.BarSet;
 import dev.countercheck.submission.Reinforcement.Direction;
@@ -11,7 +10,7 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * The cap's bottom steel in each direction and the effective depths it gives
+ * An element's bottom steel in each direction and the effective depths it gives
  * (docs/pile-cap.md, "Effective depths"): d of layer 1 = h − c − φ1/2, of layer 2 = h − c − φ1 − φ2/2.
  *
  * @param xBars       the bottom sets running in x
@@ -22,13 +21,12 @@ import java.util.Optional;
  * @param asX         area of the bottom x-bars, mm2
  * @param asY         area of the bottom y-bars, mm2
  */
-record CapSection(List<BarSet> xBars, List<BarSet> yBars, Step dx, Step dy, Step dMean, Step asX, Step asY) {
+public record Section(List<BarSet> xBars, List<BarSet> yBars, Step dx, Step dy, Step dMean, Step asX, Step asY) {
 
     private static final String BASIS = "common practice: layer 1 nearest the soffit (docs/pile-cap.md, effective depths)";
 
-    /** The section, or empty when the cap has no reinforcement or no bottom bars at all. */
-    static Optional<CapSection> of(PileCap cap) {
-        Optional<Reinforcement> r = cap.reinforcement();
+    /** The section of an element {@code depthMm} deep, or empty when it has no reinforcement or no bottom bars at all. */
+    public static Optional<Section> of(Optional<Reinforcement> r, double depthMm) {
         if (r.isEmpty() || r.get().bottom().isEmpty()) {
             return Optional.empty();
         }
@@ -38,8 +36,8 @@ record CapSection(List<BarSet> xBars, List<BarSet> yBars, Step dx, Step dy, Step
                 .orElse(bottom.stream().mapToDouble(BarSet::diameterMm).max().orElse(0));
         List<BarSet> xs = bottom.stream().filter(b -> b.direction() == Direction.X).toList();
         List<BarSet> ys = bottom.stream().filter(b -> b.direction() == Direction.Y).toList();
-        Step dx = depth("dx", xs.isEmpty() ? ys : xs, cap.depthMm(), cover, phi1);
-        Step dy = depth("dy", ys.isEmpty() ? xs : ys, cap.depthMm(), cover, phi1);
+        Step dx = depth("dx", xs.isEmpty() ? ys : xs, depthMm, cover, phi1);
+        Step dy = depth("dy", ys.isEmpty() ? xs : ys, depthMm, cover, phi1);
         if (xs.isEmpty()) {
             dx = dx.remarked("no bottom x-bars: dx taken as for the y-bars");
         }
@@ -49,14 +47,14 @@ record CapSection(List<BarSet> xBars, List<BarSet> yBars, Step dx, Step dy, Step
         double mean = (dx.value() + dy.value()) / 2;
         Step dMean = Step.of("d", "(dx + dy)/2", "(" + Num.f(dx.value()) + " + " + Num.f(dy.value()) + ")/2",
                 mean, "mm", "EN 1992-1-1 6.4.2(1)");
-        return Optional.of(new CapSection(xs, ys, dx, dy, dMean, area("As,x", xs), area("As,y", ys)));
+        return Optional.of(new Section(xs, ys, dx, dy, dMean, area("As,x", xs), area("As,y", ys)));
     }
 
     /**
      * The effective depth of bar sets {@code sets} from the face with cover {@code cover}: layer 1
      * h − c − φ/2, layer 2 h − c − φ1 − φ/2.
      */
-    static Step depth(String symbol, List<BarSet> sets, double h, double cover, double phi1) {
+    public static Step depth(String symbol, List<BarSet> sets, double h, double cover, double phi1) {
         double phi = sets.stream().mapToDouble(BarSet::diameterMm).max().orElse(phi1);
         int layer = sets.stream().mapToInt(BarSet::layer).max().orElse(1);
         if (layer <= 1) {
@@ -77,11 +75,11 @@ record CapSection(List<BarSet> xBars, List<BarSet> yBars, Step dx, Step dy, Step
         return Step.of(symbol, "Σ n·π·φ²/4 (bottom bars)", subst, as, "mm2", "bar areas");
     }
 
-    Step d(Direction direction) {
+    public Step d(Direction direction) {
         return direction == Direction.X ? dx : dy;
     }
 
-    Step as(Direction direction) {
+    public Step as(Direction direction) {
         return direction == Direction.X ? asX : asY;
     }
 }

@@ -1,4 +1,4 @@
-package dev.countercheck.element.pilecap;
+package dev.countercheck.element;
 
 import dev.countercheck.eurocode.Bending;
 import dev.countercheck.eurocode.Num;
@@ -6,14 +6,15 @@ import dev.countercheck.eurocode.OutOfRangeException;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.FindingKind;
+import dev.countercheck.ruleset.Ruleset;
 
 import java.util.Optional;
 
 /**
- * The rectangular stress block of a cap section in bending (EN 1992-1-1 3.1.7(3)): K, K' and the lever
- * arm, shared by ties designed by the bending method and by the hogging steel over piles in tension.
+ * The rectangular stress block of a section in bending (EN 1992-1-1 3.1.7(3)): K, K' and the lever
+ * arm, shared by every check that sizes steel for a moment (ties by the bending method, hogging, pad bending).
  */
-final class StressBlock {
+public final class StressBlock {
 
     private StressBlock() {
     }
@@ -25,19 +26,19 @@ final class StressBlock {
      *
      * @param about words naming the moment in the K' message ("" or " for the hogging moment")
      */
-    static Optional<Step> leverArm(PileCapContext ctx, CheckBuilder b, double momentKnm, double widthMm, double dMm,
+    public static Optional<Step> leverArm(Ruleset rules, double fckMpa, CheckBuilder b, double momentKnm, double widthMm, double dMm,
                                    String about) {
-        Step k = b.trace(Bending.kFactor(momentKnm, widthMm, dMm, ctx.fck.value()));
-        Step kPrime = b.trace(Bending.kPrime(ctx.rules.number("alpha_cc"), ctx.rules.number("gamma_c"),
-                b.trace(ctx.rules.parameter("stress_block_lambda").asStep()).value(),
-                b.trace(ctx.rules.parameter("xi_limit").asStep()).value()));
+        Step k = b.trace(Bending.kFactor(momentKnm, widthMm, dMm, fckMpa));
+        Step kPrime = b.trace(Bending.kPrime(rules.number("alpha_cc"), rules.number("gamma_c"),
+                b.trace(rules.parameter("stress_block_lambda").asStep()).value(),
+                b.trace(rules.parameter("xi_limit").asStep()).value()));
         if (k.value() > kPrime.value()) {
             b.fail(FindingKind.CAPACITY, "k-limit", "K = " + Num.f(k.value()) + " exceeds K' = " + Num.f(kPrime.value())
                     + about + ": the section needs compression steel or more depth.");
         }
         try {
-            return Optional.of(Bending.leverArm(k.value(), dMm, ctx.rules.number("alpha_cc"),
-                    ctx.rules.number("gamma_c")));
+            return Optional.of(Bending.leverArm(k.value(), dMm, rules.number("alpha_cc"),
+                    rules.number("gamma_c")));
         } catch (OutOfRangeException e) {
             b.fail(FindingKind.CAPACITY, "lever-arm", e.getMessage());
             return Optional.empty();

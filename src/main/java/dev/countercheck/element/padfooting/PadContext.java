@@ -1,0 +1,129 @@
+package dev.countercheck.element.padfooting;
+
+import dev.countercheck.element.Axis;
+import dev.countercheck.element.PlanGeometry;
+import dev.countercheck.element.Section;
+import dev.countercheck.eurocode.Materials;
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.ruleset.Ruleset;
+import dev.countercheck.statics.BaseActions;
+import dev.countercheck.submission.ActionCase;
+import dev.countercheck.submission.Column;
+import dev.countercheck.submission.PadFooting;
+
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * What every pad-footing check needs, computed once: material strengths, the section, the footing's
+ * own weight and that of the soil over it, and the resultant of an action case on the base.
+ */
+final class PadContext {
+
+    /** One action case on the base: the case and V, Mx*, My* at the base centre. */
+    record Resultant(ActionCase action, BaseActions base) {
+
+        double vKn() {
+            return base.vKn();
+        }
+
+        /** e_x = My* over V, mm. */
+        double exMm() {
+            return base.myKnm() / base.vKn() * 1000;
+        }
+
+        /** e_y = Mx* over V, mm. */
+        double eyMm() {
+            return base.mxKnm() / base.vKn() * 1000;
+        }
+
+        /** How V, Mx*, My* were formed, for a trace's substituted values. */
+        String formed() {
+            return action.name() + ": V = " + base.v().substituted() + " = " + Num.f(base.vKn()) + " kN, Mx* = "
+                    + Num.f(base.mxKnm()) + " kNm, My* = " + Num.f(base.myKnm()) + " kNm";
+        }
+    }
+
+    final PadFooting pad;
+    final Ruleset rules;
+    final Optional<Section> section;
+    final Step fck;
+    final Step fctm;
+    final Step fctk005;
+    final Step fcd;
+    final Step fcdShear;
+    final Step fctd;
+    final Step fyd;
+    final Step footingWeight;
+    final Step overburdenWeight;
+
+    PadContext(PadFooting pad, Ruleset rules) {
+        this.pad = pad;
+        this.rules = rules;
+        this.section = Section.of(pad.reinforcement(), pad.depthMm());
+        double fckMpa = pad.materials().fckMpa();
+        this.fck = Step.of("fck", "characteristic cylinder strength",
+                pad.materials().concreteClass().orElse("fck given"), fckMpa, "MPa", "EN 1992-1-1 Table 3.1");
+        this.fctm = Materials.fctm(fckMpa);
+        this.fctk005 = Materials.fctk005(fctm.value());
+        double gammaC = rules.number("gamma_c");
+        this.fcd = Materials.fcd(rules.number("alpha_cc"), fckMpa, gammaC);
+        this.fcdShear = Materials.fcd(rules.number("alpha_cc_shear"), fckMpa, gammaC);
+        this.fctd = Materials.fctd(rules.number("alpha_ct"), fctk005.value(), gammaC);
+        this.fyd = Materials.fyd(pad.materials().fykMpa(), rules.number("gamma_s"));
+        double gammaConc = rules.number("concrete_unit_weight");
+        this.footingWeight = Step.of("Wf", "γconc·Lx·Ly·h", Num.f(gammaConc) + "·" + Num.f(pad.planXMm() / 1000) + "·"
+                        + Num.f(pad.planYMm() / 1000) + "·" + Num.f(pad.depthMm() / 1000),
+                gammaConc * pad.planXMm() * pad.planYMm() * pad.depthMm() / 1e9, "kN", clauseOf("concrete_unit_weight"));
+        double soilWeight = pad.soil().map(PadFooting.Soil::unitWeightKnM3).orElse(0.0);
+        double cover = pad.soil().map(PadFooting.Soil::overburdenMm).orElse(0.0);
+        double area = pad.planXMm() * pad.planYMm() - pad.column().areaMm2();
+        this.overburdenWeight = Step.of("Ws", "γsoil·(Lx·Ly − Acol)·hs", Num.f(soilWeight) + "·"
+                + Num.f(area / 1e6) + "·" + Num.f(cover / 1000), soilWeight * area * cover / 1e9, "kN",
+                "soil over the footing, as stated");
+    }
+
+    /** The cases of {@code kind}, in submission order. */
+    List<ActionCase> cases(ActionCase.Kind kind) {
+        return pad.actions().stream().filter(a -> a.kind() == kind).toList();
+    }
+
+    /**
+     * The resultant of case {@code a} on the base with the footing's and the overburden's weight factored by
+     * {@code gammaG} (0: the column actions alone).
+     */
+    Resultant resultant(ActionCase a, double gammaG) {
+        double weights = gammaG * (footingWeight.value() + overburdenWeight.value());
+        return new Resultant(a, BaseActions.of(a.name(), a.nKn(), a.mxKnm(), a.myKnm(), a.hxKn(), a.hyKn(),
+                pad.depthMm(), PlanGeometry.point(pad.column().position()), weights));
+    }
+
+    /** The face of the column (or of its equivalent square) on side {@code sign} along {@code axis}, mm. */
+    double face(Axis axis, int sign) {
+        return axis.along(pad.column().position()) + sign * columnHalf(axis);
+    }
+
+    /**
+     * The side of the square that stands for a circular column in one-way shear and bending,
+     * {@code circular_column_square}·D (common practice); empty for a rectangular column.
+     */
+    Optional<Step> equivalentSquare() {
+        if (pad.column().shape() != Column.ColumnShape.CIRCULAR) {
+            return Optional.empty();
+        }
+        double factor = rules.number("circular_column_square");
+        return Optional.of(Step.of("c,eq", "(c,eq/D)·D, the square standing for the circular column",
+                Num.f(factor) + "·" + Num.f(pad.column().cxMm()), factor * pad.column().cxMm(), "mm",
+                clauseOf("circular_column_square")));
+    }
+
+    /** Half the column's size along an axis for bending and one-way shear, mm. */
+    double columnHalf(Axis axis) {
+        return equivalentSquare().map(s -> s.value() / 2).orElse(axis.columnHalf(pad.column()));
+    }
+
+    String clauseOf(String parameter) {
+        return rules.parameter(parameter).clause();
+    }
+}

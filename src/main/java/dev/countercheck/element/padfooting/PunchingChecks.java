@@ -1,0 +1,164 @@
+package dev.countercheck.element.padfooting;
+
+import dev.countercheck.element.Axis;
+import dev.countercheck.element.PlanGeometry;
+import dev.countercheck.element.Section;
+import dev.countercheck.eurocode.Num;
+import dev.countercheck.eurocode.Punching;
+import dev.countercheck.eurocode.Shear;
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.review.CheckBuilder;
+import dev.countercheck.review.CheckOutcome;
+import dev.countercheck.review.FindingKind;
+import dev.countercheck.statics.ColumnOutline;
+import dev.countercheck.statics.ControlPerimeter;
+import dev.countercheck.submission.ActionCase;
+import dev.countercheck.submission.Column;
+import dev.countercheck.submission.Column.ColumnShape;
+
+import java.util.Optional;
+
+/**
+ * {@code punching-face} (6.4.5(3)) and {@code punching-perimeter} (6.4.4(2)) of a pad: the column load
+ * less the ground pressure inside control perimeters at a from the column face, 0 &lt; a ≤ 2d, each
+ * clipped to the plan (the part off the footing does not count), β from the column's own moments with
+ * u and W of the whole perimeter.
+ */
+final class PunchingChecks {
+
+    private PunchingChecks() {
+    }
+
+    static CheckOutcome face(PadContext ctx) {
+        CheckBuilder b = Checks.builder("punching-face");
+        if (ctx.section.isEmpty()) {
+            return b.notChecked("no bottom reinforcement given: d is unknown").build();
+        }
+        Step d = b.trace(ctx.section.get().dMean());
+        Column c = ctx.pad.column();
+        ColumnOutline outline = PlanGeometry.outline(c);
+        Step beta = null;
+        double worst = Double.NEGATIVE_INFINITY;
+        String worstCase = "";
+        for (ActionCase a : ctx.cases(ActionCase.Kind.ULS)) {
+            if (a.nKn() <= 0) {
+                continue;
+            }
+            Step caseBeta = ControlPerimeter.beta(outline, 2 * d.value(), a.nKn(), a.mxKnm(), a.myKnm());
+            if (caseBeta.value() * a.nKn() > worst) {
+                worst = caseBeta.value() * a.nKn();
+                beta = caseBeta;
+                worstCase = a.name();
+            }
+        }
+        if (beta == null) {
+            return b.notApplicable("no ULS case presses the column onto the footing").build();
+        }
+        b.value("beta", beta);
+        Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
+                + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
+        Step u0 = b.value("u0", c.shape() == ColumnShape.CIRCULAR
+                ? Punching.u0Circular(c.cxMm()) : Punching.u0Rectangular(c.cxMm(), c.cyMm()));
+        Step nu = b.trace(Shear.nu(ctx.fck.value()));
+        b.trace(ctx.fcdShear);
+        Step factor = b.trace(ctx.rules.parameter("punching_vrd_max_factor").asStep());
+        Step vrdMax = b.value("vrd_max", Punching.vRdMax(factor.value(), nu.value(), ctx.fcdShear.value(),
+                u0.value(), d.value()));
+        return b.require(ved.value(), vrdMax.value(), FindingKind.CAPACITY, "capacity", "VEd = "
+                + Num.f(ved.value()) + " kN at the column face exceeds vRd,max·u0·d = " + Num.f(vrdMax.value())
+                + " kN.").build();
+    }
+
+    /** One control perimeter of one case: a, u on the plan, the deduction, VEd,red, β, and VRd. */
+    private record Perimeter(double aMm, double uMm, Step deduction, double vEdRedKn, Step beta, String caseName,
+                             double vRdKn) {
+        double utilisation() {
+            return beta.value() * vEdRedKn / vRdKn;
+        }
+    }
+
+    static CheckOutcome perimeter(PadContext ctx) {
+        CheckBuilder b = Checks.builder("punching-perimeter");
+        if (ctx.section.isEmpty()) {
+            return b.notChecked("no bottom reinforcement given: d and ρ are unknown").build();
+        }
+        Optional<String> unbalanced = SaggingChecks.unbalanced(ctx);
+        if (unbalanced.isPresent()) {
+            return b.notChecked(unbalanced.get()).build();
+        }
+        Section section = ctx.section.get();
+        Step d = b.trace(section.dMean());
+        Step step = b.trace(ctx.rules.parameter("punching_search_step").asStep());
+        Step rho = b.trace(Punching.rhoMean(bandRatio(ctx, Axis.X, d.value()), bandRatio(ctx, Axis.Y, d.value())));
+        Step k = b.trace(Shear.kSize(d.value()));
+        double cRdc = ctx.rules.number("c_rdc_factor") / ctx.rules.number("gamma_c");
+        Step stress = b.trace(Shear.vRdcStress(cRdc, k.value(), rho.value(), ctx.fck.value()));
+        Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), ctx.fck.value()));
+        ColumnOutline outline = PlanGeometry.outline(ctx.pad.column());
+        int count = (int) Math.ceil(2 / step.value() - 1e-9);
+        Perimeter governing = null;
+        for (int j = 1; j <= count; j++) {
+            double a = 2 * d.value() * j / count;
+            double u = ControlPerimeter.lengthInPlan(outline, a, ctx.pad.planXMm(), ctx.pad.planYMm());
+            double vRd = Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a).value() * u * d.value() / 1000;
+            for (ActionCase c : ctx.cases(ActionCase.Kind.ULS)) {
+                Ground.Contact contact = Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow();
+                Step deduction = contact.field().insidePerimeter(outline, a);
+                double reduced = c.nKn() - deduction.value();
+                if (reduced <= 1e-9 * Math.abs(c.nKn()) || u <= 0) {
+                    continue;
+                }
+                Perimeter p = new Perimeter(a, u, deduction, reduced,
+                        ControlPerimeter.beta(outline, a, reduced, c.mxKnm(), c.myKnm()), c.name(), vRd);
+                if (governing == null || p.utilisation() > governing.utilisation()) {
+                    governing = p;
+                }
+            }
+        }
+        if (governing == null) {
+            return b.notApplicable("the ground pressure within 2d = " + Num.f(2 * d.value()) + " mm of the column"
+                    + " face carries the whole column load in every ULS case").build();
+        }
+        Perimeter g = governing;
+        b.value("a", Step.of("a", "the distance of greatest β·VEd,red/VRd, searched in steps of (Δa/d)·d up to 2d",
+                count + " perimeters", g.aMm, "mm", "EN 1992-1-1 6.4.4(2)"));
+        Step full = ControlPerimeter.full(outline, g.aMm);
+        Step u = new Step("u", full.formula(), full.substituted(), g.uMm, "mm", full.clause(), full.remark());
+        if (g.uMm < full.value() - 1e-6) {
+            u = u.remarked("only the " + Num.f(g.uMm) + " mm of the " + Num.f(full.value())
+                    + " mm perimeter on the footing counts (EN 1992-1-1 6.4.2(4))");
+        }
+        b.value("u", u);
+        b.trace(g.deduction);
+        Step reduced = b.trace(Step.of("VEd,red", "N − ΔVEd", g.caseName + ": " + Num.f(g.vEdRedKn + g.deduction.value())
+                + " − " + Num.f(g.deduction.value()), g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.48)"));
+        Step beta = b.value("beta", g.beta);
+        Step ved = b.value("ved", Step.of("β·VEd,red", "β·VEd,red", Num.f(beta.value()) + "·"
+                + Num.f(reduced.value()), beta.value() * reduced.value(), "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.51)"));
+        Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), g.aMm));
+        Step vrd = b.value("vrd", Step.of("VRd", "vRd·u·d", Num.f(vRd.value()) + "·" + Num.f(g.uMm) + "·"
+                + Num.f(d.value()) + "/1000", g.vRdKn, "kN", "EN 1992-1-1 6.4.4(2)"));
+        return b.require(ved.value(), vrd.value(), FindingKind.CAPACITY, "capacity", "β·VEd,red = "
+                + Num.f(ved.value()) + " kN at the control perimeter a = " + Num.f(g.aMm) + " mm from the column"
+                + " face exceeds VRd = " + Num.f(vrd.value()) + " kN (" + g.caseName + ").").build();
+    }
+
+    /**
+     * ρ of one direction for punching (6.4.4(1)): the bars within the column width plus 3d on each side,
+     * the bars spread evenly between the side covers, over that band's width (clipped to the footing).
+     */
+    private static double bandRatio(PadContext ctx, Axis axis, double dMean) {
+        Section s = ctx.section.orElseThrow();
+        Axis across = axis == Axis.X ? Axis.Y : Axis.X;
+        double width = axis.width(ctx.pad);
+        double centre = across.along(ctx.pad.column().position());
+        double half = across.columnHalf(ctx.pad.column()) + 3 * dMean;
+        double lo = Math.max(-width / 2, centre - half);
+        double hi = Math.min(width / 2, centre + half);
+        double cover = ctx.pad.reinforcement().orElseThrow().cover().sideMm();
+        double spread = width - 2 * cover;
+        double onBand = Math.max(0, Math.min(hi, width / 2 - cover) - Math.max(lo, -width / 2 + cover));
+        double as = s.as(axis.bars()).value() * onBand / spread;
+        return as / ((hi - lo) * s.d(axis.bars()).value());
+    }
+}

@@ -1,0 +1,190 @@
+package dev.countercheck.statics;
+
+import dev.countercheck.eurocode.Punching;
+import dev.countercheck.eurocode.Step;
+
+/**
+ * A control perimeter at distance a from the column face, with rounded corners (EN 1992-1-1
+ * 6.4.2(1)): its length, the part of it that lies on a plan centred on the origin, the share of a pile
+ * head inside it, and the region it encloses (for the ground pressure inside it under a footing).
+ */
+public final class ControlPerimeter {
+
+    /** Chords per quarter arc of the enclosed region's outline (1°: the region's area is short by 0.005 %). */
+    private static final int CHORDS_PER_QUARTER = 90;
+
+    private static final int STRIPS = 400;
+    /** The margin, as a share of a + D, by which a head must clear the perimeter to skip the strips. */
+    private static final double CLEARANCE = 1e-9;
+
+    private ControlPerimeter() {
+    }
+
+    /** Distance from {@code p} to the column outline, 0 inside the column, mm. */
+    public static double distanceFromColumn(ColumnOutline c, PlanPoint p) {
+        double dx = p.xMm() - c.centre().xMm();
+        double dy = p.yMm() - c.centre().yMm();
+        if (c.circular()) {
+            return Math.max(0, Math.hypot(dx, dy) - c.cxMm() / 2);
+        }
+        double ox = Math.max(0, Math.abs(dx) - c.cxMm() / 2);
+        double oy = Math.max(0, Math.abs(dy) - c.cyMm() / 2);
+        return Math.hypot(ox, oy);
+    }
+
+    /** The full perimeter at distance a (EN 1992-1-1 6.4.2(1)), as a trace step. */
+    public static Step full(ColumnOutline c, double aMm) {
+        return c.circular()
+                ? Punching.u1Circular(c.cxMm(), aMm)
+                : Punching.u1Rectangular(c.cxMm(), c.cyMm(), aMm);
+    }
+
+    /**
+     * β for the column's moments at the perimeter at distance a (EN 1992-1-1 6.4.3(3), Exp. (6.39) with
+     * W of Exp. (6.41) and k of Table 6.1, summed over both axes; 6.4.4(2), Exp. (6.51) within 2d); a
+     * circular column by Exp. (6.42) with the resultant eccentricity. At the face a = 2d (u1, W1).
+     *
+     * @param vEdKn VEd (VEd,red at a perimeter within 2d), kN, &gt; 0
+     */
+    public static Step beta(ColumnOutline c, double aMm, double vEdKn, double mxKnm, double myKnm) {
+        if (c.circular()) {
+            return Punching.betaCircular(Math.hypot(mxKnm, myKnm) * 1000 / vEdKn, c.cxMm(), aMm);
+        }
+        Step u = Punching.u1Rectangular(c.cxMm(), c.cyMm(), aMm);
+        // My turns about y: the eccentricity lies along x, c1 = cx; Mx: along y, c1 = cy.
+        Step alongX = Punching.betaEccentric(Punching.kEccentricity(c.cxMm(), c.cyMm()).value(), myKnm, vEdKn,
+                u.value(), Punching.w1Rectangular(c.cxMm(), c.cyMm(), aMm).value());
+        Step alongY = Punching.betaEccentric(Punching.kEccentricity(c.cyMm(), c.cxMm()).value(), mxKnm, vEdKn,
+                u.value(), Punching.w1Rectangular(c.cyMm(), c.cxMm(), aMm).value());
+        return Step.of("β", "1 + kx·(|My|/VEd)·(u/Wx) + ky·(|Mx|/VEd)·(u/Wy)", alongX.substituted() + " + "
+                + alongY.substituted().substring(4), alongX.value() + alongY.value() - 1, "-",
+                "EN 1992-1-1 6.4.3(3), Exp. (6.39), (6.41), Table 6.1; 6.4.4(2), Exp. (6.51)");
+    }
+
+    /**
+     * Length of the perimeter at distance a that lies within the plan |x| ≤ planX/2, |y| ≤ planY/2
+     * (the cap, centred on the origin; a free edge cuts the perimeter off, EN 1992-1-1 6.4.2(4)), mm.
+     * The perimeter is four straight sides and four quarter arcs of radius a about the column corners
+     * (a circular column: four quarter arcs of radius D/2 + a about its centre); on a quarter arc
+     * x = xc + sx·r·cos φ and y = yc + sy·r·sin φ, φ from 0 to π/2, so the part within the plan is
+     * acos((X − sx·xc)/r) ≤ φ ≤ asin((Y − sy·yc)/r), with X, Y the half plan. The column lies on the cap.
+     */
+    public static double lengthInPlan(ColumnOutline c, double aMm, double planXMm, double planYMm) {
+        boolean circular = c.circular();
+        double hx = circular ? 0 : c.cxMm() / 2;
+        double hy = circular ? 0 : c.cyMm() / 2;
+        double r = circular ? c.cxMm() / 2 + aMm : aMm;
+        double x0 = c.centre().xMm();
+        double y0 = c.centre().yMm();
+        double halfX = planXMm / 2;
+        double halfY = planYMm / 2;
+        double length = 0;
+        for (int sx : new int[] {1, -1}) {
+            length += Math.abs(x0 + sx * (hx + aMm)) <= halfX ? overlap(y0 - hy, y0 + hy, halfY) : 0;
+            for (int sy : new int[] {1, -1}) {
+                double from = Math.acos(clamp((halfX - sx * (x0 + sx * hx)) / r));
+                double to = Math.asin(clamp((halfY - sy * (y0 + sy * hy)) / r));
+                length += r * Math.max(0, to - from);
+            }
+        }
+        for (int sy : new int[] {1, -1}) {
+            length += Math.abs(y0 + sy * (hy + aMm)) <= halfY ? overlap(x0 - hx, x0 + hx, halfX) : 0;
+        }
+        return length;
+    }
+
+    /** Length of [lo, hi] within [−half, half]. */
+    private static double overlap(double lo, double hi, double half) {
+        return Math.max(0, Math.min(hi, half) - Math.max(lo, -half));
+    }
+
+    private static double clamp(double v) {
+        return Math.max(-1, Math.min(1, v));
+    }
+
+    /**
+     * Share (0 to 1) of a circular pile head's area that lies inside the control perimeter at distance
+     * a from the column face (EN 1992-1-1 6.4.4(2): the pile relieves the load by that share of its
+     * reaction): the mean of {@value #STRIPS} strips across x and as many across y, so that the share
+     * turns with the cap; the region inside the perimeter is convex, so each strip meets it once.
+     * A head clear of the perimeter (its centre farther than a + D/2 from the column) has none of its
+     * area inside, and a head clear within it (nearer than a − D/2) all of it: the strips are summed
+     * only for a head the perimeter crosses.
+     *
+     * @param centre     pile centre
+     * @param diameterMm pile head diameter, mm
+     */
+    public static double headShareInside(ColumnOutline c, double aMm, PlanPoint centre, double diameterMm) {
+        double distance = distanceFromColumn(c, centre);
+        double clear = CLEARANCE * (aMm + diameterMm);
+        if (distance > aMm + diameterMm / 2 + clear) {
+            return 0;
+        }
+        if (distance < aMm - diameterMm / 2 - clear) {
+            return 1;
+        }
+        return (stripShare(c, aMm, centre, diameterMm)
+                + stripShare(c.turned(), aMm, new PlanPoint(centre.yMm(), centre.xMm()), diameterMm)) / 2;
+    }
+
+    /** The share of the head inside the perimeter by strips across x. */
+    private static double stripShare(ColumnOutline c, double aMm, PlanPoint centre, double diameterMm) {
+        double r = diameterMm / 2;
+        double width = diameterMm / STRIPS;
+        double whole = 0;
+        double inside = 0;
+        for (int i = 0; i < STRIPS; i++) {
+            double x = centre.xMm() - r + (i + 0.5) * width;
+            double chord = Math.sqrt(Math.max(0, r * r - sq(x - centre.xMm())));
+            whole += 2 * chord;
+            double half = halfHeightInside(c, aMm, x);
+            if (half >= 0) {
+                double lo = Math.max(centre.yMm() - chord, c.centre().yMm() - half);
+                double hi = Math.min(centre.yMm() + chord, c.centre().yMm() + half);
+                inside += Math.max(0, hi - lo);
+            }
+        }
+        return whole == 0 ? 0 : inside / whole;
+    }
+
+    /** Half the height of the region within distance a of the column at abscissa x, mm; −1 outside it. */
+    private static double halfHeightInside(ColumnOutline c, double aMm, double x) {
+        double dx = Math.abs(x - c.centre().xMm());
+        if (c.circular()) {
+            double radius = c.cxMm() / 2 + aMm;
+            return dx > radius ? -1 : Math.sqrt(radius * radius - dx * dx);
+        }
+        double beyond = Math.max(0, dx - c.cxMm() / 2);
+        return beyond > aMm ? -1 : c.cyMm() / 2 + Math.sqrt(aMm * aMm - beyond * beyond);
+    }
+
+    /**
+     * The region within distance a of the column (the area the control perimeter encloses), as a convex
+     * polygon whose arcs are drawn by chords of 1°, counter-clockwise.
+     */
+    static ConvexPolygon region(ColumnOutline c, double aMm) {
+        double x0 = c.centre().xMm();
+        double y0 = c.centre().yMm();
+        if (c.circular()) {
+            return ConvexPolygon.regular(x0, y0, c.cxMm() / 2 + aMm, 4 * CHORDS_PER_QUARTER);
+        }
+        double hx = c.cxMm() / 2;
+        double hy = c.cyMm() / 2;
+        int n = CHORDS_PER_QUARTER + 1;
+        double[] xs = new double[4 * n];
+        double[] ys = new double[4 * n];
+        double[][] corners = {{hx, hy}, {-hx, hy}, {-hx, -hy}, {hx, -hy}};
+        for (int q = 0; q < 4; q++) {
+            for (int i = 0; i < n; i++) {
+                double phi = Math.PI / 2 * (q + (double) i / CHORDS_PER_QUARTER);
+                xs[q * n + i] = x0 + corners[q][0] + aMm * Math.cos(phi);
+                ys[q * n + i] = y0 + corners[q][1] + aMm * Math.sin(phi);
+            }
+        }
+        return ConvexPolygon.of(xs, ys);
+    }
+
+    private static double sq(double v) {
+        return v * v;
+    }
+}

@@ -1,0 +1,129 @@
+package dev.countercheck.statics;
+
+import java.util.function.DoubleBinaryOperator;
+
+/**
+ * A convex polygon in plan (vertices counter-clockwise, mm or any consistent unit), clipped by half-planes
+ * and integrated exactly: a triangle fan with the edge-midpoint rule, ∫g = (A/3)·Σ g(edge midpoints) per
+ * triangle, which is exact for every g of degree two or less (a linear pressure times a linear lever arm).
+ */
+final class ConvexPolygon {
+
+    private final double[] xs;
+    private final double[] ys;
+
+    private ConvexPolygon(double[] xs, double[] ys) {
+        this.xs = xs;
+        this.ys = ys;
+    }
+
+    /** The rectangle x0 ≤ x ≤ x1, y0 ≤ y ≤ y1. */
+    static ConvexPolygon rectangle(double x0, double y0, double x1, double y1) {
+        return new ConvexPolygon(new double[] {x0, x1, x1, x0}, new double[] {y0, y0, y1, y1});
+    }
+
+    /** The polygon through the given vertices, counter-clockwise. */
+    static ConvexPolygon of(double[] xs, double[] ys) {
+        return new ConvexPolygon(xs.clone(), ys.clone());
+    }
+
+    /** A regular polygon of n vertices on the circle of radius r about (cx, cy), the first on the x axis. */
+    static ConvexPolygon regular(double cx, double cy, double r, int n) {
+        double[] x = new double[n];
+        double[] y = new double[n];
+        for (int i = 0; i < n; i++) {
+            double phi = 2 * Math.PI * i / n;
+            x[i] = cx + r * Math.cos(phi);
+            y[i] = cy + r * Math.sin(phi);
+        }
+        return new ConvexPolygon(x, y);
+    }
+
+    int size() {
+        return xs.length;
+    }
+
+    double x(int i) {
+        return xs[i];
+    }
+
+    double y(int i) {
+        return ys[i];
+    }
+
+    /** The part where a + b·x + c·y ≥ 0 (Sutherland–Hodgman against one half-plane). */
+    ConvexPolygon clip(double a, double b, double c) {
+        int n = xs.length;
+        double[] nx = new double[2 * n];
+        double[] ny = new double[2 * n];
+        int m = 0;
+        for (int i = 0; i < n; i++) {
+            int j = (i + 1) % n;
+            double fi = a + b * xs[i] + c * ys[i];
+            double fj = a + b * xs[j] + c * ys[j];
+            if (fi >= 0) {
+                nx[m] = xs[i];
+                ny[m++] = ys[i];
+            }
+            if ((fi >= 0) != (fj >= 0)) {
+                double t = fi / (fi - fj);
+                nx[m] = xs[i] + t * (xs[j] - xs[i]);
+                ny[m++] = ys[i] + t * (ys[j] - ys[i]);
+            }
+        }
+        return new ConvexPolygon(java.util.Arrays.copyOf(nx, m), java.util.Arrays.copyOf(ny, m));
+    }
+
+    /** The intersection with another convex polygon (clipped by each of its edges). */
+    ConvexPolygon intersect(ConvexPolygon other) {
+        ConvexPolygon result = this;
+        int n = other.xs.length;
+        for (int i = 0; i < n && result.size() >= 3; i++) {
+            int j = (i + 1) % n;
+            double ex = other.xs[j] - other.xs[i];
+            double ey = other.ys[j] - other.ys[i];
+            // Left of the edge i → j (inside for a counter-clockwise polygon): ex·(y − yi) − ey·(x − xi) ≥ 0.
+            result = result.clip(ey * other.xs[i] - ex * other.ys[i], -ey, ex);
+        }
+        return result;
+    }
+
+    /** ∫ g dA for g of degree ≤ 2 (exact), 0 for a polygon of fewer than three vertices. */
+    double integrate(DoubleBinaryOperator g) {
+        double sum = 0;
+        for (int i = 1; i + 1 < xs.length; i++) {
+            double area = 0.5 * ((xs[i] - xs[0]) * (ys[i + 1] - ys[0]) - (xs[i + 1] - xs[0]) * (ys[i] - ys[0]));
+            sum += area / 3 * (g.applyAsDouble((xs[0] + xs[i]) / 2, (ys[0] + ys[i]) / 2)
+                    + g.applyAsDouble((xs[i] + xs[i + 1]) / 2, (ys[i] + ys[i + 1]) / 2)
+                    + g.applyAsDouble((xs[i + 1] + xs[0]) / 2, (ys[i + 1] + ys[0]) / 2));
+        }
+        return sum;
+    }
+
+    double area() {
+        return integrate((x, y) -> 1);
+    }
+
+    /** The largest of f over the vertices. */
+    double max(DoubleBinaryOperator f) {
+        double best = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < xs.length; i++) {
+            best = Math.max(best, f.applyAsDouble(xs[i], ys[i]));
+        }
+        return best;
+    }
+
+    /** Whether (x, y) lies in the polygon (on its edges included, within a relative 1e-12). */
+    boolean contains(double x, double y) {
+        int n = xs.length;
+        for (int i = 0; i < n; i++) {
+            int j = (i + 1) % n;
+            double cross = (xs[j] - xs[i]) * (y - ys[i]) - (ys[j] - ys[i]) * (x - xs[i]);
+            double scale = Math.hypot(xs[j] - xs[i], ys[j] - ys[i]) * (1 + Math.hypot(x - xs[i], y - ys[i]));
+            if (cross < -1e-12 * scale) {
+                return false;
+            }
+        }
+        return n >= 3;
+    }
+}
