@@ -69,18 +69,24 @@ public final class ProjectBenchmark {
         floor(file, dir.resolve("floor.json"), reportBytes);
         List<Long> reviewTimes = new ArrayList<>();
         List<Long> floorTimes = new ArrayList<>();
+        List<Long> reviewCpu = new ArrayList<>();
+        List<Long> floorCpu = new ArrayList<>();
         long peak = 0;
         for (int i = 0; i < runs; i++) {
             System.gc();
             resetPeaks();
+            long c0 = processCpu();
             long t0 = System.nanoTime();
             review(file, out, new StringWriter());
             reviewTimes.add(System.nanoTime() - t0);
+            reviewCpu.add(processCpu() - c0);
             peak = Math.max(peak, heapPeak());
             System.gc();
+            long c1 = processCpu();
             long t1 = System.nanoTime();
             floor(file, dir.resolve("floor.json"), reportBytes);
             floorTimes.add(System.nanoTime() - t1);
+            floorCpu.add(processCpu() - c1);
         }
         double review = median(reviewTimes);
         double floor = median(floorTimes);
@@ -90,6 +96,9 @@ public final class ProjectBenchmark {
         System.out.printf("  floor (Jackson read + same-sized JSON write): median %.0f ms (%s)%n", floor / 1e6,
                 spread(floorTimes));
         System.out.printf("  ratio review/floor %.1f; peak heap during a review %,d MB%n", review / floor, peak >> 20);
+        System.out.printf("  CPU time of the process (all threads, less disturbed by a busy machine): review median"
+                + " %.0f ms, floor %.0f ms, ratio %.1f%n", median(reviewCpu) / 1e6, median(floorCpu) / 1e6,
+                median(reviewCpu) / median(floorCpu));
         System.out.printf("  HTML: %d file(s), the largest %,d bytes; JSON %,d bytes%n", count(out, ".html"),
                 largest(out, ".html"), sizeOf(out, ".json"));
     }
@@ -135,6 +144,12 @@ public final class ProjectBenchmark {
             }
             return total;
         }
+    }
+
+    /** The CPU time of every thread of this JVM (compiler and collector included), in nanoseconds. */
+    private static long processCpu() {
+        return ((com.sun.management.OperatingSystemMXBean) ManagementFactory.getOperatingSystemMXBean())
+                .getProcessCpuTime();
     }
 
     private static long count(Path dir, String extension) throws IOException {

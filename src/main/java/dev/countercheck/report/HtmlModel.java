@@ -25,7 +25,10 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
 import java.util.function.Supplier;
+import java.util.function.ToIntFunction;
 import java.util.stream.IntStream;
 
 /**
@@ -42,10 +45,14 @@ import java.util.stream.IntStream;
  * @param pageHeading the running head of printed pages, already a quoted CSS string
  * @param cautions    the elements' cautions, for the closing section, elements without any left out
  * @param round       the sign-off, the comparison with the previous revision, and what was not checked
+ * @param parts       the parts of a report on several pages, for the project page's table (none on one page)
  */
 public record HtmlModel(Header header, String pageHeading, List<Count> verdictCounts, List<Count> severityCounts,
                         List<String> assumptions, List<FindingRow> register, List<ElementView> elements,
-                        List<ElementCautions> cautions, RoundView round, Paging paging) {
+                        List<ElementCautions> cautions, RoundView round, List<PartRow> parts, Paging paging) {
+
+    /** The severities page one lists: critical and major. */
+    private static final Set<String> PROBLEMS = Set.of(Severity.CRITICAL.label(), Severity.MAJOR.label());
 
     /** The link to {@code anchor} from the page being written (see {@link Paging#href}). */
     public String href(String anchor) {
@@ -53,14 +60,43 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     }
 
     /**
-     * The same report on part {@code k} (from 1) of its pages: the elements of that part only; the
-     * lists of the project page are shared, not built again.
+     * The same report of {@code review} on part {@code k} (from 1) of its pages: the elements of that
+     * part, their findings, cautions and checks not performed; the lists of the project page are
+     * cut, not built again.
      */
-    HtmlModel part(int k) {
-        int from = (k - 1) * Paging.PER_PART;
-        List<ElementView> shown = elements.subList(from, Math.min(elements.size(), from + Paging.PER_PART));
-        return new HtmlModel(header, pageHeading, verdictCounts, severityCounts, assumptions, register, shown,
-                cautions, round, paging.atPart(k));
+    HtmlModel part(Review review, int k) {
+        List<ElementReview> reviewed = review.elements();
+        int from = Paging.firstOf(k);
+        int to = Math.min(reviewed.size(), from + Paging.PER_PART);
+        Rows before = Rows.of(reviewed.subList(0, from));
+        Rows within = Rows.of(reviewed.subList(from, to));
+        RoundView partRound = new RoundView(round.checker(), round.reviewRef(), round.previous(), round.changeCounts(),
+                round.closed(), round.orphans(), within.cut(round.notChecked(), before.notChecked(), Rows::notChecked),
+                round.outOfScope());
+        return new HtmlModel(header, pageHeading, verdictCounts, severityCounts, assumptions,
+                within.cut(register, before.findings(), Rows::findings), elements.subList(from, to),
+                within.cut(cautions, before.cautioned(), Rows::cautioned), partRound, parts, paging.atPart(k));
+    }
+
+    /** How many rows of the register, the cautions and the checks not performed some elements take. */
+    private record Rows(int findings, int cautioned, int notChecked) {
+
+        static Rows of(List<ElementReview> elements) {
+            int findings = 0;
+            int cautioned = 0;
+            int notChecked = 0;
+            for (ElementReview e : elements) {
+                findings += e.findings().size();
+                cautioned += e.cautions().isEmpty() ? 0 : 1;
+                notChecked += (int) e.checks().stream().filter(HtmlModel::notPerformed).count();
+            }
+            return new Rows(findings, cautioned, notChecked);
+        }
+
+        /** The rows of {@code list} these elements take, starting at {@code from}. */
+        <T> List<T> cut(List<T> list, int from, ToIntFunction<Rows> count) {
+            return list.subList(from, from + count.applyAsInt(this));
+        }
     }
 
     public record Header(String title, String reference, String revision, String preparedBy, String submissionDate,
@@ -72,9 +108,34 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     public record Count(String label, int count) {
     }
 
-    /** Every critical and major finding, in the register's order: page one lists them. */
+    /**
+     * Every critical and major finding, in the register's order: page one lists them (on a report of
+     * several pages, the first {@link Paging#PROBLEMS_SHOWN}).
+     */
     public List<FindingRow> problems() {
-        return register.stream().filter(FindingRow::isProblem).toList();
+        List<FindingRow> all = register.stream().filter(FindingRow::isProblem).toList();
+        return paging.onePage() ? all : all.subList(0, Math.min(all.size(), Paging.PROBLEMS_SHOWN));
+    }
+
+    /** How many critical and major findings page one leaves out (only a report of several pages leaves any out). */
+    public long problemsNotShown() {
+        return register.stream().filter(FindingRow::isProblem).count() - problems().size();
+    }
+
+    /**
+     * A part of a report on several pages, a row of the project page's table of parts.
+     *
+     * @param governing the largest utilisation of the part's checks, as a list of one (none when no check has one)
+     * @param notConforming how many of its elements do not conform
+     * @param problems how many of its findings are critical or major
+     */
+    public record PartRow(int number, String file, String firstId, String lastId, List<Governing> governing,
+                          int notConforming, int problems, int findings) {
+    }
+
+    /** The check with the largest utilisation among some elements, and its element. */
+    public record Governing(String elementId, String elementAnchor, String checkId, String checkAnchor,
+                            String utilisation, String bar, boolean over) {
     }
 
     /**
@@ -89,7 +150,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
 
         /** Whether it is critical or major, for page one. */
         boolean isProblem() {
-            return severity.equals(Severity.CRITICAL.label()) || severity.equals(Severity.MAJOR.label());
+            return PROBLEMS.contains(severity);
         }
     }
 
@@ -218,9 +279,43 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 .filter(i -> !reviewed.get(i).cautions().isEmpty())
                 .mapToObj(i -> new ElementCautions(reviewed.get(i).id(), "e" + (i + 1), reviewed.get(i).cautions()))
                 .toList();
+        List<PartRow> parts = IntStream.rangeClosed(1, paging.parts()).mapToObj(k -> partRow(reviewed, k, paging))
+                .toList();
         return new HtmlModel(header(review), PageHeading.css(review), verdictCounts(review.summary()),
                 severityCounts(review.summary()), review.assumptions(), register, elements, cautions,
-                roundView(round, reviewed), paging);
+                roundView(round, reviewed), parts, paging);
+    }
+
+    private static PartRow partRow(List<ElementReview> reviewed, int k, Paging paging) {
+        int from = Paging.firstOf(k);
+        int to = Math.min(reviewed.size(), from + Paging.PER_PART);
+        Optional<Governing> governing = Optional.empty();
+        double largest = Double.NEGATIVE_INFINITY;
+        int notConforming = 0;
+        int problems = 0;
+        int findings = 0;
+        for (int i = from; i < to; i++) {
+            ElementReview e = reviewed.get(i);
+            for (int j = 0; j < e.checks().size(); j++) {
+                OptionalDouble u = e.checks().get(j).utilisation();
+                if (u.isPresent() && u.getAsDouble() > largest) {
+                    largest = u.getAsDouble();
+                    governing = Optional.of(new Governing(e.id(), "e" + (i + 1), e.checks().get(j).id(),
+                            checkAnchor("e" + (i + 1), j), ReportNumbers.utilisation(largest),
+                            ReportNumbers.barPercent(largest), largest > 1));
+                }
+            }
+            notConforming += e.verdict() == Verdict.DOES_NOT_CONFORM ? 1 : 0;
+            problems += (int) e.findings().stream().filter(f -> PROBLEMS.contains(f.severity().label())).count();
+            findings += e.findings().size();
+        }
+        return new PartRow(k, paging.partFile(k), reviewed.get(from).id(), reviewed.get(to - 1).id(),
+                governing.stream().toList(), notConforming, problems, findings);
+    }
+
+    /** Whether a check was not performed or did not apply: the review lists it in section 3.3. */
+    private static boolean notPerformed(CheckResult check) {
+        return check.status() == CheckStatus.NOT_CHECKED || check.status() == CheckStatus.NOT_APPLICABLE;
     }
 
     private static RoundView roundView(ReviewRound round, List<ElementReview> elements) {
@@ -239,7 +334,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
             ElementReview e = elements.get(i);
             for (int j = 0; j < e.checks().size(); j++) {
                 CheckResult c = e.checks().get(j);
-                if (c.status() == CheckStatus.NOT_CHECKED || c.status() == CheckStatus.NOT_APPLICABLE) {
+                if (notPerformed(c)) {
                     notChecked.add(new NotCheckedRow(e.id(), "e" + (i + 1), c.id(), checkAnchor("e" + (i + 1), j),
                             c.status().label(), text(c.reason())));
                 }

@@ -71,7 +71,7 @@ public final class HtmlReportWriter {
         List<Page> pages = new ArrayList<>();
         pages.add(new Page(fileName, out -> render(TEMPLATE, model, out)));
         for (int k = 1; k <= model.paging().parts(); k++) {
-            HtmlModel part = model.part(k);
+            HtmlModel part = model.part(review, k);
             pages.add(new Page(model.paging().partFile(k), out -> render(TEMPLATE, part, out)));
         }
         return pages;

@@ -6,10 +6,12 @@ import java.util.regex.Pattern;
 /**
  * Which pages a report is written on, and which of them is being written. A project of up to
  * {@link #PER_PART} elements is one page. A larger one is a project page ({@code <name>.html}:
- * cover, verdict, contents, findings register, assumptions and cautions) and parts of
- * {@link #PER_PART} elements ({@code <name>.part-<k>.html}: the elements' sections and their
- * calculations), so that no file grows with the project beyond a few megabytes per part and the
- * project page opens at once. Links between the pages are made here ({@link #href}).
+ * cover with the first {@link #PROBLEMS_SHOWN} critical and major findings and a table of the parts,
+ * contents, assumptions) and parts of {@link #PER_PART} elements ({@code <name>.part-<k>.html}:
+ * the findings register, sections, cautions, checks not performed and calculations of those
+ * elements), so that no file grows with the project (a part stays within a few megabytes, the
+ * project page within about one) and the project page opens at once. Links between the pages are
+ * made here ({@link #href}).
  *
  * <p>Public only because the template reads it.
  *
@@ -25,8 +27,14 @@ public record Paging(String projectFile, int parts, int part) {
      */
     static final int PER_PART = 30;
 
-    /** An anchor on an element's part page: the element, its checks and steps, their traces and calculations. */
-    private static final Pattern ELEMENT_ANCHOR = Pattern.compile("(?:trace-|calc-)?e(\\d+)(?:-.*)?");
+    /** The most critical and major findings listed on the project page of a report on several pages. */
+    static final int PROBLEMS_SHOWN = 100;
+
+    /**
+     * An anchor on an element's part page: the element, its checks and steps, their traces and
+     * calculations, its cautions.
+     */
+    private static final Pattern ELEMENT_ANCHOR = Pattern.compile("(?:trace-|calc-|cautions-)?e(\\d+)(?:-.*)?");
 
     /** A report on one page, whatever its size (the page the PDF is laid out from). */
     static final Paging ONE_PAGE = new Paging("", 0, 0);
@@ -45,14 +53,24 @@ public record Paging(String projectFile, int parts, int part) {
         return PER_PART;
     }
 
-    /** Whether the page shows the cover, contents, register, assumptions and cautions. */
+    /** Whether the report is one page. */
+    public boolean onePage() {
+        return parts == 0;
+    }
+
+    /** Whether the page shows the cover, contents and assumptions. */
     public boolean projectPage() {
         return part == 0;
     }
 
-    /** Whether the page shows elements and their calculations. */
+    /** Whether the page shows elements: their findings, sections, cautions, checks not performed and calculations. */
     public boolean elementPage() {
         return parts == 0 || part > 0;
+    }
+
+    /** The index (from 0) of the first element of part {@code k} (from 1). */
+    static int firstOf(int k) {
+        return (k - 1) * PER_PART;
     }
 
     /** The file name of part {@code k} (from 1). */

@@ -68,14 +68,28 @@ class HtmlPagesTest {
         Document project = pages.get("r.html");
         assertThat(project.select("section.element")).isEmpty();
         assertThat(project.select("#register, #assumptions, #cover")).hasSize(3);
-        assertThat(project.select("nav.contents a[href^=r.part-]")).hasSizeGreaterThan(2 * Paging.PER_PART);
+        assertThat(project.select("nav.contents p a[href^=r.part-]")).hasSize(3);
+        assertThat(project.select("table.parts-table tbody tr")).hasSize(3);
+        assertThat(project.select("table.register-table, table.project-table:not(.parts-table)")).isEmpty();
         assertThat(sections(pages.get("r.part-1.html"))).hasSize(Paging.PER_PART).first().isEqualTo("e1");
         assertThat(sections(pages.get("r.part-2.html"))).hasSize(Paging.PER_PART).first()
                 .isEqualTo("e" + (Paging.PER_PART + 1));
         assertThat(sections(pages.get("r.part-3.html"))).containsExactly("e" + (2 * Paging.PER_PART + 1));
         assertThat(pages.get("r.part-2.html").selectFirst("section.element .secno").text())
                 .isEqualTo("2." + (Paging.PER_PART + 1));
-        assertThat(pages.get("r.part-3.html").select("#cover, #register")).isEmpty();
+        assertThat(pages.get("r.part-3.html").select("#cover")).isEmpty();
+        List<String> registerRows = new ArrayList<>();
+        for (int k = 1; k <= 3; k++) {
+            Document part = pages.get("r.part-" + k + ".html");
+            List<String> ids = sections(part);
+            for (Element row : part.select("table.register-table tbody tr")) {
+                assertThat(ids).as("the element of a register row of part %d", k)
+                        .contains(row.select("td").get(1).selectFirst("a").attr("href").substring(1));
+                registerRows.add(row.selectFirst("td").text());
+            }
+            assertThat(part.select("div.cautions")).allSatisfy(c -> assertThat(ids).contains(c.id().substring(9)));
+        }
+        assertThat(registerRows).hasSize(review.elements().stream().mapToInt(e -> e.findings().size()).sum());
         for (Map.Entry<String, Document> page : pages.entrySet()) {
             for (Element link : page.getValue().select("a[href]")) {
                 String href = link.attr("href");
@@ -88,6 +102,23 @@ class HtmlPagesTest {
             }
             assertThat(ReportMarkers.replaceable(dir.resolve(page.getKey()))).as(page.getKey()).isTrue();
         }
+    }
+
+    /** The project page lists the first critical and major findings and one row per part, whatever the project's size. */
+    @Test
+    void theProjectPageHoldsNoRowPerElement() throws IOException {
+        int problemsPerPair = (int) ReviewFixture.review().elements().stream().flatMap(e -> e.findings().stream())
+                .filter(f -> f.severity().label().equals("critical") || f.severity().label().equals("major")).count();
+        int elements = 2 * (Paging.PROBLEMS_SHOWN / problemsPerPair + 1);
+        Review review = reviewOf(elements);
+
+        Document project = write(review).get("r.html");
+
+        int parts = (elements + Paging.PER_PART - 1) / Paging.PER_PART;
+        assertThat(project.select("table.problems-table tbody tr")).hasSize(Paging.PROBLEMS_SHOWN);
+        assertThat(project.select("section.problems p.small").text()).contains("The first " + Paging.PROBLEMS_SHOWN
+                + " of " + (elements / 2 * problemsPerPair) + " critical and major findings");
+        assertThat(project.select("tr")).hasSizeLessThan(Paging.PROBLEMS_SHOWN + parts + 40);
     }
 
     private static List<String> sections(Document page) {
