@@ -60,22 +60,27 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     }
 
     /**
-     * The same report of {@code review} on part {@code k} (from 1) of its pages: the elements of that
-     * part, their findings, cautions and checks not performed; the lists of the project page are
-     * cut, not built again.
+     * The same report of {@code review} on each part of its pages, in order: the elements of that
+     * part, their findings, cautions and checks not performed; the lists of the project page are cut,
+     * not built again.
      */
-    HtmlModel part(Review review, int k) {
+    List<HtmlModel> parts(Review review) {
         List<ElementReview> reviewed = review.elements();
-        int from = Paging.firstOf(k);
-        int to = Math.min(reviewed.size(), from + Paging.PER_PART);
-        Rows before = Rows.of(reviewed.subList(0, from));
-        Rows within = Rows.of(reviewed.subList(from, to));
-        RoundView partRound = new RoundView(round.checker(), round.reviewRef(), round.previous(), round.changeCounts(),
-                round.closed(), round.orphans(), within.cut(round.notChecked(), before.notChecked(), Rows::notChecked),
-                round.outOfScope());
-        return new HtmlModel(header, pageHeading, verdictCounts, severityCounts, assumptions,
-                within.cut(register, before.findings(), Rows::findings), elements.subList(from, to),
-                within.cut(cautions, before.cautioned(), Rows::cautioned), partRound, parts, paging.atPart(k));
+        List<HtmlModel> pages = new ArrayList<>();
+        Rows before = new Rows(0, 0, 0);
+        for (int k = 1; k <= paging.parts(); k++) {
+            int from = Paging.firstOf(k);
+            int to = Math.min(reviewed.size(), from + Paging.PER_PART);
+            Rows within = Rows.of(reviewed.subList(from, to));
+            RoundView partRound = new RoundView(round.checker(), round.reviewRef(), round.previous(),
+                    round.changeCounts(), round.closed(), round.orphans(),
+                    within.cut(round.notChecked(), before.notChecked(), Rows::notChecked), round.outOfScope());
+            pages.add(new HtmlModel(header, pageHeading, verdictCounts, severityCounts, assumptions,
+                    within.cut(register, before.findings(), Rows::findings), elements.subList(from, to),
+                    within.cut(cautions, before.cautioned(), Rows::cautioned), partRound, parts, paging.atPart(k)));
+            before = before.and(within);
+        }
+        return pages;
     }
 
     /** How many rows of the register, the cautions and the checks not performed some elements take. */
@@ -91,6 +96,10 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 notChecked += (int) e.checks().stream().filter(HtmlModel::notPerformed).count();
             }
             return new Rows(findings, cautioned, notChecked);
+        }
+
+        Rows and(Rows more) {
+            return new Rows(findings + more.findings, cautioned + more.cautioned, notChecked + more.notChecked);
         }
 
         /** The rows of {@code list} these elements take, starting at {@code from}. */

@@ -70,9 +70,8 @@ public final class HtmlReportWriter {
         HtmlModel model = HtmlModel.of(review, round, Paging.of(fileName, review.elements().size()));
         List<Page> pages = new ArrayList<>();
         pages.add(new Page(fileName, out -> render(TEMPLATE, model, out)));
-        for (int k = 1; k <= model.paging().parts(); k++) {
-            HtmlModel part = model.part(review, k);
-            pages.add(new Page(model.paging().partFile(k), out -> render(TEMPLATE, part, out)));
+        for (HtmlModel part : model.parts(review)) {
+            pages.add(new Page(model.paging().partFile(part.paging().part()), out -> render(TEMPLATE, part, out)));
         }
         return pages;
     }

@@ -14,6 +14,9 @@ import java.math.RoundingMode;
  */
 final class Svg {
 
+    /** How near a half a value's tenths may lie and still be rounded in double arithmetic. */
+    private static final double TIE_MARGIN = 1e-6;
+
     private final StringBuilder out = new StringBuilder();
 
     /**
@@ -51,8 +54,27 @@ final class Svg {
         return s.toString();
     }
 
-    /** A canvas coordinate to one decimal: {@code 12.345 → "12.3"}, {@code -0.01 → "0"}. */
+    /**
+     * A canvas coordinate to one decimal: {@code 12.345 → "12.3"}, {@code -0.01 → "0"}. Tenths far
+     * from a half (and a coordinate below 10⁸) are rounded in double arithmetic, which then decides
+     * the digit as the decimal rounding would; the others are rounded exactly ({@link #exactNum}).
+     */
     static String num(double value) {
+        double tenths = value * 10;
+        double magnitude = Math.abs(tenths);
+        if (magnitude < 1e9 && Math.abs(magnitude - Math.floor(magnitude) - 0.5) > TIE_MARGIN) {
+            long n = Math.abs(Math.round(tenths));
+            if (n == 0) {
+                return "0";
+            }
+            String whole = (value < 0 ? "-" : "") + n / 10;
+            return n % 10 == 0 ? whole : whole + "." + n % 10;
+        }
+        return exactNum(value);
+    }
+
+    /** {@link #num} by decimal rounding of the value as Java writes it. */
+    static String exactNum(double value) {
         BigDecimal rounded = BigDecimal.valueOf(value).setScale(1, RoundingMode.HALF_EVEN).stripTrailingZeros();
         return rounded.signum() == 0 ? "0" : rounded.toPlainString();
     }

@@ -23,6 +23,23 @@ import static org.assertj.core.api.Assertions.within;
  */
 class DrawingsTest {
 
+    /** The fast rounding of coordinates writes what the decimal rounding writes, ties and near-ties included. */
+    @Test
+    void coordinatesAreWrittenAsTheDecimalRoundingWritesThem() {
+        java.util.Random random = new java.util.Random(14);
+        List<Double> values = new ArrayList<>(List.of(0.0, -0.0, 0.05, -0.05, 0.25, 1.05, 2.45, -2.45, 12.345, 0.04,
+                -0.04, -0.06, 99.95, 1e9, -1e9, 123456789.25, 1.0 / 3));
+        for (int i = 0; i < 200_000; i++) {
+            double v = (random.nextDouble() - 0.5) * Math.pow(10, random.nextInt(9));
+            values.add(v);
+            values.add(Math.round(v * 100) / 100.0);
+            values.add(Math.round(v * 20) / 20.0);
+        }
+        for (double v : values) {
+            assertThat(Svg.num(v)).as("%s", v).isEqualTo(Svg.exactNum(v));
+        }
+    }
+
     private final ElementReview element = DrawingFixture.element("PC-T1");
     private final PileCapDrawing drawing = (PileCapDrawing) element.drawing().orElseThrow();
     private final DrawingMarks marks = DrawingMarks.of(element, drawing);
