@@ -13,8 +13,10 @@ import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.FindingKind;
 import dev.countercheck.statics.ColumnOutline;
 import dev.countercheck.statics.ControlPerimeter;
+import dev.countercheck.statics.ControlRegion;
 import dev.countercheck.submission.ActionCase;
 
+import java.util.List;
 import java.util.Optional;
 
 /**
@@ -62,14 +64,18 @@ final class PunchingChecks {
         ColumnOutline outline = PlanGeometry.outline(ctx.pad.column());
         int count = (int) Math.ceil(2 / step.value() - 1e-9);
         Perimeter governing = null;
+        List<ActionCase> cases = ctx.cases(ActionCase.Kind.ULS);
+        List<Ground.Contact> contacts = cases.stream()
+                .map(c -> Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow()).toList();
         for (int j = 1; j <= count; j++) {
             double a = 2 * d.value() * j / count;
             double u = ControlPerimeter.lengthInPlan(outline, a, ctx.pad.planXMm(), ctx.pad.planYMm());
             double whole = ControlPerimeter.full(outline, a).value();
             double vRd = Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a).value() * u * d.value() / 1000;
-            for (ActionCase c : ctx.cases(ActionCase.Kind.ULS)) {
-                Ground.Contact contact = Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow();
-                Step deduction = contact.field().insidePerimeter(outline, a);
+            ControlRegion region = ControlRegion.of(outline, a);
+            for (int i = 0; i < cases.size(); i++) {
+                ActionCase c = cases.get(i);
+                Step deduction = contacts.get(i).field().insidePerimeter(region);
                 double reduced = c.nKn() - deduction.value();
                 if (reduced <= 1e-9 * Math.abs(c.nKn()) || u <= 0) {
                     continue;
@@ -87,6 +93,7 @@ final class PunchingChecks {
                     + " face carries the whole column load in every ULS case").build();
         }
         Perimeter g = governing;
+        b.governing(g.caseName);
         b.value("a", Step.of("a", "the distance of greatest β·VEd,red/VRd, searched in steps of (Δa/d)·d up to 2d",
                 count + " perimeters", g.aMm, "mm", "EN 1992-1-1 6.4.4(2)"));
         Step full = ControlPerimeter.full(outline, g.aMm);
@@ -103,7 +110,6 @@ final class PunchingChecks {
             b.trace(g.betaWhole);
         }
         Step beta = b.value("beta", g.beta);
-        b.governing(g.caseName);
         Step ved = b.value("ved", Step.of("β·VEd,red", "β·VEd,red", Num.f(beta.value()) + "·"
                 + Num.f(reduced.value()), beta.value() * reduced.value(), "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.51)"));
         Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), g.aMm));
