@@ -36,11 +36,12 @@ public final class DetailingVariables {
     /**
      * What a type says of its element for the section's variables.
      *
+     * @param noun             what the element is called in the rules' messages ({@code cap}, {@code footing})
      * @param castAgainstSides what the side faces are cast against, as the rules read it
      * @param embedmentMm      pile heads cast into the element (0 when there are none)
      * @param sigmaQp          the quasi-permanent steel stress of each direction's bottom bars, MPa
      */
-    public record SectionFacts(RectangularPlan plan, double depthMm, Materials materials, Reinforcement r, Section s,
+    public record SectionFacts(String noun, RectangularPlan plan, double depthMm, Materials materials, Reinforcement r, Section s,
                                double fck, double fctm, double fctd, double fyd, String castAgainst,
                                String castAgainstSides, double embedmentMm, double coverDeviationMm,
                                boolean hasQuasiPermanentCase, ToDoubleFunction<Axis> sigmaQp) {
@@ -55,10 +56,12 @@ public final class DetailingVariables {
 
     /**
      * The section's variables with units, descriptions and example values (used to type-check rule
-     * expressions at load); the two a type describes in its own words are passed in.
+     * expressions at load); the two a type describes in its own words are passed in, and the type's noun
+     * ({@code element}: what a rule's message calls the element, e.g. "the {element} gives {available} mm").
      */
-    public static Map<String, Variable> section(Variable castAgainstSides, Variable embedment) {
+    public static Map<String, Variable> section(String noun, Variable castAgainstSides, Variable embedment) {
         Map<String, Variable> s = new LinkedHashMap<>();
+        s.put("element", Variable.text("what the element is called in messages: cap or footing", noun));
         s.put("h", Variable.number("mm", "overall depth h", 1200));
         s.put("plan_x", Variable.number("mm", "plan length along x", 2700));
         s.put("plan_y", Variable.number("mm", "plan length along y", 2700));
@@ -109,6 +112,7 @@ public final class DetailingVariables {
     public static Map<String, Object> sectionValues(SectionFacts f) {
         Reinforcement r = f.r();
         Map<String, Object> v = new LinkedHashMap<>();
+        v.put("element", f.noun());
         v.put("h", f.depthMm());
         v.put("plan_x", f.plan().planXMm());
         v.put("plan_y", f.plan().planYMm());

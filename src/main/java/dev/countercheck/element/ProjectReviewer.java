@@ -51,7 +51,8 @@ public final class ProjectReviewer {
     /** The ruleset parameter that holds the absolute claim tolerance of each catalogue unit. */
     private static final Map<String, String> CLAIM_FLOORS = Map.of("kN", "claim_floor_force",
             "kNm", "claim_floor_moment", "mm", "claim_floor_length", "mm2", "claim_floor_area",
-            "MPa", "claim_floor_stress", "deg", "claim_floor_angle", "-", "claim_floor_ratio");
+            "MPa", "claim_floor_stress", "kPa", "claim_floor_pressure", "deg", "claim_floor_angle", "-",
+            "claim_floor_ratio");
 
     /** Every ruleset parameter a review reads in Java; the ruleset loader refuses a chain that lacks one. */
     public static final Set<String> REQUIRED_PARAMETERS = requiredParameters();
@@ -125,7 +126,7 @@ public final class ProjectReviewer {
     }
 
     /** The absolute claim tolerance by unit, from the ruleset (pile-cap-method.md, Revision 2 item 13). */
-    private static Map<String, Double> claimFloors(Ruleset rules) {
+    static Map<String, Double> claimFloors(Ruleset rules) {
         Map<String, Double> floors = new java.util.HashMap<>();
         CLAIM_FLOORS.forEach((unit, name) -> floors.put(unit, rules.number(name)));
         return floors;

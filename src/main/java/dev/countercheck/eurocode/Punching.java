@@ -214,6 +214,27 @@ public final class Punching {
     }
 
     /**
+     * β on the part of a control perimeter that lies on the element (EN 1992-1-1 6.4.4(2), Exp. (6.51): u is
+     * the control perimeter considered, in vEd = VEd,red/(u·d) and in u/W alike; a free edge cuts it off,
+     * 6.4.2(4)): β = 1 + (β(u) − 1)·u'/u, the moment term of β(u) being proportional to u, with W that of
+     * the whole perimeter (the moment's shear stress k·MEd/(W·d) stays that of the whole perimeter).
+     *
+     * @param betaWhole β of the whole perimeter of length {@code uWholeMm}
+     * @param uPartMm   the length of the perimeter on the element, mm, 0 &lt; u' ≤ u
+     */
+    public static Step betaOnPart(Step betaWhole, double uPartMm, double uWholeMm) {
+        String clause = "EN 1992-1-1 6.4.4(2), Exp. (6.51); 6.4.2(4)";
+        Bounds.positive("u", uWholeMm, "mm", clause);
+        OutOfRangeException.requireWithin("u'", uPartMm, "mm", Double.MIN_VALUE, uWholeMm * (1 + 1e-9), clause);
+        if (uPartMm >= uWholeMm) {
+            return betaWhole;
+        }
+        return Step.withRemark("β", "1 + (β(u) − 1)·u'/u", "1 + (" + Num.f(betaWhole.value()) + " − 1)·"
+                        + Num.f(uPartMm) + "/" + Num.f(uWholeMm), 1 + (betaWhole.value() - 1) * uPartMm / uWholeMm,
+                "-", clause, "u' the part of the perimeter on the element; W of the whole perimeter");
+    }
+
+    /**
      * Eccentricity factor for a circular column, EN 1992-1-1 6.4.3(3), Exp. (6.42), at distance a from
      * the face (6.4.4(2)): β = 1 + 0.6·π·e/(D + 2·a), e = MEd/VEd the resultant eccentricity (a = 2d gives
      * the 1 + 0.6·π·e/(D + 4d) of Exp. (6.42)).

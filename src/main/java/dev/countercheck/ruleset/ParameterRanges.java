@@ -15,7 +15,7 @@ import java.util.Optional;
  *   <li>unit weights (kN/m3): 1 to 100, concrete weighs some 25;
  *   <li>lengths (mm): 0 to 100 m, as a submission's lengths;
  *   <li>moduli ({@code *_modulus}, MPa): 1000 to 1 000 000 (steel 200 000, EN 1992-1-1 3.2.7(4));
- *   <li>stresses (MPa): 0 to 1000, as a submission's stresses;
+ *   <li>stresses (MPa): 0 to 1000, as a submission's stresses; ground pressures (kPa): 0 to 1 000 000, the same;
  *   <li>angles (deg): greater than 0, less than 90.
  * </ul>
  */
@@ -46,6 +46,7 @@ final class ParameterRanges {
                     + " some 25 kN/m3)");
             case "mm" -> outside(value, written, 0, true, 1e5, true, "a length", "from 0 to 100000 mm (100 m)");
             case "MPa" -> outside(value, written, 0, true, 1000, true, "a stress", "from 0 to 1000 MPa");
+            case "kPa" -> outside(value, written, 0, true, 1e6, true, "a pressure", "from 0 to 1000000 kPa (1000 MPa)");
             case "deg" -> outside(value, written, 0, false, 90, false, "an angle", "greater than 0° and less than 90°");
             default -> Optional.empty();
         };

@@ -150,4 +150,20 @@ class PunchingTest {
                 .as("the moment's sign does not change β").isCloseTo(1.06, within(1e-12));
         assertThat(Punching.betaEccentric(0.6, 0, 1000, 4000, 4_000_000).value()).isEqualTo(1.0);
     }
+
+    @Test
+    void betaOnThePartOfAPerimeterOnTheElementKeepsTheMomentsShearStress() {
+        // Source: EN 1992-1-1 6.4.4(2), Exp. (6.51), u the control perimeter considered; hand calculation:
+        // β(u) = 1.06 at u = 4000 mm (W = 4 000 000 mm², k 0.6, M 100 kNm, VEd,red 1000 kN); 2500 mm of it on the
+        // element: β = 1 + 0.06·2500/4000 = 1.0375. The moment's shear stress (β − 1)·VEd,red/(u'·d) =
+        // 0.0375·1000/2500 = 0.015 kN/mm per unit d, the same as k·M/W = 0.6·100 000/4 000 000 = 0.015.
+        Step whole = Punching.betaEccentric(0.6, 100, 1000, 4000, 4_000_000);
+        Step part = Punching.betaOnPart(whole, 2500, 4000);
+        assertThat(part.value()).isCloseTo(1.0375, within(1e-12));
+        assertThat((part.value() - 1) * 1000 / 2500).isCloseTo(0.6 * 100_000 / 4_000_000, within(1e-12));
+        assertThat(part.remark()).hasValueSatisfying(r -> assertThat(r).contains("W of the whole perimeter"));
+        assertThat(Punching.betaOnPart(whole, 4000, 4000)).isSameAs(whole);
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> Punching.betaOnPart(whole, 4100, 4000))
+                .isInstanceOf(OutOfRangeException.class);
+    }
 }

@@ -113,6 +113,7 @@ class RulesetBoundsTest {
             lever_arm_factor      | 0      | a factor
             strut_angle_min       | 90     | an angle
             claim_tolerance       | 1000   | a plain number
+            claim_floor_pressure  | -1     | a pressure
             """)
     void anImplausibleParameterIsRefusedAtItsValue(String name, String value, String kind) throws IOException {
         List<InputError> errors = errors("parameters:\n  " + name + ": {value: " + value + ", clause: NA}\n");

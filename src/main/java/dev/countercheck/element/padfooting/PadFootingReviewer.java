@@ -30,6 +30,9 @@ import static dev.countercheck.submission.PadFootingChecks.CATALOGUE;
 /** Reviews one pad footing: every check of docs/pad-footing.md that this version performs. */
 final class PadFootingReviewer {
 
+    /** What a pad footing is called in messages and rule texts (the rules' variable {@code element}). */
+    static final String NOUN = "footing";
+
     /** The assumptions every pad-footing review makes, for the report. */
     static final List<String> ASSUMPTIONS = List.of(
             "The side faces of a pad footing are taken as cast against formwork: the side cover is checked"

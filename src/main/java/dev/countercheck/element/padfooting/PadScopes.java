@@ -35,7 +35,7 @@ final class PadScopes {
     static final Map<String, Map<String, Variable>> SCOPES = scopes();
 
     private static Map<String, Map<String, Variable>> scopes() {
-        Map<String, Variable> s = DetailingVariables.section(
+        Map<String, Variable> s = DetailingVariables.section(PadFootingReviewer.NOUN,
                 Variable.text("what the side faces are cast against: formwork for pads (the submission has no"
                         + " field for it; a listed assumption)", "formwork"),
                 Variable.number("mm", "pile heads cast into the element: none under a pad (0)", 0));
@@ -82,7 +82,8 @@ final class PadScopes {
     private static Map<String, Object> sectionValues(PadContext ctx, Reinforcement r, Map<Axis, Double> asRequired) {
         PadFooting pad = ctx.pad;
         Section s = ctx.section.orElseThrow();
-        return DetailingVariables.sectionValues(new DetailingVariables.SectionFacts(pad, pad.depthMm(),
+        return DetailingVariables.sectionValues(new DetailingVariables.SectionFacts(PadFootingReviewer.NOUN,
+                pad, pad.depthMm(),
                 pad.materials(), r, s, ctx.fck.value(), ctx.fctm.value(), ctx.fctd.value(), ctx.fyd.value(),
                 pad.castAgainst().name().toLowerCase(Locale.ROOT), "formwork", 0.0,
                 ctx.rules.number("cover_deviation"), !ctx.cases(ActionCase.Kind.SLS_QUASI_PERMANENT).isEmpty(),

@@ -2,6 +2,7 @@ package dev.countercheck.element.padfooting;
 
 import dev.countercheck.element.Axis;
 import dev.countercheck.element.PlanGeometry;
+import dev.countercheck.element.PunchingFace;
 import dev.countercheck.element.Section;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Punching;
@@ -14,8 +15,6 @@ import dev.countercheck.statics.ColumnOutline;
 import dev.countercheck.statics.ControlPerimeter;
 import dev.countercheck.statics.ControlRegion;
 import dev.countercheck.submission.ActionCase;
-import dev.countercheck.submission.Column;
-import dev.countercheck.submission.Column.ColumnShape;
 
 import java.util.List;
 import java.util.Optional;
@@ -32,48 +31,14 @@ final class PunchingChecks {
     }
 
     static CheckOutcome face(PadContext ctx) {
-        CheckBuilder b = Checks.builder("punching-face");
-        if (ctx.section.isEmpty()) {
-            return b.notChecked("no bottom reinforcement given: d is unknown").build();
-        }
-        Step d = b.trace(ctx.section.get().dMean());
-        Column c = ctx.pad.column();
-        ColumnOutline outline = PlanGeometry.outline(c);
-        Step beta = null;
-        double worst = Double.NEGATIVE_INFINITY;
-        String worstCase = "";
-        for (ActionCase a : ctx.cases(ActionCase.Kind.ULS)) {
-            if (a.nKn() <= 0) {
-                continue;
-            }
-            Step caseBeta = ControlPerimeter.beta(outline, 2 * d.value(), a.nKn(), a.mxKnm(), a.myKnm());
-            if (caseBeta.value() * a.nKn() > worst) {
-                worst = caseBeta.value() * a.nKn();
-                beta = caseBeta;
-                worstCase = a.name();
-            }
-        }
-        if (beta == null) {
-            return b.notApplicable("no ULS case presses the column onto the footing").build();
-        }
-        b.governing(worstCase).value("beta", beta);
-        Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
-                + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
-        Step u0 = b.value("u0", c.shape() == ColumnShape.CIRCULAR
-                ? Punching.u0Circular(c.cxMm()) : Punching.u0Rectangular(c.cxMm(), c.cyMm()));
-        Step nu = b.trace(Shear.nu(ctx.fck.value()));
-        b.trace(ctx.fcdShear);
-        Step factor = b.trace(ctx.rules.parameter("punching_vrd_max_factor").asStep());
-        Step vrdMax = b.value("vrd_max", Punching.vRdMax(factor.value(), nu.value(), ctx.fcdShear.value(),
-                u0.value(), d.value()));
-        return b.require(ved.value(), vrdMax.value(), FindingKind.CAPACITY, "capacity", "VEd = "
-                + Num.f(ved.value()) + " kN at the column face exceeds vRd,max·u0·d = " + Num.f(vrdMax.value())
-                + " kN.").build();
+        return PunchingFace.check(Checks.builder("punching-face"), new PunchingFace.Inputs(ctx.section,
+                ctx.pad.column(), ctx.cases(ActionCase.Kind.ULS), ctx.fck.value(), ctx.fcdShear, ctx.rules),
+                PadFootingReviewer.NOUN);
     }
 
     /** One control perimeter of one case: a, u on the plan, the deduction, VEd,red, β, and VRd. */
-    private record Perimeter(double aMm, double uMm, Step deduction, double vEdRedKn, Step beta, String caseName,
-                             double vRdKn) {
+    private record Perimeter(double aMm, double uMm, Step deduction, double vEdRedKn, Step betaWhole, Step beta,
+                             String caseName, double vRdKn) {
         double utilisation() {
             return beta.value() * vEdRedKn / vRdKn;
         }
@@ -105,6 +70,7 @@ final class PunchingChecks {
         for (int j = 1; j <= count; j++) {
             double a = 2 * d.value() * j / count;
             double u = ControlPerimeter.lengthInPlan(outline, a, ctx.pad.planXMm(), ctx.pad.planYMm());
+            double whole = ControlPerimeter.full(outline, a).value();
             double vRd = Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a).value() * u * d.value() / 1000;
             ControlRegion region = ControlRegion.of(outline, a);
             for (int i = 0; i < cases.size(); i++) {
@@ -114,8 +80,9 @@ final class PunchingChecks {
                 if (reduced <= 1e-9 * Math.abs(c.nKn()) || u <= 0) {
                     continue;
                 }
-                Perimeter p = new Perimeter(a, u, deduction, reduced,
-                        ControlPerimeter.beta(outline, a, reduced, c.mxKnm(), c.myKnm()), c.name(), vRd);
+                Step betaWhole = ControlPerimeter.beta(outline, a, reduced, c.mxKnm(), c.myKnm());
+                Perimeter p = new Perimeter(a, u, deduction, reduced, betaWhole,
+                        Punching.betaOnPart(betaWhole, u, whole), c.name(), vRd);
                 if (governing == null || p.utilisation() > governing.utilisation()) {
                     governing = p;
                 }
@@ -139,6 +106,9 @@ final class PunchingChecks {
         b.trace(g.deduction);
         Step reduced = b.trace(Step.of("VEd,red", "N − ΔVEd", g.caseName + ": " + Num.f(g.vEdRedKn + g.deduction.value())
                 + " − " + Num.f(g.deduction.value()), g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.48)"));
+        if (g.beta != g.betaWhole) {
+            b.trace(g.betaWhole);
+        }
         Step beta = b.value("beta", g.beta);
         Step ved = b.value("ved", Step.of("β·VEd,red", "β·VEd,red", Num.f(beta.value()) + "·"
                 + Num.f(reduced.value()), beta.value() * reduced.value(), "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.51)"));

@@ -40,7 +40,7 @@ final class DetailingScopes {
     static final Map<String, Map<String, Variable>> SCOPES = scopes();
 
     private static Map<String, Map<String, Variable>> scopes() {
-        Map<String, Variable> cap = DetailingVariables.section(
+        Map<String, Variable> cap = DetailingVariables.section(PileCapReviewer.NOUN,
                 Variable.text("what the side faces are cast against: soil or formwork"
                         + " (formwork when the submission does not say)", "formwork"),
                 Variable.number("mm", "pile head cast into the cap", 75));
@@ -93,7 +93,8 @@ final class DetailingScopes {
     private static Map<String, Object> capValues(PileCapContext ctx, Reinforcement r, Map<Axis, Double> asRequired) {
         PileCap cap = ctx.cap;
         Section s = ctx.section.orElseThrow();
-        return DetailingVariables.sectionValues(new DetailingVariables.SectionFacts(cap, cap.depthMm(),
+        return DetailingVariables.sectionValues(new DetailingVariables.SectionFacts(PileCapReviewer.NOUN, cap,
+                cap.depthMm(),
                 cap.materials(), r, s, ctx.fck.value(), ctx.fctm.value(), ctx.fctd.value(), ctx.fyd.value(),
                 cap.castAgainst().bottom().name().toLowerCase(Locale.ROOT),
                 cap.castAgainst().sides().name().toLowerCase(Locale.ROOT), cap.piles().embedmentMm(),

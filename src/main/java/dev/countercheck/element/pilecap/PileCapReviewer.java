@@ -30,6 +30,9 @@ import static dev.countercheck.submission.PileCapChecks.CATALOGUE;
 final class PileCapReviewer {
 
     /** The assumptions every pile-cap review makes, for the report. */
+    /** What a pile cap is called in messages and rule texts (the rules' variable {@code element}). */
+    static final String NOUN = "cap";
+
     static final List<String> ASSUMPTIONS = List.of(
             "Pile caps are rigid: pile reactions vary linearly with position (common practice). The cap's own"
                     + " weight (γconc × plan area × h) is added at the cap centre unless the submission says it is"

@@ -1,6 +1,7 @@
 package dev.countercheck.element.pilecap;
 
 import dev.countercheck.element.PlanGeometry;
+import dev.countercheck.element.PunchingFace;
 import dev.countercheck.element.Section;
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Num;
@@ -13,8 +14,6 @@ import dev.countercheck.review.FindingKind;
 import dev.countercheck.statics.ColumnOutline;
 import dev.countercheck.statics.ControlPerimeter;
 import dev.countercheck.statics.PlanPoint;
-import dev.countercheck.submission.Column;
-import dev.countercheck.submission.Column.ColumnShape;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -29,44 +28,9 @@ final class PunchingChecks {
     }
 
     static CheckOutcome face(PileCapContext ctx) {
-        CheckBuilder b = Checks.builder("punching-face");
-        if (ctx.section.isEmpty()) {
-            return b.notChecked("no bottom reinforcement given: d is unknown").build();
-        }
-        Step d = b.trace(ctx.section.get().dMean());
-        Column c = ctx.cap.column();
-        Step beta = null;
-        double worst = Double.NEGATIVE_INFINITY;
-        String worstCase = "";
-        for (UlsCase u : ctx.uls) {
-            double n = u.action().nKn();
-            if (n <= 0) {
-                continue;
-            }
-            Step caseBeta = ControlPerimeter.beta(PlanGeometry.outline(c), 2 * d.value(), n, u.action().mxKnm(), u.action().myKnm());
-            if (caseBeta.value() * n > worst) {
-                worst = caseBeta.value() * n;
-                beta = caseBeta;
-                worstCase = u.action().name();
-            }
-        }
-        if (beta == null) {
-            return b.notApplicable("no ULS case presses the column onto the cap").build();
-        }
-        b.value("beta", beta);
-        b.governing(worstCase);
-        Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
-                + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
-        Step u0 = b.value("u0", c.shape() == ColumnShape.CIRCULAR
-                ? Punching.u0Circular(c.cxMm()) : Punching.u0Rectangular(c.cxMm(), c.cyMm()));
-        Step nu = b.trace(Shear.nu(ctx.fck.value()));
-        b.trace(ctx.fcdShear);
-        Step factor = b.trace(ctx.rules.parameter("punching_vrd_max_factor").asStep());
-        Step vrdMax = b.value("vrd_max", Punching.vRdMax(factor.value(), nu.value(), ctx.fcdShear.value(),
-                u0.value(), d.value()));
-        b.require(ved.value(), vrdMax.value(), FindingKind.CAPACITY, "capacity", "VEd = " + Num.f(ved.value())
-                + " kN at the column face exceeds vRd,max·u0·d = " + Num.f(vrdMax.value()) + " kN.");
-        return b.build();
+        return PunchingFace.check(Checks.builder("punching-face"), new PunchingFace.Inputs(ctx.section,
+                ctx.cap.column(), ctx.uls.stream().map(UlsCase::action).toList(), ctx.fck.value(), ctx.fcdShear,
+                ctx.rules), PileCapReviewer.NOUN);
     }
 
     /** One control perimeter at distance a: its length on the cap, the reduced load and the resistance. */
