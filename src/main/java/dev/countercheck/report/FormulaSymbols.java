@@ -9,7 +9,7 @@ import java.util.regex.Pattern;
  * The symbols a trace step writes: its own symbol (without the case or place in brackets after it) and the
  * names in its formula. A name is a run of letters, digits, {@code _}, primes, commas and points (the standard's
  * subscripts: {@code VRd,c}, {@code γR;v}), a trailing {@code *} kept ({@code My*}); a number written before a symbol is
- * dropped ({@code 2d} writes d), and so are numbers, the words the glossary lists as words, and the ruleset key
+ * dropped ({@code 2d} writes d), and so are numbers, the article a before a word, the words the glossary lists as words, and the ruleset key
  * that {@code "ruleset parameter <key>"} names (the step's own symbol stands for it).
  */
 final class FormulaSymbols {
@@ -17,6 +17,7 @@ final class FormulaSymbols {
     private static final Pattern NAME = Pattern.compile("(?:(?![Σ²³¹⁰])[\\p{L}\\p{M}\\p{N}_'′,.;])+\\*?");
     private static final Pattern LEADING_NUMBER = Pattern.compile("^[\\d.,]+(?=[^\\d.,])");
     private static final Pattern NUMBER = Pattern.compile("[\\d.,]+");
+    private static final Pattern ARTICLE = Pattern.compile(" \\p{Ll}{2}");
     private static final Pattern PARAMETER = Pattern.compile("ruleset parameter \\S+");
 
     private FormulaSymbols() {
@@ -41,11 +42,16 @@ final class FormulaSymbols {
         while (m.find()) {
             String name = trim(LEADING_NUMBER.matcher(m.group()).replaceFirst(""));
             if (!name.isEmpty() && !NUMBER.matcher(name).matches() && !glossary.isWord(name)
-                    && !names.contains(name)) {
+                    && !article(formula, m) && !names.contains(name)) {
                 names.add(name);
             }
         }
         return names;
+    }
+
+    /** Whether the name is the article "a" of the formula's text ("of a pile centre"), not the symbol a. */
+    private static boolean article(String formula, Matcher m) {
+        return m.group().equals("a") && ARTICLE.matcher(formula).region(m.end(), formula.length()).lookingAt();
     }
 
     /** Without the commas, points and semicolons that end a clause of the formula's text. */
