@@ -89,6 +89,7 @@ final class GeotechnicalChecks {
             return b.notApplicable("no case presses the footing onto the ground").build();
         }
         Situation s = governingSituation;
+        b.governing(s.load.action().name());
         b.trace(ctx.footingWeight);
         b.trace(ctx.overburdenWeight);
         b.trace(Step.of("q", "γ·D (total overburden pressure at the base)", Num.f(soil.unitWeightKnM3()) + "·"
@@ -149,6 +150,7 @@ final class GeotechnicalChecks {
             return b.notApplicable("no case applies a horizontal force").build();
         }
         Situation s = worstSituation;
+        b.governing(s.load.action().name());
         if (soil.phiKDeg().isPresent() && soil.phiCvKDeg().isEmpty()) {
             b.caution("Sliding of " + ctx.pad.id() + " used the peak φ'k for the interface, as no φ'cv,k is given:"
                     + " this is unconservative for concrete cast in place (EN 1997-1 6.5.3(10)).");
@@ -190,6 +192,7 @@ final class GeotechnicalChecks {
                 worstCase = a.name();
             }
         }
+        b.governing(worstCase);
         b.trace(ctx.footingWeight);
         b.trace(ctx.overburdenWeight);
         Step dst = b.value("m_dst", worst.mDst());

@@ -69,6 +69,7 @@ final class HoggingCheck {
             return b.notApplicable("under partial contact the ground pressure on each cantilever outweighs its own"
                     + " weight and the overburden: no hogging").build();
         }
+        b.governing(worst.caseName);
         b.trace(ctx.footingWeight);
         b.trace(ctx.overburdenWeight);
         b.trace(ctx.rules.parameter("gamma_g").asStep());

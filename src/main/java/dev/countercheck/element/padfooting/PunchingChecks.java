@@ -55,6 +55,7 @@ final class PunchingChecks {
             return b.notApplicable("no ULS case presses the column onto the footing").build();
         }
         b.value("beta", beta);
+        b.governing(worstCase);
         Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
                 + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
         Step u0 = b.value("u0", c.shape() == ColumnShape.CIRCULAR
@@ -120,6 +121,7 @@ final class PunchingChecks {
                     + " face carries the whole column load in every ULS case").build();
         }
         Perimeter g = governing;
+        b.governing(g.caseName);
         b.value("a", Step.of("a", "the distance of greatest β·VEd,red/VRd, searched in steps of (Δa/d)·d up to 2d",
                 count + " perimeters", g.aMm, "mm", "EN 1992-1-1 6.4.4(2)"));
         Step full = ControlPerimeter.full(outline, g.aMm);
