@@ -107,9 +107,14 @@ public final class PressureField {
      * the column load, kN. The perimeter's arcs are drawn by chords of 1° (the area is short by 0.005 %).
      */
     public Step insidePerimeter(ColumnOutline column, double aMm) {
-        ConvexPolygon inside = ControlPerimeter.region(column, aMm).intersect(contact);
+        return insidePerimeter(ControlRegion.of(column, aMm));
+    }
+
+    /** As {@link #insidePerimeter(ColumnOutline, double)}, with the region formed once for several fields. */
+    public Step insidePerimeter(ControlRegion region) {
+        ConvexPolygon inside = region.on(contact);
         return Step.of("ΔVEd", "∫ q dA inside the control perimeter at a, on the plan",
-                "a = " + Num.f(aMm) + " mm", forceOver(inside), "kN", BASIS + "; EN 1992-1-1 6.4.4(2)");
+                "a = " + Num.f(region.aMm()) + " mm", forceOver(inside), "kN", BASIS + "; EN 1992-1-1 6.4.4(2)");
     }
 
     private double forceOver(ConvexPolygon part) {

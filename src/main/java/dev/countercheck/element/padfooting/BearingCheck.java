@@ -50,9 +50,9 @@ final class BearingCheck {
                 least = c;
             }
         }
+        b.governing(worst.load().action().name());
         b.trace(Step.of("V", "N + Wf + Ws (characteristic)", worst.load().formed(), worst.load().vKn(), "kN",
                 "EN 1990 6.5.3, Exp. (6.14b)"));
-        b.governing(worst.load().action().name());
         Step qMax = b.value("q_max", worst.solved().qMax());
         double qMinValue = cases.stream().map(a -> Ground.solve(ctx.pad, ctx.resultant(a, 1.0)).orElseThrow())
                 .mapToDouble(Ground.Contact::qMinKpa).min().orElseThrow();

@@ -12,10 +12,12 @@ import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.FindingKind;
 import dev.countercheck.statics.ColumnOutline;
 import dev.countercheck.statics.ControlPerimeter;
+import dev.countercheck.statics.ControlRegion;
 import dev.countercheck.submission.ActionCase;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.Column.ColumnShape;
 
+import java.util.List;
 import java.util.Optional;
 
 /**
@@ -54,8 +56,7 @@ final class PunchingChecks {
         if (beta == null) {
             return b.notApplicable("no ULS case presses the column onto the footing").build();
         }
-        b.value("beta", beta);
-        b.governing(worstCase);
+        b.governing(worstCase).value("beta", beta);
         Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
                 + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
         Step u0 = b.value("u0", c.shape() == ColumnShape.CIRCULAR
@@ -98,13 +99,17 @@ final class PunchingChecks {
         ColumnOutline outline = PlanGeometry.outline(ctx.pad.column());
         int count = (int) Math.ceil(2 / step.value() - 1e-9);
         Perimeter governing = null;
+        List<ActionCase> cases = ctx.cases(ActionCase.Kind.ULS);
+        List<Ground.Contact> contacts = cases.stream()
+                .map(c -> Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow()).toList();
         for (int j = 1; j <= count; j++) {
             double a = 2 * d.value() * j / count;
             double u = ControlPerimeter.lengthInPlan(outline, a, ctx.pad.planXMm(), ctx.pad.planYMm());
             double vRd = Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a).value() * u * d.value() / 1000;
-            for (ActionCase c : ctx.cases(ActionCase.Kind.ULS)) {
-                Ground.Contact contact = Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow();
-                Step deduction = contact.field().insidePerimeter(outline, a);
+            ControlRegion region = ControlRegion.of(outline, a);
+            for (int i = 0; i < cases.size(); i++) {
+                ActionCase c = cases.get(i);
+                Step deduction = contacts.get(i).field().insidePerimeter(region);
                 double reduced = c.nKn() - deduction.value();
                 if (reduced <= 1e-9 * Math.abs(c.nKn()) || u <= 0) {
                     continue;
