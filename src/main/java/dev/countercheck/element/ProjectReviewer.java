@@ -1,6 +1,7 @@
 package dev.countercheck.element;
 
 import dev.countercheck.review.ClaimComparer;
+import dev.countercheck.review.CaseActions;
 import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
@@ -105,14 +106,16 @@ public final class ProjectReviewer {
         return new Review(tool,
                 new Review.SubmissionInfo(submission.file(), submission.sha256(), p.title(), p.reference(),
                         p.revision(), p.preparedBy(), p.date()),
-                new Review.RulesetInfo(rules.id(), rules.title(), rules.sha256(), rules.files()),
+                new Review.RulesetInfo(rules.id(), rules.title(), rules.sha256(), rules.files(), RulesetNames.of(rules)),
                 reviewDate, ElementAssembler.overall(elements), elements, summary(elements),
                 List.copyOf(assumptions));
     }
 
     private static <E extends ElementInput> ElementReview review(ElementKind<E> kind, ElementInput element,
                                                                  Ruleset rules, ElementAssembler assembler) {
-        return kind.review(kind.elementClass().cast(element), rules, assembler);
+        return kind.review(kind.elementClass().cast(element), rules, assembler).withCases(element.actions().stream()
+                .map(a -> new CaseActions(a.name(), a.kind().label(), a.nKn(), a.mxKnm(), a.myKnm(), a.hxKn(),
+                        a.hyKn())).toList());
     }
 
     /** An element that could not be reviewed: a finding of its own kind (major as recommended), never a pass. */

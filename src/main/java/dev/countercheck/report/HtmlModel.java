@@ -1,8 +1,8 @@
 package dev.countercheck.report;
 
-import dev.countercheck.eurocode.Step;
 import dev.countercheck.responses.Response;
 import dev.countercheck.responses.ResponseStatus;
+import dev.countercheck.review.CaseActions;
 import dev.countercheck.review.CheckResult;
 import dev.countercheck.review.CheckStatus;
 import dev.countercheck.review.ClaimComparison;
@@ -222,10 +222,11 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      * @param utilisation two decimals rounded up, or empty
      * @param bar         the utilisation bar's width in percent of its track, or empty
      * @param over        whether the utilisation exceeds 1 (the bar is then full and marked)
+     * @param governingActions the governing case's actions as numbers ("N = 3000 kN, Mx = 0 kNm, ..."), or empty
      */
     public record CheckView(String anchor, String id, String title, String basis, String status, boolean failing,
                             String utilisation, String bar, boolean over, String reason, List<QuantityView> quantities,
-                            List<StepView> trace, String governingCase) {
+                            List<StepView> trace, String governingCase, String governingActions) {
 
         Optional<Double> utilisationValue() {
             return utilisation.isEmpty() ? Optional.empty() : Optional.of(Double.parseDouble(utilisation));
@@ -252,8 +253,25 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                                String claimVerdict, String stepAnchor, String stepNumber) {
     }
 
-    public record StepView(String anchor, int number, String symbol, String formula, String substituted, String value,
-                           String unit, String clause, String remark) {
+    /**
+     * A step of a check's derivation.
+     *
+     * @param symbol        the step's symbol as the trace writes it, e.g. {@code "V (ULS-1)"}
+     * @param base          the symbol without the case or place in brackets, e.g. {@code "V"}
+     * @param qualifier     what follows it in brackets, e.g. {@code "(ULS-1)"}, or empty
+     * @param quantity      the quantity in words (the glossary's meaning of the symbol), or empty
+     * @param definesSymbol whether this is the symbol's first appearance in the derivation (its definition)
+     * @param substituted   the formula with the values put in, or empty when it is the formula itself
+     * @param where         the symbols the formula writes that appear here first, with their meanings
+     * @param uses          every symbol the step writes (its own first), separated by {@code |}
+     */
+    public record StepView(String anchor, int number, String symbol, String base, String qualifier, String quantity,
+                           boolean definesSymbol, String formula, String substituted, String value, String unit,
+                           String clause, String remark, List<Definition> where, String uses) {
+    }
+
+    /** A symbol and what it means. */
+    public record Definition(String symbol, String meaning) {
     }
 
     /** An element's drawings (SVG text), legend and fail tags. */
@@ -279,7 +297,8 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      */
     static HtmlModel of(Review review, ReviewRound round, Paging paging) {
         List<ElementReview> reviewed = review.elements();
-        List<ElementView> elements = new ElementViews(reviewed.size(), i -> element(reviewed.get(i), i + 1, round));
+        List<ElementView> elements = new ElementViews(reviewed.size(), i -> element(reviewed.get(i), i + 1, round,
+                review.ruleset().names()));
         List<FindingRow> register = IntStream.range(0, reviewed.size())
                 .mapToObj(i -> findingRows(reviewed.get(i), "e" + (i + 1), round))
                 .flatMap(List::stream)
@@ -376,10 +395,12 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 .toList();
     }
 
-    private static ElementView element(ElementReview element, int position, ReviewRound round) {
+    private static ElementView element(ElementReview element, int position, ReviewRound round,
+                                       Map<String, String> names) {
         String anchor = "e" + position;
+        Derivation derivation = new Derivation(Glossary.bundled(), names);
         List<CheckView> checks = IntStream.range(0, element.checks().size())
-                .mapToObj(i -> check(element.checks().get(i), checkAnchor(anchor, i)))
+                .mapToObj(i -> check(element, element.checks().get(i), checkAnchor(anchor, i), derivation))
                 .toList();
         Supplier<List<DrawingView>> drawings = () -> element.drawing()
                 .map(d -> List.of(drawing(anchor, element, d))).orElse(List.of());
@@ -435,18 +456,24 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 round.revision().flatMap(r -> r.entry(finding.id())).map(e -> e.change().label()).orElse(""));
     }
 
-    private static CheckView check(CheckResult check, String anchor) {
+    private static CheckView check(ElementReview element, CheckResult check, String anchor, Derivation derivation) {
         String utilisation = check.utilisation().isPresent()
                 ? ReportNumbers.utilisation(check.utilisation().getAsDouble())
                 : "";
-        List<StepView> trace = IntStream.range(0, check.trace().size())
-                .mapToObj(i -> step(check.trace().get(i), anchor + "-s" + (i + 1), i + 1))
-                .toList();
+        List<StepView> trace = derivation.of(check.id(), check.trace(), anchor);
         String bar = check.utilisation().isPresent() ? ReportNumbers.barPercent(check.utilisation().getAsDouble()) : "";
         boolean over = check.utilisation().isPresent() && check.utilisation().getAsDouble() > 1;
         return new CheckView(anchor, check.id(), check.title(), check.basis(), check.status().label(),
                 check.status() == CheckStatus.FAIL, utilisation, bar, over, text(check.reason()),
-                quantities(check, trace), trace, check.governingCase().orElse(""));
+                quantities(check, trace), trace, check.governingCase().orElse(""),
+                check.governingCase().flatMap(element::caseNamed).map(HtmlModel::actions).orElse(""));
+    }
+
+    /** A case's actions as numbers, in the order the submission writes them. */
+    private static String actions(CaseActions c) {
+        return "N = " + ReportNumbers.display(c.nKn(), "kN") + " kN, Mx = " + ReportNumbers.display(c.mxKnm(), "kNm")
+                + " kNm, My = " + ReportNumbers.display(c.myKnm(), "kNm") + " kNm, Hx = "
+                + ReportNumbers.display(c.hxKn(), "kN") + " kN, Hy = " + ReportNumbers.display(c.hyKn(), "kN") + " kN";
     }
 
     /**
@@ -483,12 +510,6 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 claim.map(c -> c.verdict().label()).orElse(""),
                 step.map(StepView::anchor).orElse(""),
                 step.map(s -> String.valueOf(s.number())).orElse(""));
-    }
-
-    private static StepView step(Step step, String anchor, int number) {
-        return new StepView(anchor, number, step.symbol(), step.formula(), step.substituted(),
-                ReportNumbers.display(step.value(), step.unit()), ReportNumbers.unit(step.unit()), step.clause(),
-                text(step.remark()));
     }
 
     private static String text(Optional<String> optional) {

@@ -29,7 +29,16 @@ public record Review(ToolInfo tool, SubmissionInfo submission, RulesetInfo rules
                                  Optional<String> revision, Optional<String> preparedBy, Optional<String> date) {
     }
 
-    public record RulesetInfo(String id, String title, String sha256, List<String> files) {
+    /**
+     * @param names what each name a rule's formula may write means (parameters, tables, the rule scopes' variables,
+     *              the rules' derived quantities), for the report's derivations; the JSON does not carry it
+     */
+    public record RulesetInfo(String id, String title, String sha256, List<String> files, Map<String, String> names) {
+
+        /** A ruleset without the meanings of its names. */
+        public RulesetInfo(String id, String title, String sha256, List<String> files) {
+            this(id, title, sha256, files, Map.of());
+        }
     }
 
     /**

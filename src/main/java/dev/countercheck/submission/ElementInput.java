@@ -20,4 +20,9 @@ public interface ElementInput {
     default List<CharacteristicLoad> loads() {
         return List.of();
     }
+
+    /** The designer's action cases at the top of the element (none for an element that has none or was not read). */
+    default List<ActionCase> actions() {
+        return List.of();
+    }
 }

@@ -29,8 +29,8 @@ import static org.assertj.core.api.Assertions.assertThat;
  * (Debian's {@code chromium}, which {@code .ci/run} installs): the page logs nothing to the console,
  * the browser's own DOM holds every element and every drawing, and a screenshot of the top of each
  * page is left under {@code target/screenshots/} for people to look at, and so are page one of a
- * sample's report and one of its elements on its own ({@code <sample>-page-one.png},
- * {@code <sample>-element-<id>.png}).
+ * sample's report, one of its elements on its own and one check's derivation opened
+ * ({@code <sample>-page-one.png}, {@code <sample>-element-<id>.png}, {@code <sample>-derivation.png}).
  *
  * <p>Skipped, with the reason, where {@code /usr/bin/chromium} is absent.
  */
@@ -141,6 +141,21 @@ class ChromiumReportTest {
         assertScreenshot(one.screenshot());
         assertThat(Files.readAllBytes(one.screenshot())).as("two different pictures")
                 .isNotEqualTo(Files.readAllBytes(pageOne.screenshot()));
+
+        // One check's derivation, opened: the first check of that element that names its governing case.
+        Document calc = Jsoup.parse(html);
+        Element check = calc.select("#calculations .check").stream()
+                .filter(c -> c.selectFirst(".case-actions") != null).findFirst().orElseThrow();
+        check.select("details.trace").attr("open", "");
+        calc.body().children().remove();
+        calc.body().appendChild(check);
+        Path derivation = PAGES.resolve(name + "-derivation.html");
+        Files.writeString(derivation, calc.outerHtml(), StandardCharsets.UTF_8);
+        Opened steps = open(derivation, name + "-derivation", "1280,1600");
+        assertThat(steps.console()).isEmpty();
+        assertThat(steps.dom().select("ol.derivation > li")).as("numbered steps").isNotEmpty();
+        assertThat(steps.dom().select("ol.derivation dfn")).as("symbols defined").isNotEmpty();
+        assertScreenshot(steps.screenshot());
     }
 
     @Test

@@ -155,15 +155,21 @@ class HtmlReportWriterTest {
         assertThat(traces).hasSize(checks.size());
         for (int i = 0; i < checks.size(); i++) {
             CheckResult check = checks.get(i);
-            Elements steps = traces.get(i).select("tbody tr");
+            Elements steps = traces.get(i).select("ol.derivation > li");
             assertThat(steps).as(check.id()).hasSize(check.trace().size());
             for (int s = 0; s < steps.size(); s++) {
                 var step = check.trace().get(s);
-                assertThat(steps.get(s).select("td").eachText().subList(0, 4))
-                        .containsExactly(String.valueOf(s + 1), step.symbol(), step.formula(), step.substituted());
+                Element line = steps.get(s).selectFirst(".step-line");
+                assertThat(line.selectFirst(".step-n").text()).isEqualTo((s + 1) + ".");
+                assertThat((line.selectFirst(".sym").text() + " " + line.select(".qualifier").text()).trim())
+                        .isEqualTo(step.symbol());
+                assertThat(line.select(".expr").eachText()).as(check.id() + " step " + (s + 1))
+                        .containsExactlyElementsOf(step.substituted().equals(step.formula())
+                                ? List.of(step.formula()) : List.of(step.formula(), step.substituted()));
+                assertThat(line.selectFirst("cite.clause-ref").text()).isEqualTo(step.clause());
             }
         }
-        assertThat(page.select("details.trace td").eachText()).as("a remark of the fixture's trace")
+        assertThat(page.select("ol.derivation .remark").eachText()).as("a remark of the fixture's trace")
                 .anyMatch(t -> t.endsWith("k capped at 2.0"));
         assertThat(html).contains("No calculation was recorded for this check.");
     }
@@ -176,7 +182,8 @@ class HtmlReportWriterTest {
             Element target = page.getElementById(link.attr("href").substring(1));
             assertThat(target).as(link.attr("href")).isNotNull();
             String computed = link.closest("tr").select("td").get(1).text();
-            assertThat(target.select("td").get(4).text()).as("the step shows the same number").isEqualTo(computed);
+            assertThat(target.selectFirst("strong.result").text()).as("the step shows the same number")
+                    .isEqualTo(computed);
         }
         // Fixture: tie-x records T (step 1, 812.3456 kN) and As,req (step 2, 1867.459 mm2).
         Element tie = page.getElementById("e1-c1");
@@ -196,8 +203,10 @@ class HtmlReportWriterTest {
         assertThat(tie.select("table.quantities tr:has(code:containsOwn(as_required)) td").eachText().subList(0, 5))
                 .containsExactly("as_required", "1867", "mm²", "2000", "+7.1 %");
         assertThat(tie.select(".util").text()).isEqualTo("utilisation 0.82");
-        assertThat(page.select("table.steps td:nth-child(6)").eachText()).as("every step shows a unit")
-                .allMatch(unit -> !unit.isBlank());
+        assertThat(page.select("ol.derivation .step-line")).as("every step shows its result")
+                .allMatch(line -> !line.select("strong.result").text().isBlank());
+        assertThat(page.select("ol.derivation .unit").eachText()).as("a quantity with a unit shows it")
+                .isNotEmpty().allMatch(unit -> !unit.isBlank() && !unit.equals("–"));
     }
 
     @Test

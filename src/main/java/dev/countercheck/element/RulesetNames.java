@@ -1,0 +1,46 @@
+package dev.countercheck.element;
+
+import dev.countercheck.ruleset.CheckDef;
+import dev.countercheck.ruleset.Parameter;
+import dev.countercheck.ruleset.Ruleset;
+import dev.countercheck.ruleset.TableDef;
+import dev.countercheck.ruleset.Variable;
+
+import java.util.LinkedHashSet;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
+
+/**
+ * What each name a rule's formula may write means, taken from where the name is declared: a parameter's or a
+ * table's note, a scope variable's description (every kind's scopes, in the order of the kinds and the scopes'
+ * names; a name that two scopes describe differently, such as {@code phi}, has both), a derived quantity's symbol. The report
+ * defines the names of a rule-derived step with it; built once per review.
+ */
+final class RulesetNames {
+
+    private RulesetNames() {
+    }
+
+    static Map<String, String> of(Ruleset rules) {
+        Map<String, Set<String>> described = new TreeMap<>();
+        for (ElementKind<?> kind : ElementKinds.ALL) {
+            for (Map<String, Variable> scope : new TreeMap<>(kind.ruleVocabulary().scopes()).values()) {
+                new TreeMap<>(scope).forEach((name, v) -> described.computeIfAbsent(name, k -> new LinkedHashSet<>())
+                        .add(v.description()));
+            }
+        }
+        Map<String, String> names = new TreeMap<>();
+        described.forEach((name, descriptions) -> names.put(name, String.join(" / ", descriptions)));
+        for (Parameter p : rules.parameters().values()) {
+            names.put(p.name(), p.note() + " (" + p.symbol() + ", ruleset parameter)");
+        }
+        for (TableDef t : rules.tables().values()) {
+            names.put(t.name(), t.note() + " (table of the ruleset)");
+        }
+        for (CheckDef c : new TreeMap<>(rules.checks()).values()) {
+            c.derived().forEach(d -> names.putIfAbsent(d.name(), "the rule's name for " + d.symbol()));
+        }
+        return Map.copyOf(names);
+    }
+}

@@ -1,0 +1,153 @@
+package dev.countercheck.report;
+
+import dev.countercheck.eurocode.Step;
+import dev.countercheck.report.HtmlModel.StepView;
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.stream.Stream;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/**
+ * The appendix's derivations (issue 12 item 2): numbered steps, every symbol a check's derivation writes defined
+ * at or before its first use, the governing case written out as numbers. Over every sample and every rule
+ * fixture, so that a step added anywhere with a symbol the glossary lacks fails here.
+ */
+class DerivationTest {
+
+    private static final Map<Path, Document> PAGES = new LinkedHashMap<>();
+
+    @BeforeAll
+    static void renderEverySampleAndFixture() {
+        List<Path> inputs = new ArrayList<>(SampleReviews.samples());
+        try (Stream<Path> fixtures = Files.list(Path.of("src/test/resources/rule-fixtures"))) {
+            fixtures.filter(p -> p.toString().endsWith(".yaml")).sorted().forEach(inputs::add);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        for (Path input : inputs) {
+            PAGES.put(input, Jsoup.parse(new HtmlReportWriter().write(SampleReviews.review(input))));
+        }
+    }
+
+    @Test
+    void everyCheckWithATraceHasItsStepsNumberedFromOneInOrder() {
+        int derivations = 0;
+        for (var page : PAGES.entrySet()) {
+            for (Element list : page.getValue().select("ol.derivation")) {
+                List<String> numbers = list.select("> li .step-n").eachText();
+                List<String> expected = new ArrayList<>();
+                for (int i = 1; i <= list.select("> li").size(); i++) {
+                    expected.add(i + ".");
+                }
+                assertThat(numbers).as(page.getKey() + " " + list.parent().id()).isEqualTo(expected);
+                derivations++;
+            }
+        }
+        assertThat(derivations).as("derivations rendered").isGreaterThan(100);
+    }
+
+    @Test
+    void everySymbolADerivationWritesIsDefinedAtOrBeforeItsFirstUse() {
+        List<String> undefined = new ArrayList<>();
+        int symbols = 0;
+        for (var page : PAGES.entrySet()) {
+            for (Element list : page.getValue().select("ol.derivation")) {
+                Set<String> defined = new HashSet<>();
+                for (Element step : list.select("> li")) {
+                    defined.addAll(step.select("dfn").eachText());
+                    for (String symbol : step.attr("data-uses").split("\\|")) {
+                        symbols++;
+                        if (!defined.contains(symbol)) {
+                            undefined.add(page.getKey().getFileName() + " " + list.parent().id() + " step "
+                                    + step.selectFirst(".step-n").text() + ": " + symbol + " in "
+                                    + step.selectFirst(".step-line").text());
+                        }
+                    }
+                }
+            }
+        }
+        assertThat(undefined).as("symbols used before any definition (add them to " + Glossary.RESOURCE + ")")
+                .isEmpty();
+        assertThat(symbols).isGreaterThan(1000);
+    }
+
+    @Test
+    void eachStepReadsQuantityExpressionResultUnitAndClause() {
+        Element step = PAGES.get(Path.of("sample-submissions/harbour-lane.yaml"))
+                .select("ol.derivation > li").stream()
+                .filter(li -> li.selectFirst(".sym").text().equals("VRd,c")).findFirst().orElseThrow();
+        String line = step.selectFirst(".step-line").text();
+        // quantity in words, the symbol, its formula, the values put in, the result with its unit, the clause
+        assertThat(step.selectFirst(".quantity").text()).isEqualTo("Design shear resistance without shear reinforcement");
+        assertThat(step.select(".expr")).hasSize(2);
+        assertThat(line).matches(".*VRd,c = max\\(vRd,c; vmin\\)·bw·d = .+ = [0-9.]+ kN .*6\\.2\\.2.*");
+        assertThat(step.selectFirst("cite.clause-ref").text()).contains("EN 1992-1-1");
+    }
+
+    @Test
+    void thePileReactionPlaneDefinesItsAAndBWhereTheyFirstAppear() {
+        Element list = PAGES.get(Path.of("sample-submissions/harbour-lane.yaml")).select("ol.derivation").stream()
+                .filter(l -> !l.select("li[data-uses^=P#], li .sym").eachText().isEmpty()
+                        && l.select("li").stream().anyMatch(li -> li.selectFirst(".sym").text().equals("a")))
+                .findFirst().orElseThrow();
+        Element a = list.select("> li").stream().filter(li -> li.selectFirst(".sym").text().equals("a"))
+                .findFirst().orElseThrow();
+        assertThat(a.selectFirst("dfn.sym").text()).isEqualTo("a");
+        assertThat(a.selectFirst(".quantity").text()).startsWith("Slope of the reaction plane along x");
+        assertThat(a.selectFirst(".qualifier").text()).startsWith("(");
+    }
+
+    @Test
+    void theGoverningCaseIsWrittenOutAsNumbers() {
+        int cases = 0;
+        for (var page : PAGES.entrySet()) {
+            for (Element governs : page.getValue().select(".governs")) {
+                assertThat(governs.select(".case-actions").text()).as(page.getKey() + ": " + governs.text())
+                        .matches("\\(N = -?[0-9.]+ kN, Mx = -?[0-9.]+ kNm, My = -?[0-9.]+ kNm, Hx = -?[0-9.]+ kN,"
+                                + " Hy = -?[0-9.]+ kN\\)");
+                cases++;
+            }
+        }
+        assertThat(cases).as("checks naming a governing case").isGreaterThan(20);
+    }
+
+    @Test
+    void aSymbolTheGlossaryLacksIsLeftUndefinedSoTheStructureTestFails() {
+        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of()).of("shear-x", List.of(
+                Step.of("VRd,c", "max(vRd,c; vmin)·bw·d", "…", 250, "kN", "EN 1992-1-1 6.2.2(1)"),
+                Step.of("Qzz", "VRd,c·ωq", "…", 1, "-", "invented")), "e1-c1");
+        assertThat(steps.get(0).definesSymbol()).isTrue();
+        assertThat(steps.get(0).where()).extracting(HtmlModel.Definition::symbol)
+                .containsExactly("vRd,c", "vmin", "bw", "d");
+        assertThat(steps.get(1).definesSymbol()).as("Qzz is in no glossary").isFalse();
+        assertThat(steps.get(1).uses()).isEqualTo("Qzz|VRd,c|ωq");
+        assertThat(steps.get(1).where()).as("VRd,c was defined by step 1; ωq is in no glossary").isEmpty();
+    }
+
+    @Test
+    void aSymbolMeansWhatItsCheckSaysAndARulesetNameWhatTheRulesetDeclares() {
+        Glossary g = Glossary.bundled();
+        assertThat(g.meaning("a", "pile-reactions")).get().asString().contains("reaction plane");
+        assertThat(g.meaning("a", "punching-perimeter")).get().asString().contains("control perimeter");
+        assertThat(g.meaning("P7", "pile-reactions")).get().asString().contains("reaction of that pile");
+        List<StepView> steps = new Derivation(g, Map.of("cover_side", "nominal cover at the sides")).of("cover",
+                List.of(Step.of("cnom,prov,side", "cover_side", "40", 40, "mm", "EN 1992-1-1 4.4.1")), "e1-c1");
+        assertThat(steps.get(0).where()).containsExactly(
+                new HtmlModel.Definition("cover_side", "nominal cover at the sides"));
+    }
+}
