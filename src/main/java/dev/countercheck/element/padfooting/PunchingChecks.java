@@ -12,10 +12,12 @@ import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.FindingKind;
 import dev.countercheck.statics.ColumnOutline;
 import dev.countercheck.statics.ControlPerimeter;
+import dev.countercheck.statics.PressureField;
 import dev.countercheck.submission.ActionCase;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.Column.ColumnShape;
 
+import java.util.List;
 import java.util.Optional;
 
 /**
@@ -69,11 +71,14 @@ final class PunchingChecks {
                 + " kN.").build();
     }
 
-    /** One control perimeter of one case: a, u on the plan, the deduction, VEd,red, β, and VRd. */
-    private record Perimeter(double aMm, double uMm, Step deduction, double vEdRedKn, Step beta, String caseName,
+    /**
+     * One control perimeter of one case: a, u on the plan, the case's ground pressure, VEd,red, β (by value:
+     * the governing perimeter's trace is written once the search is over), and VRd.
+     */
+    private record Perimeter(double aMm, double uMm, PressureField field, double vEdRedKn, double beta, ActionCase c,
                              double vRdKn) {
         double utilisation() {
-            return beta.value() * vEdRedKn / vRdKn;
+            return beta * vEdRedKn / vRdKn;
         }
     }
 
@@ -96,20 +101,24 @@ final class PunchingChecks {
         Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), ctx.fck.value()));
         ColumnOutline outline = PlanGeometry.outline(ctx.pad.column());
         int count = (int) Math.ceil(2 / step.value() - 1e-9);
+        List<ActionCase> cases = ctx.cases(ActionCase.Kind.ULS);
+        PressureField[] fields = new PressureField[cases.size()];
         Perimeter governing = null;
         for (int j = 1; j <= count; j++) {
             double a = 2 * d.value() * j / count;
             double u = ControlPerimeter.lengthInPlan(outline, a, ctx.pad.planXMm(), ctx.pad.planYMm());
             double vRd = Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a).value() * u * d.value() / 1000;
-            for (ActionCase c : ctx.cases(ActionCase.Kind.ULS)) {
-                Ground.Contact contact = Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow();
-                Step deduction = contact.field().insidePerimeter(outline, a);
-                double reduced = c.nKn() - deduction.value();
+            for (int i = 0; i < fields.length; i++) {
+                ActionCase c = cases.get(i);
+                if (fields[i] == null) {
+                    fields[i] = Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow().field();
+                }
+                double reduced = c.nKn() - fields[i].forceInsidePerimeter(outline, a);
                 if (reduced <= 1e-9 * Math.abs(c.nKn()) || u <= 0) {
                     continue;
                 }
-                Perimeter p = new Perimeter(a, u, deduction, reduced,
-                        ControlPerimeter.beta(outline, a, reduced, c.mxKnm(), c.myKnm()), c.name(), vRd);
+                Perimeter p = new Perimeter(a, u, fields[i], reduced,
+                        ControlPerimeter.betaValue(outline, a, reduced, c.mxKnm(), c.myKnm()), c, vRd);
                 if (governing == null || p.utilisation() > governing.utilisation()) {
                     governing = p;
                 }
@@ -129,10 +138,10 @@ final class PunchingChecks {
                     + " mm perimeter on the footing counts (EN 1992-1-1 6.4.2(4))");
         }
         b.value("u", u);
-        b.trace(g.deduction);
-        Step reduced = b.trace(Step.of("VEd,red", "N − ΔVEd", g.caseName + ": " + Num.f(g.vEdRedKn + g.deduction.value())
-                + " − " + Num.f(g.deduction.value()), g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.48)"));
-        Step beta = b.value("beta", g.beta);
+        Step deduction = b.trace(g.field.insidePerimeter(outline, g.aMm));
+        Step reduced = b.trace(Step.of("VEd,red", "N − ΔVEd", g.c.name() + ": " + Num.f(g.vEdRedKn + deduction.value())
+                + " − " + Num.f(deduction.value()), g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.48)"));
+        Step beta = b.value("beta", ControlPerimeter.beta(outline, g.aMm, g.vEdRedKn, g.c.mxKnm(), g.c.myKnm()));
         Step ved = b.value("ved", Step.of("β·VEd,red", "β·VEd,red", Num.f(beta.value()) + "·"
                 + Num.f(reduced.value()), beta.value() * reduced.value(), "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.51)"));
         Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), g.aMm));
@@ -140,7 +149,7 @@ final class PunchingChecks {
                 + Num.f(d.value()) + "/1000", g.vRdKn, "kN", "EN 1992-1-1 6.4.4(2)"));
         return b.require(ved.value(), vrd.value(), FindingKind.CAPACITY, "capacity", "β·VEd,red = "
                 + Num.f(ved.value()) + " kN at the control perimeter a = " + Num.f(g.aMm) + " mm from the column"
-                + " face exceeds VRd = " + Num.f(vrd.value()) + " kN (" + g.caseName + ").").build();
+                + " face exceeds VRd = " + Num.f(vrd.value()) + " kN (" + g.c.name() + ").").build();
     }
 
     /**
