@@ -284,7 +284,10 @@ public final class ControlPerimeter {
                 ys[q * n + i] = y0 + corners[q][1] + aMm * ARC_SIN[q * n + i];
             }
         }
-        return ConvexPolygon.of(xs, ys);
+        // The vertices lie within hx + a and hy + a of the centre; the box is widened far beyond rounding.
+        double slack = 1e-9 * (Math.abs(x0) + Math.abs(y0) + hx + hy + aMm);
+        return ConvexPolygon.of(xs, ys).enclosedBy(x0 - hx - aMm - slack, y0 - hy - aMm - slack,
+                x0 + hx + aMm + slack, y0 + hy + aMm + slack);
     }
 
     private static double sq(double v) {

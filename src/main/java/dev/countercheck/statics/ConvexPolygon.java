@@ -44,6 +44,15 @@ final class ConvexPolygon {
         return new ConvexPolygon(x, y);
     }
 
+    /**
+     * The same polygon, told a box that encloses it (known from how it was drawn, so that {@link #intersect}
+     * need not look through its vertices for one); a box larger than the polygon only skips fewer edges.
+     */
+    ConvexPolygon enclosedBy(double minX, double minY, double maxX, double maxY) {
+        box = new double[] {minX, minY, maxX, maxY};
+        return this;
+    }
+
     int size() {
         return xs.length;
     }
