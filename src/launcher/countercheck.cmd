@@ -1,6 +1,6 @@
 @echo off
 rem countercheck, as installed from the release archive: its own Java runtime and jar.
-rem COUNTERCHECK_JAVA_OPTS adds or overrides JVM options.
+rem COUNTERCHECK_JAVA_OPTS adds or overrides JVM options. The heap is capped at 2 GB (20 000 elements fit).
 rem As run.sh does: once, it reviews the starter example while listing the classes a review loads and
 rem stores them in a class-data-sharing archive beside the jar (when that folder is writable); every
 rem run then maps the archive in and starts faster. The Java runtime ignores an archive that no longer
@@ -11,7 +11,7 @@ set "JAVA=%HERE%..\runtime\bin\java.exe"
 if not exist "%JAVA%" set "JAVA=java"
 set "JAR=%HERE%..\lib\countercheck.jar"
 set "JSA=%HERE%..\lib\countercheck.jsa"
-set OPTS=-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -XX:MaxRAMPercentage=50 -Xshare:auto -Xlog:cds=off
+set OPTS=-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xmx2g -Xshare:auto -Xlog:cds=off
 if not exist "%JSA%" call :archive
 if exist "%JSA%" set OPTS=%OPTS% "-XX:SharedArchiveFile=%JSA%"
 "%JAVA%" %OPTS% %COUNTERCHECK_JAVA_OPTS% -jar "%JAR%" %*

@@ -11,8 +11,9 @@ java="${COUNTERCHECK_JAVA:?}"
 jar="${COUNTERCHECK_JAR:?}"
 archive="${jar%.jar}.jsa"
 # Start-up matters more than peak speed for a review: the client compiler only, the serial collector,
-# and at most half the memory for the heap.
-opts=(-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -XX:MaxRAMPercentage=50 -Xshare:auto -Xlog:cds=off)
+# and a heap of at most 2 GB: a review holds about 30 kB per element and writes its reports as it goes,
+# so that a submission of 20 000 elements fits with room to spare (the heap grows only as it is used).
+opts=(-XX:TieredStopAtLevel=1 -XX:+UseSerialGC -Xmx2g -Xshare:auto -Xlog:cds=off)
 if { [ ! -f "$archive" ] || [ "$jar" -nt "$archive" ]; } && [ -w "$(dirname "$jar")" ]; then
   # Written under a temporary name and moved into place, so that a concurrent run never maps half an archive.
   work="$(mktemp -d)"

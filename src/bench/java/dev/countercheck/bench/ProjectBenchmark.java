@@ -90,6 +90,8 @@ public final class ProjectBenchmark {
         System.out.printf("  floor (Jackson read + same-sized JSON write): median %.0f ms (%s)%n", floor / 1e6,
                 spread(floorTimes));
         System.out.printf("  ratio review/floor %.1f; peak heap during a review %,d MB%n", review / floor, peak >> 20);
+        System.out.printf("  HTML: %d file(s), the largest %,d bytes; JSON %,d bytes%n", count(out, ".html"),
+                largest(out, ".html"), sizeOf(out, ".json"));
     }
 
     private static int review(Path file, Path out, StringWriter errors) {
@@ -133,6 +135,22 @@ public final class ProjectBenchmark {
             }
             return total;
         }
+    }
+
+    private static long count(Path dir, String extension) throws IOException {
+        try (Stream<Path> files = Files.list(dir)) {
+            return files.filter(p -> p.toString().endsWith(extension)).count();
+        }
+    }
+
+    private static long largest(Path dir, String extension) throws IOException {
+        long max = 0;
+        try (Stream<Path> files = Files.list(dir)) {
+            for (Path p : files.filter(p -> p.toString().endsWith(extension)).toList()) {
+                max = Math.max(max, Files.size(p));
+            }
+        }
+        return max;
     }
 
     private static double median(List<Long> times) {

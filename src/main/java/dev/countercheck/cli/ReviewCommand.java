@@ -3,11 +3,9 @@ package dev.countercheck.cli;
 import dev.countercheck.element.ElementKinds;
 import dev.countercheck.element.ProjectReviewer;
 import dev.countercheck.input.UnusableInputException;
-import dev.countercheck.report.HtmlReportWriter;
-import dev.countercheck.report.JsonResultWriter;
-import dev.countercheck.report.PdfReportWriter;
 import dev.countercheck.report.OutputSet;
 import dev.countercheck.report.ReportIndex;
+import dev.countercheck.report.ReviewReports;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 import dev.countercheck.round.ReviewRound;
@@ -148,14 +146,10 @@ public final class ReviewCommand implements Callable<Integer> {
             Optional<Path> pdfFile = pdf ? Optional.of(targets.report(file, ".pdf")) : Optional.empty();
             List<Path> written = new ArrayList<>(List.of(json, html));
             try (OutputSet reports = OutputSet.in(outDir, sink)) {
-                String result = new JsonResultWriter().write(review, context);
-                reports.add(json.getFileName().toString(), result);
-                reports.add(html.getFileName().toString(), new HtmlReportWriter().write(review, context));
-                if (pdfFile.isPresent()) {
-                    reports.add(pdfFile.get().getFileName().toString(), new PdfReportWriter()
-                            .write(review, context, json.getFileName().toString(), result));
-                    written.add(pdfFile.get());
-                }
+                ReviewReports.addTo(reports, review, context, json.getFileName().toString(),
+                        html.getFileName().toString(), pdfFile.map(p -> p.getFileName().toString()))
+                        .forEach(part -> written.add(html.resolveSibling(part)));
+                pdfFile.ifPresent(written::add);
                 for (Map.Entry<String, byte[]> extra : round.files(review, threshold).entrySet()) {
                     Path target = targets.report(file, extra.getKey());
                     reports.add(target.getFileName().toString(), extra.getValue());

@@ -32,10 +32,17 @@ public final class CombinationsCheck {
     private CombinationsCheck() {
     }
 
-    /** Only the designer's cases were given: the combinations were taken as given. */
+    /**
+     * Only the designer's cases were given: there is nothing to compare them with (the check, defined as that
+     * comparison, does not apply), and a note says that the combinations were taken as given and not checked.
+     */
     public static CheckOutcome notAsked(CheckCatalogue catalogue) {
         return builder(catalogue).notApplicable("no characteristic loads (loads) were given: the designer's"
-                + " combinations of actions were taken as given and not checked").build();
+                + " combinations of actions were taken as given and not checked")
+                .finding(FindingKind.REMARK, "not-checked", "The combinations of actions were not checked: the"
+                        + " submission gives the designer's combined cases only. Give the characteristic loads by"
+                        + " source (loads) for the review to generate the EN 1990 combinations and compare.")
+                .build();
     }
 
     /** The combinations could not be formed (the ruleset lacks a factor): the reason says why. */

@@ -55,8 +55,11 @@ import java.util.regex.Pattern;
  */
 public final class TreeParser {
 
-    /** The largest document read, in characters. A submission of a hundred elements is about 150 000. */
-    public static final int MAX_DOCUMENT_CHARS = 2_000_000;
+    /**
+     * The largest document read, in characters. A submission of a hundred elements is about 150 000,
+     * so that the most elements a submission may hold (20 000) fit at 2 400 characters each.
+     */
+    public static final int MAX_DOCUMENT_CHARS = 48_000_000;
     /** The deepest nesting of mappings and lists; a submission needs 6 ({@code elements[0].piles.positions[0]}). */
     public static final int MAX_NESTING_DEPTH = 32;
     /** The longest text value, in characters. */
@@ -67,9 +70,9 @@ public final class TreeParser {
     public static final int MAX_NUMBER_CHARS = 100;
     /**
      * The most tokens (keys, values, starts and ends of mappings and lists) in a document. An
-     * element takes 150 to 250, so a file of the most elements a submission may hold fits.
+     * element takes 150 to 250, so a file of the most elements a submission may hold (20 000) fits.
      */
-    public static final int MAX_TOKENS = 300_000;
+    public static final int MAX_TOKENS = 6_000_000;
 
     private static final StreamReadConstraints LIMITS = StreamReadConstraints.builder()
             .maxDocumentLength(MAX_DOCUMENT_CHARS)

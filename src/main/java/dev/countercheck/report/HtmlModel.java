@@ -25,6 +25,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Supplier;
 import java.util.stream.IntStream;
 
 /**
@@ -44,7 +45,23 @@ import java.util.stream.IntStream;
  */
 public record HtmlModel(Header header, String pageHeading, List<Count> verdictCounts, List<Count> severityCounts,
                         List<String> assumptions, List<FindingRow> register, List<ElementView> elements,
-                        List<ElementCautions> cautions, RoundView round) {
+                        List<ElementCautions> cautions, RoundView round, Paging paging) {
+
+    /** The link to {@code anchor} from the page being written (see {@link Paging#href}). */
+    public String href(String anchor) {
+        return paging.href(anchor);
+    }
+
+    /**
+     * The same report on part {@code k} (from 1) of its pages: the elements of that part only; the
+     * lists of the project page are shared, not built again.
+     */
+    HtmlModel part(int k) {
+        int from = (k - 1) * Paging.PER_PART;
+        List<ElementView> shown = elements.subList(from, Math.min(elements.size(), from + Paging.PER_PART));
+        return new HtmlModel(header, pageHeading, verdictCounts, severityCounts, assumptions, register, shown,
+                cautions, round, paging.atPart(k));
+    }
 
     public record Header(String title, String reference, String revision, String preparedBy, String submissionDate,
                          String file, String sha256, String rulesetId, String rulesetTitle, String rulesetSha256,
@@ -57,7 +74,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
 
     /** Every critical and major finding, in the register's order: page one lists them. */
     public List<FindingRow> problems() {
-        return elements.stream().flatMap(e -> e.problems().stream()).toList();
+        return register.stream().filter(FindingRow::isProblem).toList();
     }
 
     /**
@@ -69,6 +86,11 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      */
     public record FindingRow(String id, String elementId, String elementAnchor, String severity, String checkAnchor,
                              String basis, String message, String response, String responseStatus, String change) {
+
+        /** Whether it is critical or major, for page one. */
+        boolean isProblem() {
+            return severity.equals(Severity.CRITICAL.label()) || severity.equals(Severity.MAJOR.label());
+        }
     }
 
     /**
@@ -100,11 +122,11 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      * One element.
      *
      * @param number   its section number in the report, e.g. "2.3"
-     * @param drawings its drawings: one set for a pile cap, none for an element that was not reviewed
+     * @param drawingsOf its drawings: one set for a pile cap, none for an element that was not reviewed
      */
     public record ElementView(String anchor, String number, String id, String type, String description,
                               String verdict, List<CheckView> checks, List<FindingRow> findings, int cautionCount,
-                              List<DrawingView> drawings, List<CombinationRow> combinations) {
+                              Supplier<List<DrawingView>> drawingsOf, List<CombinationRow> combinations) {
 
         /** The checks with a utilisation, largest first, then the others in their order. */
         public List<CheckView> checksByUtilisation() {
@@ -119,10 +141,9 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
             return checksByUtilisation().stream().filter(c -> c.utilisationValue().isPresent()).limit(1).toList();
         }
 
-        /** Every critical and major finding of the element, for page one. */
-        public List<FindingRow> problems() {
-            return findings.stream().filter(f -> f.severity().equals(Severity.CRITICAL.label())
-                    || f.severity().equals(Severity.MAJOR.label())).toList();
+        /** Its drawings, drawn when the template reads them. */
+        public List<DrawingView> drawings() {
+            return drawingsOf.get();
         }
     }
 
@@ -180,22 +201,29 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     public record ElementCautions(String elementId, String anchor, List<String> cautions) {
     }
 
-    static HtmlModel of(Review review, ReviewRound round) {
-        List<ElementView> elements = IntStream.range(0, review.elements().size())
-                .mapToObj(i -> element(review.elements().get(i), i + 1, round))
+    /**
+     * The model of {@code review}'s report. The element views are built when the template reads them
+     * and dropped after (see {@link ElementViews}), so that the model of a large project holds its
+     * short lists (register, not-checked, cautions) but never every element's formatted calculations
+     * at once.
+     */
+    static HtmlModel of(Review review, ReviewRound round, Paging paging) {
+        List<ElementReview> reviewed = review.elements();
+        List<ElementView> elements = new ElementViews(reviewed.size(), i -> element(reviewed.get(i), i + 1, round));
+        List<FindingRow> register = IntStream.range(0, reviewed.size())
+                .mapToObj(i -> findingRows(reviewed.get(i), "e" + (i + 1), round))
+                .flatMap(List::stream)
                 .toList();
-        List<FindingRow> register = elements.stream().flatMap(e -> e.findings().stream()).toList();
-        List<ElementCautions> cautions = IntStream.range(0, review.elements().size())
-                .filter(i -> !review.elements().get(i).cautions().isEmpty())
-                .mapToObj(i -> new ElementCautions(review.elements().get(i).id(), "e" + (i + 1),
-                        review.elements().get(i).cautions()))
+        List<ElementCautions> cautions = IntStream.range(0, reviewed.size())
+                .filter(i -> !reviewed.get(i).cautions().isEmpty())
+                .mapToObj(i -> new ElementCautions(reviewed.get(i).id(), "e" + (i + 1), reviewed.get(i).cautions()))
                 .toList();
         return new HtmlModel(header(review), PageHeading.css(review), verdictCounts(review.summary()),
                 severityCounts(review.summary()), review.assumptions(), register, elements, cautions,
-                roundView(round, elements));
+                roundView(round, reviewed), paging);
     }
 
-    private static RoundView roundView(ReviewRound round, List<ElementView> elements) {
+    private static RoundView roundView(ReviewRound round, List<ElementReview> elements) {
         List<Count> counts = round.revision().map(r -> r.counts().entrySet().stream()
                 .map(c -> new Count(c.getKey().label(), c.getValue())).toList()).orElse(List.of());
         List<ClosedRow> closed = round.revision().map(r -> r.entries().stream()
@@ -206,14 +234,20 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 .map(r -> new OrphanRow(r.findingId(), r.where(), r.text(),
                         r.status().map(ResponseStatus::label).orElse("")))
                 .toList();
-        List<NotCheckedRow> notChecked = elements.stream().flatMap(e -> e.checks().stream()
-                .filter(c -> c.status().equals(CheckStatus.NOT_CHECKED.label())
-                        || c.status().equals(CheckStatus.NOT_APPLICABLE.label()))
-                .map(c -> new NotCheckedRow(e.id(), e.anchor(), c.id(), c.anchor(), c.status(), c.reason())))
-                .toList();
+        List<NotCheckedRow> notChecked = new ArrayList<>();
+        for (int i = 0; i < elements.size(); i++) {
+            ElementReview e = elements.get(i);
+            for (int j = 0; j < e.checks().size(); j++) {
+                CheckResult c = e.checks().get(j);
+                if (c.status() == CheckStatus.NOT_CHECKED || c.status() == CheckStatus.NOT_APPLICABLE) {
+                    notChecked.add(new NotCheckedRow(e.id(), "e" + (i + 1), c.id(), checkAnchor("e" + (i + 1), j),
+                            c.status().label(), text(c.reason())));
+                }
+            }
+        }
         return new RoundView(round.signOff().checker().orElse(""), round.signOff().reviewRef().orElse(""),
-                round.revision().map(RevisionComparison::previous).orElse(""), counts, closed, orphans, notChecked,
-                round.outOfScope());
+                round.revision().map(RevisionComparison::previous).orElse(""), counts, closed, orphans,
+                List.copyOf(notChecked), round.outOfScope());
     }
 
     private static Header header(Review review) {
@@ -241,16 +275,13 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     private static ElementView element(ElementReview element, int position, ReviewRound round) {
         String anchor = "e" + position;
         List<CheckView> checks = IntStream.range(0, element.checks().size())
-                .mapToObj(i -> check(element.checks().get(i), anchor + "-c" + (i + 1)))
+                .mapToObj(i -> check(element.checks().get(i), checkAnchor(anchor, i)))
                 .toList();
-        List<FindingRow> findings = element.findings().stream()
-                .map(f -> findingRow(f, element.id(), anchor, checks, round))
-                .toList();
-        List<DrawingView> drawings = element.drawing().map(d -> List.of(drawing(anchor, element, d)))
-                .orElse(List.of());
+        Supplier<List<DrawingView>> drawings = () -> element.drawing()
+                .map(d -> List.of(drawing(anchor, element, d))).orElse(List.of());
         return new ElementView(anchor, "2." + position, element.id(), element.type(), element.description(),
-                element.verdict().label(), checks, findings, element.cautions().size(), drawings,
-                element.combinations().stream().map(HtmlModel::combinationRow).toList());
+                element.verdict().label(), checks, findingRows(element, anchor, round), element.cautions().size(),
+                drawings, element.combinations().stream().map(HtmlModel::combinationRow).toList());
     }
 
     private static CombinationRow combinationRow(GeneratedCase c) {
@@ -258,6 +289,15 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                 ReportNumbers.display(c.mxKnm(), "kNm"), ReportNumbers.display(c.myKnm(), "kNm"),
                 ReportNumbers.display(c.hxKn(), "kN"), ReportNumbers.display(c.hyKn(), "kN"), c.trace().substituted(),
                 c.trace().clause(), String.join(", ", c.governs()));
+    }
+
+    /** The anchor of the check at {@code index} (from 0) of the element at {@code elementAnchor}. */
+    private static String checkAnchor(String elementAnchor, int index) {
+        return elementAnchor + "-c" + (index + 1);
+    }
+
+    private static List<FindingRow> findingRows(ElementReview element, String anchor, ReviewRound round) {
+        return element.findings().stream().map(f -> findingRow(f, element, anchor, round)).toList();
     }
 
     /** The element's drawing as its kind renders it; the report never asks which kind it is. */
@@ -277,15 +317,15 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
         });
     }
 
-    private static FindingRow findingRow(Finding finding, String elementId, String elementAnchor,
-                                         List<CheckView> checks, ReviewRound round) {
-        String checkAnchor = checks.stream()
-                .filter(c -> c.id().equals(finding.check()))
-                .map(CheckView::anchor)
+    private static FindingRow findingRow(Finding finding, ElementReview element, String elementAnchor,
+                                         ReviewRound round) {
+        String checkAnchor = IntStream.range(0, element.checks().size())
+                .filter(i -> element.checks().get(i).id().equals(finding.check()))
+                .mapToObj(i -> checkAnchor(elementAnchor, i))
                 .findFirst()
                 .orElse("");
         Optional<Response> response = round.responses().to(finding.id());
-        return new FindingRow(finding.id(), elementId, elementAnchor, finding.severity().label(), checkAnchor,
+        return new FindingRow(finding.id(), element.id(), elementAnchor, finding.severity().label(), checkAnchor,
                 finding.basis(), finding.message(), response.map(Response::text).orElse(""),
                 response.flatMap(Response::status).map(ResponseStatus::label).orElse(""),
                 round.revision().flatMap(r -> r.entry(finding.id())).map(e -> e.change().label()).orElse(""));

@@ -11,6 +11,9 @@ import freemarker.template.TemplateExceptionHandler;
 
 import java.io.IOException;
 import java.io.StringWriter;
+import java.io.Writer;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.TimeZone;
 
@@ -50,21 +53,62 @@ public final class HtmlReportWriter {
         return write(review, ReviewRound.none(""));
     }
 
-    /** The HTML page for {@code review} in its round: sign-off, responses, comparison with the previous revision. */
+    /**
+     * The report of {@code review} in its round as one HTML page, however many elements it has:
+     * sign-off, responses, comparison with the previous revision.
+     */
     public String write(Review review, ReviewRound round) {
-        return render(TEMPLATE, HtmlModel.of(review, round));
+        return render(TEMPLATE, HtmlModel.of(review, round, Paging.ONE_PAGE));
+    }
+
+    /**
+     * The HTML files of the report of {@code review} in its round, whose first page is {@code fileName}:
+     * that page alone for a project of up to {@link Paging#PER_PART} elements, else the project page and
+     * its parts (see {@link Paging}). Each file is written into its writer as the template runs.
+     */
+    public List<Page> pages(Review review, ReviewRound round, String fileName) {
+        HtmlModel model = HtmlModel.of(review, round, Paging.of(fileName, review.elements().size()));
+        List<Page> pages = new ArrayList<>();
+        pages.add(new Page(fileName, out -> render(TEMPLATE, model, out)));
+        for (int k = 1; k <= model.paging().parts(); k++) {
+            HtmlModel part = model.part(k);
+            pages.add(new Page(model.paging().partFile(k), out -> render(TEMPLATE, part, out)));
+        }
+        return pages;
+    }
+
+    /** One HTML file of a report: its name and what writes it. */
+    public record Page(String fileName, OutputSet.Text content) {
     }
 
     /** The page of template {@code name} for {@code model}. */
     String render(String name, Object model) {
         StringWriter out = new StringWriter();
         try {
-            Template template = FREEMARKER.getTemplate(name);
+            render(name, model, out);
+        } catch (IOException e) {
+            throw new IllegalStateException("a StringWriter does not fail", e);
+        }
+        return out.toString();
+    }
+
+    /**
+     * Writes the page of template {@code name} for {@code model} into {@code out}; an {@link IOException}
+     * is the writer's own (a full disk), any other failure a bug in this package.
+     */
+    void render(String name, Object model, Writer out) throws IOException {
+        Template template;
+        try {
+            template = FREEMARKER.getTemplate(name);
+        } catch (IOException e) {
+            throw new IllegalStateException("could not read templates/" + name + " from the jar: " + e.getMessage(), e);
+        }
+        try {
             template.process(model, out);
-        } catch (IOException | TemplateException e) {
+        } catch (TemplateException e) {
             // The templates ship inside the jar and their models are built here: failing is a bug in this package.
             throw new IllegalStateException("could not render templates/" + name + ": " + e.getMessage(), e);
         }
-        return out.toString();
+        out.flush();
     }
 }

@@ -1,11 +1,13 @@
 package dev.countercheck.report;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import com.fasterxml.jackson.core.util.Separators;
+import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectWriter;
+import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -21,6 +23,9 @@ import dev.countercheck.review.Value;
 import dev.countercheck.review.Verdict;
 import dev.countercheck.round.ReviewRound;
 
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.Writer;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -42,6 +47,8 @@ public final class JsonResultWriter {
 
     private static final JsonMapper MAPPER = JsonMapper.builder()
             .enable(StreamWriteFeature.WRITE_BIGDECIMAL_AS_PLAIN)
+            .disable(StreamWriteFeature.AUTO_CLOSE_TARGET)
+            .disable(SerializationFeature.FLUSH_AFTER_WRITE_VALUE)
             .build();
 
     private static final ObjectWriter WRITER = MAPPER.writer(prettyPrinter());
@@ -56,24 +63,56 @@ public final class JsonResultWriter {
      * with the previous revision where the round has them ({@link RoundJson}).
      */
     public String write(Review review, ReviewRound round) {
-        ObjectNode root = MAPPER.createObjectNode();
-        root.put("format", FORMAT);
-        root.set("tool", tool(review.tool()));
-        root.set("submission", submission(review.submission()));
-        root.set("ruleset", ruleset(review.ruleset()));
-        root.put("review_date", review.reviewDate());
-        root.put("verdict", review.verdict().label());
-        ArrayNode elements = root.putArray("elements");
-        review.elements().forEach(e -> elements.add(element(e)));
-        root.set("summary", summary(review.summary()));
-        RoundJson.add(root, review, round);
-        strings(root.putArray("assumptions"), review.assumptions());
+        StringWriter out = new StringWriter();
         try {
-            return WRITER.writeValueAsString(root) + "\n";
-        } catch (JsonProcessingException e) {
-            // A tree of strings and numbers always serialises; reaching this is a bug here.
+            write(review, round, out);
+        } catch (IOException e) {
+            // A StringWriter does not fail; a tree of strings and numbers always serialises.
             throw new IllegalStateException("could not serialise the review result", e);
         }
+        return out.toString();
+    }
+
+    /**
+     * Writes the JSON text of {@code review} in its round, ending in a newline, into {@code out}
+     * element by element: only one element's part of the result is held in memory at a time.
+     * {@code out} is flushed, not closed.
+     */
+    public void write(Review review, ReviewRound round, Writer out) throws IOException {
+        try (JsonGenerator g = WRITER.createGenerator(out)) {
+            g.writeStartObject();
+            g.writeStringField("format", FORMAT);
+            field(g, "tool", tool(review.tool()));
+            field(g, "submission", submission(review.submission()));
+            field(g, "ruleset", ruleset(review.ruleset()));
+            g.writeStringField("review_date", review.reviewDate());
+            g.writeStringField("verdict", review.verdict().label());
+            g.writeArrayFieldStart("elements");
+            for (ElementReview element : review.elements()) {
+                MAPPER.writeTree(g, element(element));
+            }
+            g.writeEndArray();
+            field(g, "summary", summary(review.summary()));
+            ObjectNode roundFields = MAPPER.createObjectNode();
+            RoundJson.add(roundFields, review, round);
+            for (Map.Entry<String, JsonNode> field : roundFields.properties()) {
+                field(g, field.getKey(), field.getValue());
+            }
+            g.writeArrayFieldStart("assumptions");
+            for (String assumption : review.assumptions()) {
+                g.writeString(assumption);
+            }
+            g.writeEndArray();
+            g.writeEndObject();
+            g.flush();
+        }
+        out.write('\n');
+        out.flush();
+    }
+
+    private static void field(JsonGenerator g, String name, JsonNode value) throws IOException {
+        g.writeFieldName(name);
+        MAPPER.writeTree(g, value);
     }
 
     private static ObjectNode tool(Review.ToolInfo tool) {

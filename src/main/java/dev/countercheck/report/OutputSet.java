@@ -1,6 +1,10 @@
 package dev.countercheck.report;
 
+import java.io.BufferedWriter;
 import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
@@ -32,7 +36,22 @@ public final class OutputSet implements AutoCloseable {
     /** Writes the bytes of a new file and forces them to disk; replaceable in tests (a full disk). */
     @FunctionalInterface
     public interface Sink {
-        void write(Path file, byte[] content) throws IOException;
+        void write(Path file, Content content) throws IOException;
+    }
+
+    /**
+     * What a file of the set holds, written when the set is committed straight into the file's
+     * (buffered) stream, so that a large report is never held whole in memory.
+     */
+    @FunctionalInterface
+    public interface Content {
+        void writeTo(OutputStream out) throws IOException;
+    }
+
+    /** A text file's content, written as UTF-8 into a buffered writer when the set is committed. */
+    @FunctionalInterface
+    public interface Text {
+        void writeTo(Writer out) throws IOException;
     }
 
     /** The disk as it is. */
@@ -41,6 +60,9 @@ public final class OutputSet implements AutoCloseable {
     private static final Pattern TEMPORARY = Pattern.compile("\\.(.+)\\.(\\d+)\\.([0-9a-f]{16})\\.tmp");
     private static final Pattern JOURNAL = Pattern.compile("\\.countercheck\\.(\\d+)\\.([0-9a-f]{16})\\.set");
 
+    /** The size of the buffer between a report's writer and its file. */
+    static final int BUFFER = 1 << 16;
+
     /** The journal of a set while it is written; its move to {@code .countercheck.<pid>.<set>.set} commits the set. */
     private static final String PENDING = "countercheck-set";
 
@@ -48,7 +70,7 @@ public final class OutputSet implements AutoCloseable {
     private final Sink sink;
     private final String id = ProcessHandle.current().pid() + "." + HexFormat.of().toHexDigits(
             ThreadLocalRandom.current().nextLong());
-    private final Map<Path, byte[]> files = new LinkedHashMap<>();
+    private final Map<Path, Content> files = new LinkedHashMap<>();
     private final List<Path> written = new ArrayList<>();
     private boolean committed;
 
@@ -66,8 +88,8 @@ public final class OutputSet implements AutoCloseable {
         return new OutputSet(folder.toAbsolutePath().normalize(), sink);
     }
 
-    /** Adds a file of the set, by its name in the folder. */
-    public OutputSet add(String name, byte[] content) {
+    /** Adds a file of the set, by its name in the folder; {@code content} writes it when the set is committed. */
+    public OutputSet add(String name, Content content) {
         if (name.contains("/") || name.contains("\\") || name.startsWith(".")) {
             throw new IllegalArgumentException("a report's name is a plain file name: " + name);
         }
@@ -75,8 +97,21 @@ public final class OutputSet implements AutoCloseable {
         return this;
     }
 
+    /** Adds a text file, written as UTF-8 by {@code text} when the set is committed. */
+    public OutputSet addText(String name, Text text) {
+        return add(name, out -> {
+            Writer writer = new BufferedWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8), BUFFER);
+            text.writeTo(writer);
+            writer.flush();
+        });
+    }
+
+    public OutputSet add(String name, byte[] content) {
+        return add(name, out -> out.write(content));
+    }
+
     public OutputSet add(String name, String content) {
-        return add(name, content.getBytes(StandardCharsets.UTF_8));
+        return addText(name, out -> out.write(content));
     }
 
     /**
@@ -93,14 +128,14 @@ public final class OutputSet implements AutoCloseable {
             }
         }
         Files.createDirectories(folder);
-        for (Map.Entry<Path, byte[]> file : files.entrySet()) {
+        for (Map.Entry<Path, Content> file : files.entrySet()) {
             Path temporary = temporary(file.getKey());
             written.add(temporary);
             sink.write(temporary, file.getValue());
         }
         Path pending = folder.resolve("." + PENDING + "." + id + ".tmp");
         written.add(pending);
-        sink.write(pending, new byte[0]);
+        sink.write(pending, out -> { });
         Path journal = folder.resolve(".countercheck." + id + ".set");
         ReportFiles.move(pending, journal);
         committed = true;

@@ -26,6 +26,8 @@ final class PadDrawing {
     private static final double BOTTOM = 40;
     private static final double MAX_HEIGHT = 380;
     private static final double DIAGRAM = 120;
+    /** The width a character of the small text takes at most, px (as the drawing tests measure it). */
+    private static final double MARGIN_CHAR_WIDTH = 5.5;
     private static final String CONTACT = "fill=\"#d9e6d0\" stroke=\"#4f7a3a\" stroke-width=\"1.2\"";
     private static final String PRESSURE = "fill=\"#cfdcec\" stroke=\"#2f5d8a\" stroke-width=\"1.2\"";
     private static final String FACE = "stroke=\"#8a6a12\" stroke-width=\"1.2\" stroke-dasharray=\"4 3\"";
@@ -92,8 +94,42 @@ final class PadDrawing {
                 Styles.TEXT);
         svg.text(x(hx) + 8, y(hy) + 40, "h " + ReportNumbers.display(pad.depthMm(), "mm") + " mm", "start",
                 Styles.TEXT);
-        svg.text(x(hx) + 8, y(-hy), "contact under " + drawing.pressureCase(), "start", Styles.TEXT_SMALL);
+        marginLabel(svg, x(hx) + 8, y(-hy), wrapped("contact under", drawing.pressureCase(), ""));
         return svg.done();
+    }
+
+    private static void marginLabel(Svg svg, double x, double y, List<String> lines) {
+        for (int i = 0; i < lines.size(); i++) {
+            svg.text(x, y + 13 * i, lines.get(i), "start", Styles.TEXT_SMALL);
+        }
+    }
+
+    /**
+     * {@code before}, the case's name and {@code after} (each may be empty) in lines that fit the right margin,
+     * broken before each " + " of a generated combination's name (a part longer than a line keeps a line of its
+     * own).
+     */
+    static List<String> wrapped(String before, String caseName, String after) {
+        int fits = (int) ((RIGHT - 8) / MARGIN_CHAR_WIDTH);
+        List<String> parts = new ArrayList<>();
+        if (!before.isEmpty()) {
+            parts.add(before);
+        }
+        String[] terms = caseName.split(" \\+ ");
+        for (int i = 0; i < terms.length; i++) {
+            parts.add((i == 0 ? "" : "+ ") + terms[i] + (i == terms.length - 1 && !after.isEmpty() ? ", " + after : ""));
+        }
+        List<String> lines = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String part : parts) {
+            if (line.length() > 0 && line.length() + 1 + part.length() > fits) {
+                lines.add(line.toString());
+                line = new StringBuilder();
+            }
+            line.append(line.length() == 0 ? "" : " ").append(part);
+        }
+        lines.add(line.toString());
+        return lines;
     }
 
     private void perimeter(Svg svg, double a) {
@@ -150,8 +186,8 @@ final class PadDrawing {
                     Styles.TEXT);
         }
         svg.text(x(-hx) - 8, base - 2, "q", "end", Styles.TEXT);
-        svg.text(x(hx) + 8, base - 2, drawing.pressureCase() + ", y = " + ReportNumbers.display(yc, "mm") + " mm",
-                "start", Styles.TEXT_SMALL);
+        marginLabel(svg, x(hx) + 8, base - 2, wrapped("", drawing.pressureCase(),
+                "y = " + ReportNumbers.display(yc, "mm") + " mm"));
         return svg.done();
     }
 

@@ -11,6 +11,7 @@ import com.openhtmltopdf.util.XRLog;
 import dev.countercheck.review.Review;
 import dev.countercheck.round.ReviewRound;
 import org.apache.pdfbox.cos.COSArray;
+import org.apache.pdfbox.io.IOUtils;
 import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.cos.COSString;
 import org.apache.pdfbox.pdmodel.PDDocument;
@@ -22,6 +23,7 @@ import org.jsoup.helper.W3CDom;
 
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
@@ -69,7 +71,7 @@ public final class PdfReportWriter {
 
     /** The PDF bytes of the report of {@code review}, with its JSON result attached. */
     public byte[] write(Review review) {
-        return render(html.write(review), review, jsonName(review), new JsonResultWriter().write(review));
+        return write(review, ReviewRound.none(""), jsonName(review), new JsonResultWriter().write(review));
     }
 
     /**
@@ -77,7 +79,13 @@ public final class PdfReportWriter {
      * as written beside it) attached under the name {@code jsonName}.
      */
     public byte[] write(Review review, ReviewRound round, String jsonName, String json) {
-        return render(html.write(review, round), review, jsonName, json);
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try {
+            render(html.write(review, round), review, jsonName, json, out);
+        } catch (IOException e) {
+            throw new IllegalStateException("a ByteArrayOutputStream does not fail", e);
+        }
+        return out.toByteArray();
     }
 
     /** The name the JSON result has beside a report of the submission: its base name with {@code .json}. */
@@ -88,13 +96,22 @@ public final class PdfReportWriter {
         return (dot > 0 ? base.substring(0, dot) : base) + ".json";
     }
 
-    byte[] render(String page, Review review, String jsonName, String json) {
+    /**
+     * Lays out {@code page}, the HTML text of {@code review}'s report, once and writes the PDF into
+     * {@code out}, with {@code json} attached as {@code jsonName}. The pages' content is kept in a
+     * scratch file while the document is built, not in memory.
+     *
+     * @throws IOException when {@code out} cannot be written
+     */
+    void render(String page, Review review, String jsonName, String json, OutputStream out) throws IOException {
         Document html = Jsoup.parse(page);
         addBookmarks(html);
         org.w3c.dom.Document dom = new W3CDom().fromJsoup(html);
-        try (PdfFonts fonts = PdfFonts.open()) {
+        try (PdfFonts fonts = PdfFonts.open();
+             PDDocument document = new PDDocument(IOUtils.createTempFileOnlyStreamCache())) {
             PdfRendererBuilder builder = new PdfRendererBuilder()
                     .withW3cDocument(dom, null)
+                    .usePDDocument(document)
                     .usePdfAConformance(PdfAConformance.PDFA_3_U)
                     .useColorProfile(PdfArchive.srgbProfile())
                     .useSVGDrawer(new BatikSVGDrawer(SvgScriptMode.SECURE, SvgExternalResourceMode.SECURE))
@@ -104,17 +121,26 @@ public final class PdfReportWriter {
                             ExternalResourceControlPriority.RUN_AFTER_RESOLVING_URI)
                     .withProducer(producer(review));
             fonts.register(builder);
-            ByteArrayOutputStream out = new ByteArrayOutputStream();
+            // The renderer's fonts stay open until the document is saved: their subsets are embedded then.
             try (PdfBoxRenderer renderer = builder.buildPdfRenderer()) {
-                renderer.createPDFWithoutClosing();
-                PDDocument document = renderer.getPdfDocument();
-                Calendar date = reviewDate(review.reviewDate());
-                describe(document, review, page + json, date);
-                PdfArchive.describe(document);
-                PdfArchive.attachJson(document, jsonName, json, date);
+                layOut(renderer, document, review, page, jsonName, json);
                 document.save(out);
             }
-            return out.toByteArray();
+        }
+    }
+
+    /**
+     * Lays the document out and draws its pages into the renderer's document, once, then describes it
+     * as an archive copy with the JSON result attached.
+     */
+    private static void layOut(PdfBoxRenderer renderer, PDDocument document, Review review, String page,
+                               String jsonName, String json) {
+        try {
+            renderer.createPDFWithoutClosing();
+            Calendar date = reviewDate(review.reviewDate());
+            describe(document, review, page + json, date);
+            PdfArchive.describe(document);
+            PdfArchive.attachJson(document, jsonName, json, date);
         } catch (IOException e) {
             // Everything the renderer reads is in memory or in our jar: failing here is a bug, not bad input.
             throw new IllegalStateException("could not lay out the PDF report: " + e.getMessage(), e);

@@ -1,7 +1,10 @@
 package dev.countercheck.report;
 
+import java.io.BufferedOutputStream;
+import java.io.FilterOutputStream;
 import java.io.IOException;
-import java.nio.ByteBuffer;
+import java.io.OutputStream;
+import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
@@ -21,13 +24,29 @@ final class ReportFiles {
      * Files#createTempFile}, so that a report stays readable by whoever could read the folder's
      * other files.
      */
-    static void write(Path file, byte[] content) throws IOException {
+    static void write(Path file, OutputSet.Content content) throws IOException {
         try (FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {
-            ByteBuffer bytes = ByteBuffer.wrap(content);
-            while (bytes.hasRemaining()) {
-                channel.write(bytes);
-            }
+            OutputStream out = new BufferedOutputStream(Channels.newOutputStream(channel), OutputSet.BUFFER);
+            content.writeTo(new Unclosed(out));
+            out.flush();
             channel.force(true);
+        }
+    }
+
+    /** A stream whose {@code close} only flushes: a writer that closes what it is given leaves the file to be forced here. */
+    private static final class Unclosed extends FilterOutputStream {
+        Unclosed(OutputStream out) {
+            super(out);
+        }
+
+        @Override
+        public void write(byte[] b, int off, int len) throws IOException {
+            out.write(b, off, len);
+        }
+
+        @Override
+        public void close() throws IOException {
+            flush();
         }
     }
 

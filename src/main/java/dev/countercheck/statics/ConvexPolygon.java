@@ -53,6 +53,11 @@ final class ConvexPolygon {
         return this;
     }
 
+    /** Whether {@code other} has the same vertices in the same order (exactly). */
+    boolean sameAs(ConvexPolygon other) {
+        return other == this || java.util.Arrays.equals(xs, other.xs) && java.util.Arrays.equals(ys, other.ys);
+    }
+
     int size() {
         return xs.length;
     }

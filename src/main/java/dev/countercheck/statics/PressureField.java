@@ -107,13 +107,18 @@ public final class PressureField {
      * the column load, kN. The perimeter's arcs are drawn by chords of 1° (the area is short by 0.005 %).
      */
     public Step insidePerimeter(ColumnOutline column, double aMm) {
-        return Step.of("ΔVEd", "∫ q dA inside the control perimeter at a, on the plan",
-                "a = " + Num.f(aMm) + " mm", forceInsidePerimeter(column, aMm), "kN", BASIS + "; EN 1992-1-1 6.4.4(2)");
+        return insidePerimeter(ControlRegion.of(column, aMm));
     }
 
-    /** The value of {@link #insidePerimeter} alone (no trace text: a search over many perimeters), kN. */
-    public double forceInsidePerimeter(ColumnOutline column, double aMm) {
-        return forceOver(ControlPerimeter.region(column, aMm).intersect(contact));
+    /** As {@link #insidePerimeter(ColumnOutline, double)}, with the region formed once for several fields. */
+    public Step insidePerimeter(ControlRegion region) {
+        return Step.of("ΔVEd", "∫ q dA inside the control perimeter at a, on the plan",
+                "a = " + Num.f(region.aMm()) + " mm", forceInsidePerimeter(region), "kN", BASIS + "; EN 1992-1-1 6.4.4(2)");
+    }
+
+    /** The value of {@link #insidePerimeter(ControlRegion)} alone (no trace text: a search over many perimeters), kN. */
+    public double forceInsidePerimeter(ControlRegion region) {
+        return forceOver(region.on(contact));
     }
 
     private double forceOver(ConvexPolygon part) {

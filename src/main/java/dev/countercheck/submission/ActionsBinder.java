@@ -6,6 +6,7 @@ import dev.countercheck.input.Shown;
 import dev.countercheck.submission.ActionCase.Kind;
 import dev.countercheck.submission.Values.Bound;
 
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -29,6 +30,29 @@ final class ActionsBinder {
                 (item, itemPath) -> Fields.of(item, itemPath, values, KEYS).flatMap(this::actionCase)));
         cases.ifPresent(c -> checkNamesUnique(c, path));
         return cases;
+    }
+
+    /**
+     * The items every check needs that an element with {@code required} keys does not give: each missing key, and
+     * actions with a ULS case unless characteristic loads stand for them.
+     */
+    static List<String> missing(Fields f, List<String> required, Optional<List<ActionCase>> actions,
+                                Optional<List<CharacteristicLoad>> loads) {
+        List<String> missing = new ArrayList<>();
+        for (String key : required) {
+            if (!f.has(key)) {
+                missing.add(key);
+            }
+        }
+        if (loads.map(l -> !l.isEmpty()).orElse(false)) {
+            return missing;
+        }
+        if (!f.has("actions") || actions.map(List::isEmpty).orElse(false)) {
+            missing.add("actions");
+        } else if (actions.isPresent() && actions.get().stream().noneMatch(a -> a.kind() == Kind.ULS)) {
+            missing.add("a ULS action case (kind: uls)");
+        }
+        return missing;
     }
 
     private Optional<ActionCase> actionCase(Fields f) {

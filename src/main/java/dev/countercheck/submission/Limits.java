@@ -5,7 +5,8 @@ package dev.countercheck.submission;
  * costing more than a moment to read and review (the placement check compares every pile with
  * every other), and lie far beyond any design (common practice):
  * <ul>
- *   <li>1000 elements in one file: a large project has a few hundred foundations;
+ *   <li>20 000 elements in one file: a large project has a few hundred foundations, a site-wide
+ *       export of many buildings some thousands;
  *   <li>100 piles under one cap: a group larger than that is a piled raft, not a cap;
  *   <li>100 action cases per element;
  *   <li>20 bar sets on one face: a face has two directions, each in one or a few sets;
@@ -14,7 +15,7 @@ package dev.countercheck.submission;
  */
 final class Limits {
 
-    static final int ELEMENTS = 1000;
+    static final int ELEMENTS = 20_000;
     static final int PILES = 100;
     static final int ACTION_CASES = 100;
     static final int BAR_SETS = 20;

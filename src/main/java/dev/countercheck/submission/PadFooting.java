@@ -18,13 +18,29 @@ import java.util.Optional;
  *                      added by the review where a check needs them)
  * @param reinforcement the reinforcement, when given
  * @param claims        the designer's claimed values
+ * @param loads         the characteristic loads by source, from which the review generates combinations
  */
 public record PadFooting(String id, String description, SourceLocation location, Materials materials,
                          double planXMm, double planYMm, double depthMm, CastAgainst castAgainst,
                          Optional<Soil> soil, Column column, List<ActionCase> actions,
-                         Optional<Reinforcement> reinforcement, List<Claim> claims) implements ElementInput, RectangularPlan {
+                         Optional<Reinforcement> reinforcement, List<Claim> claims, List<CharacteristicLoad> loads)
+        implements ElementInput, RectangularPlan {
 
     public static final String TYPE = "pad-footing";
+
+    /** A pad footing given by its combined action cases only (no characteristic loads). */
+    public PadFooting(String id, String description, SourceLocation location, Materials materials, double planXMm,
+                      double planYMm, double depthMm, CastAgainst castAgainst, Optional<Soil> soil, Column column,
+                      List<ActionCase> actions, Optional<Reinforcement> reinforcement, List<Claim> claims) {
+        this(id, description, location, materials, planXMm, planYMm, depthMm, castAgainst, soil, column, actions,
+                reinforcement, claims, List.of());
+    }
+
+    /** The same footing reviewed under {@code cases} instead of its own action cases. */
+    public PadFooting withActions(List<ActionCase> cases) {
+        return new PadFooting(id, description, location, materials, planXMm, planYMm, depthMm, castAgainst, soil,
+                column, cases, reinforcement, claims, loads);
+    }
 
     @Override
     public String type() {

@@ -1,23 +1,21 @@
 package dev.countercheck.submission;
 
-import dev.countercheck.submission.ActionCase.Kind;
 import dev.countercheck.submission.PadFooting.Soil;
 import dev.countercheck.submission.PileCap.CastAgainst;
 import dev.countercheck.submission.Values.Bound;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
 /**
  * Reads one {@code type: pad-footing} element. An element that lacks an item every check needs (its
- * plan, depth, column, actions, or a ULS action case) but is otherwise readable becomes an
+ * plan, depth, column, and actions with a ULS case or else characteristic loads) but is otherwise readable becomes an
  * {@link IncompleteElement} naming what is missing; whatever it does give is still validated.
  */
 public final class PadFootingBinder {
 
     private static final List<String> KEYS = List.of("id", "type", "description", "materials", "plan", "depth",
-            "cast_against", "soil", "column", "actions", "reinforcement", "claims");
+            "cast_against", "soil", "column", "actions", "loads", "reinforcement", "claims");
     private static final List<String> SOIL_KEYS = List.of("allowable_bearing", "overburden", "unit_weight", "phi_k",
             "c_k", "cu_k", "gamma_k", "phi_cv_k", "groundwater_depth");
     /** Annex D's factors grow without bound as φ' nears 90°; no real soil reaches this angle. */
@@ -56,6 +54,9 @@ public final class PadFootingBinder {
                 .flatMap(c -> new ColumnBinder(values).read(c, plan));
         Optional<List<ActionCase>> actions = f.get("actions")
                 .flatMap(n -> new ActionsBinder(values).read(n, f.path("actions")));
+        Optional<List<CharacteristicLoad>> loads = f.has("loads")
+                ? f.get("loads").flatMap(n -> new LoadsBinder(values).read(n, f.path("loads")))
+                : Optional.of(List.of());
         Optional<Reinforcement> reinforcement = f.fields("reinforcement", ReinforcementBinder.KEYS)
                 .flatMap(r -> new ReinforcementBinder(values).read(r, plan, depth));
         Optional<ClaimsBinder.Claims> claims = f.has("claims")
@@ -63,7 +64,7 @@ public final class PadFootingBinder {
                 PadFootingChecks.CATALOGUE, false))
                 : Optional.of(ClaimsBinder.Claims.NONE);
 
-        List<String> missing = missing(f, actions);
+        List<String> missing = ActionsBinder.missing(f, List.of("plan", "depth", "column"), actions, loads);
         if (values.problems().any() || soil.isEmpty()) {
             return Optional.empty();
         }
@@ -73,7 +74,8 @@ public final class PadFootingBinder {
         }
         return Optional.of(new PadFooting(id, description, f.location(), materials.orElseThrow(),
                 plan.orElseThrow().xMm(), plan.orElseThrow().yMm(), depth.orElseThrow(), castAgainst.orElseThrow(),
-                soil.get(), column.orElseThrow(), actions.orElseThrow(), reinforcement, claims.orElseThrow().claims()));
+                soil.get(), column.orElseThrow(), actions.orElse(List.of()), reinforcement, claims.orElseThrow().claims(),
+                loads.orElseThrow()));
     }
 
     private Optional<Soil> soil(Fields f) {
@@ -110,21 +112,5 @@ public final class PadFootingBinder {
             return Optional.empty();
         }
         return angle;
-    }
-
-    /** The items every check needs that the element does not give. */
-    private static List<String> missing(Fields f, Optional<List<ActionCase>> actions) {
-        List<String> missing = new ArrayList<>();
-        for (String key : List.of("plan", "depth", "column")) {
-            if (!f.has(key)) {
-                missing.add(key);
-            }
-        }
-        if (!f.has("actions") || actions.map(List::isEmpty).orElse(false)) {
-            missing.add("actions");
-        } else if (actions.isPresent() && actions.get().stream().noneMatch(a -> a.kind() == Kind.ULS)) {
-            missing.add("a ULS action case (kind: uls)");
-        }
-        return missing;
     }
 }

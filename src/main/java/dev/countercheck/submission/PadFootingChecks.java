@@ -18,6 +18,7 @@ public final class PadFootingChecks {
 
     /** The checks of a pad footing, in report order. */
     public static final CheckCatalogue CATALOGUE = CheckCatalogue.of(PadFooting.TYPE, List.of(
+            SharedCombinationsCheck.COMBINATIONS,
             new CheckSpec("bearing-pressure", "Ground pressure under characteristic actions",
                     "linear no-tension contact under a rigid footing (common practice); allowable pressure as stated",
                     Kind.STRENGTH, List.of(demand("q_max", "kPa"), capacity("q_min", "kPa"),

@@ -1,7 +1,6 @@
 package dev.countercheck.submission;
 
 import dev.countercheck.input.Node;
-import dev.countercheck.submission.ActionCase.Kind;
 import dev.countercheck.submission.PileCap.CastAgainst;
 import dev.countercheck.submission.PileCap.SelfWeight;
 import dev.countercheck.submission.Values.Bound;
@@ -67,7 +66,7 @@ public final class PileCapBinder {
                 ? f.get("claims").flatMap(n -> new ClaimsBinder(values).read(n, f.path("claims"), PileCapChecks.CATALOGUE))
                 : Optional.of(ClaimsBinder.Claims.NONE);
 
-        List<String> missing = missing(f, actions, loads);
+        List<String> missing = ActionsBinder.missing(f, List.of("plan", "depth", "piles", "column"), actions, loads);
         if (values.problems().any()) {
             return Optional.empty();
         }
@@ -123,25 +122,5 @@ public final class PileCapBinder {
                     "β must be at least 1 (EN 1992-1-1 6.4.3(3)), found " + Values.format(beta));
         }
         return beta >= 1;
-    }
-
-    /** The items every check needs that the element does not give. */
-    private static List<String> missing(Fields f, Optional<List<ActionCase>> actions,
-                                        Optional<List<CharacteristicLoad>> loads) {
-        List<String> missing = new ArrayList<>();
-        for (String key : List.of("plan", "depth", "piles", "column")) {
-            if (!f.has(key)) {
-                missing.add(key);
-            }
-        }
-        if (loads.map(l -> !l.isEmpty()).orElse(false)) {
-            return missing;
-        }
-        if (!f.has("actions") || actions.map(List::isEmpty).orElse(false)) {
-            missing.add("actions");
-        } else if (actions.isPresent() && actions.get().stream().noneMatch(a -> a.kind() == Kind.ULS)) {
-            missing.add("a ULS action case (kind: uls)");
-        }
-        return missing;
     }
 }

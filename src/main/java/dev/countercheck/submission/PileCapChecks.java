@@ -17,9 +17,7 @@ public final class PileCapChecks {
 
     /** The checks of a pile cap, in report order. */
     public static final CheckCatalogue CATALOGUE = CheckCatalogue.of(PileCap.TYPE, List.of(
-            new CheckSpec("combinations", "Combinations of actions from the characteristic loads",
-                    "EN 1990 6.4.3, 6.5.3, Annex A1", Kind.STRENGTH, List.of(demand("cases_generated", "-"),
-                            capacity("cases_given", "-"), demand("worst_increase", "-"))),
+            SharedCombinationsCheck.COMBINATIONS,
             new CheckSpec("pile-reactions", "Pile reactions, rigid cap", "linear distribution (common practice)",
                     Kind.STRENGTH, List.of(demand("max", "kN"), capacity("min", "kN"))),
             new CheckSpec("pile-reactions-deviation", "Pile reactions with piles off position",

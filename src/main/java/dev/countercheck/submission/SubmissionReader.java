@@ -28,8 +28,11 @@ import java.util.Optional;
  */
 public final class SubmissionReader {
 
-    /** The most bytes read: four per character (the most UTF-8 takes) of the largest document parsed. */
-    static final int MAX_BYTES = 4 * TreeParser.MAX_DOCUMENT_CHARS;
+    /**
+     * The most bytes read: the largest document parsed ({@link TreeParser#MAX_DOCUMENT_CHARS}) with room
+     * for text of more than one byte per character; the bytes and the text are held while the file is parsed.
+     */
+    static final int MAX_BYTES = 64_000_000;
 
     private final List<ElementBinder> binders;
 

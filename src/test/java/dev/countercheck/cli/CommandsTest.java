@@ -160,14 +160,15 @@ class CommandsTest {
                 "2026-12-01", "--pdf");
         // harbour-lane has critical findings (its comment says so): exit 1.
         assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.FINDINGS);
-        assertThat(r.err()).contains("[1/4]").contains("[2/4]").contains("[4/4]");
-        for (String base : new String[] {"harbour-lane", "mill-road-depot", "orchard-yard-pads", "quayside-annex"}) {
+        assertThat(r.err()).contains("[1/5]").contains("[2/5]").contains("[5/5]");
+        for (String base : new String[] {"harbour-lane", "mill-road-depot", "orchard-yard-pads", "quayside-annex",
+                "tannery-row-pads"}) {
             assertThat(out.resolve(base + ".json")).isNotEmptyFile();
             assertThat(out.resolve(base + ".html")).isNotEmptyFile();
             assertThat(out.resolve(base + ".pdf")).isNotEmptyFile();
         }
         assertThat(out.resolve("index.html")).content().contains("harbour-lane.html").contains("mill-road-depot.html")
-                .contains("quayside-annex.html");
+                .contains("quayside-annex.html").contains("tannery-row-pads.html");
     }
 
     /** The combinations of the Mill Road sample: text by default, YAML items ready to paste as actions. */

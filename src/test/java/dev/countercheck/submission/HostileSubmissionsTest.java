@@ -87,7 +87,7 @@ class HostileSubmissionsTest {
 
         InputError error = onlyError(file);
 
-        assertThat(error.message()).contains("larger than 8 MB");
+        assertThat(error.message()).contains("larger than 64 MB");
         assertThat(error.location().line()).isEqualTo(1);
     }
 

@@ -67,7 +67,7 @@ final class AnchorageCheck {
                 }
             }
         }
-        b.trace(worst.strip.force());
+        b.governing(worst.caseName).trace(worst.strip.force());
         Step ze = b.trace(Step.of("ze", "from R to the column force " + Num.f(inset.value()) + "·c inside the face",
                 worst.caseName, worst.zeMm, "mm", "EN 1992-1-1 9.8.2.2(3), Figure 9.13"));
         Step force = b.value("force", Step.of("Fs", "R·ze/zi", Num.f(worst.strip.forceKn()) + "·" + Num.f(ze.value())

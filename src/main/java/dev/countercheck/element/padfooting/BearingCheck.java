@@ -50,6 +50,7 @@ final class BearingCheck {
                 least = c;
             }
         }
+        b.governing(worst.load().action().name());
         b.trace(Step.of("V", "N + Wf + Ws (characteristic)", worst.load().formed(), worst.load().vKn(), "kN",
                 "EN 1990 6.5.3, Exp. (6.14b)"));
         Step qMax = b.value("q_max", worst.solved().qMax());

@@ -34,6 +34,8 @@ final class EccentricityCheck {
         String outsideThird = null;
         String beyondEdge = null;
         String quasiOutsideKern = null;
+        String governing = null;
+        double largest = -1;
         for (ActionCase a : ctx.pad.actions()) {
             double gamma = a.kind() == ActionCase.Kind.ULS ? ctx.rules.number("gamma_g_inf") : 1.0;
             Resultant r = ctx.resultant(a, gamma);
@@ -50,6 +52,10 @@ final class EccentricityCheck {
             }
             double sx = Math.abs(r.exMm()) / lx;
             double sy = Math.abs(r.eyMm()) / ly;
+            if (Math.max(sx, sy) > largest) {
+                largest = Math.max(sx, sy);
+                governing = a.name();
+            }
             Optional<Ground.Contact> c = Ground.solve(ctx.pad, r);
             if (c.isEmpty()) {
                 beyondEdge = beyondEdge == null ? a.name() : beyondEdge;
@@ -70,7 +76,7 @@ final class EccentricityCheck {
             return b.fail(FindingKind.CAPACITY, "no-equilibrium", "No case presses the footing onto the ground: "
                     + beyondEdge + ".").build();
         }
-        b.trace(ctx.footingWeight);
+        b.governing(governing).trace(ctx.footingWeight);
         b.trace(ctx.overburdenWeight);
         b.value("e_x", Step.of("e,x", "|My*/V|, largest over the cases", ex.formed(), Math.abs(ex.exMm()), "mm",
                 "EN 1997-1 6.5.4"));

@@ -34,6 +34,10 @@ final class GeotechnicalChecks {
 
     /** One design situation: a case, the factor on the weights, and the material factors applied. */
     private record Situation(Resultant load, String name, double gammaPhi, double gammaC, double gammaCu) {
+
+        String caseName() {
+            return load.action().name();
+        }
     }
 
     static CheckOutcome bearingResistance(PadContext ctx) {
@@ -89,7 +93,7 @@ final class GeotechnicalChecks {
             return b.notApplicable("no case presses the footing onto the ground").build();
         }
         Situation s = governingSituation;
-        b.trace(ctx.footingWeight);
+        b.governing(s.caseName()).trace(ctx.footingWeight);
         b.trace(ctx.overburdenWeight);
         b.trace(Step.of("q", "γ·D (total overburden pressure at the base)", Num.f(soil.unitWeightKnM3()) + "·"
                 + Num.f(depth), qTotal, "kPa", "EN 1997-1 Annex D"));
@@ -149,6 +153,7 @@ final class GeotechnicalChecks {
             return b.notApplicable("no case applies a horizontal force").build();
         }
         Situation s = worstSituation;
+        b.governing(s.caseName());
         if (soil.phiKDeg().isPresent() && soil.phiCvKDeg().isEmpty()) {
             b.caution("Sliding of " + ctx.pad.id() + " used the peak φ'k for the interface, as no φ'cv,k is given:"
                     + " this is unconservative for concrete cast in place (EN 1997-1 6.5.3(10)).");
@@ -169,6 +174,12 @@ final class GeotechnicalChecks {
                 + " kN exceeds the sliding resistance Rd = " + Num.f(rd.value()) + " kN (" + s.name + ").").build();
     }
 
+    /**
+     * Overturning under every {@code equ} case. The footing's and the overburden's weight only ever stabilise
+     * (they act at the base centre), so they take γG,inf of EQU in every case, a generated case's γG,sup of the
+     * column's permanent actions included: for static equilibrium the favourable and unfavourable parts of the
+     * permanent actions are taken as separate actions (EN 1990 6.4.3.1(4) and its note).
+     */
     static CheckOutcome overturning(PadContext ctx) {
         CheckBuilder b = Checks.builder("overturning");
         List<ActionCase> cases = ctx.cases(ActionCase.Kind.EQU);
@@ -190,7 +201,7 @@ final class GeotechnicalChecks {
                 worstCase = a.name();
             }
         }
-        b.trace(ctx.footingWeight);
+        b.governing(worstCase).trace(ctx.footingWeight);
         b.trace(ctx.overburdenWeight);
         Step dst = b.value("m_dst", worst.mDst());
         Step stb = b.value("m_stb", worst.mStb());
@@ -200,12 +211,18 @@ final class GeotechnicalChecks {
     }
 
     /**
-     * DA1-1 on each {@code uls} case (M1, weights × γG,sup and × γG,inf), DA1-2 on each {@code uls-geo} case
-     * (M2, weights × 1.0).
+     * Both combinations of Design Approach 1, the worse governing (EN 1997-1 2.4.7.3.4.2(1)P, Annex A): DA1-1 on
+     * each {@code uls} case (A1 = EN 1990 Table A1.2(B), M1, R1; a designer's case with the weights × γG,sup and
+     * × γG,inf, a generated one with its own factor on the permanent actions), DA1-2 on each {@code uls-geo} case
+     * (A2 = Table A1.2(C), M2, R1; weights × the case's factor, 1.0 for a designer's case).
      */
     private static List<Situation> situations(PadContext ctx) {
         List<Situation> out = new ArrayList<>();
         for (ActionCase a : ctx.cases(ActionCase.Kind.ULS)) {
+            if (a.generated()) {
+                out.add(new Situation(ctx.resultant(a, 1.0), "DA1-1, " + a.name(), 1, 1, 1));
+                continue;
+            }
             out.add(new Situation(ctx.resultant(a, ctx.rules.number("gamma_g")), "DA1-1, " + a.name() + ", γG,sup",
                     1, 1, 1));
             out.add(new Situation(ctx.resultant(a, ctx.rules.number("gamma_g_inf")), "DA1-1, " + a.name()

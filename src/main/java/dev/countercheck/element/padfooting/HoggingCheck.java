@@ -38,12 +38,13 @@ final class HoggingCheck {
         double gamma = ctx.rules.number("gamma_g");
         double cover = ctx.pad.soil().map(s -> s.overburdenMm()).orElse(0.0);
         double soil = ctx.pad.soil().map(s -> s.unitWeightKnM3()).orElse(0.0);
-        double load = gamma * (ctx.rules.number("concrete_unit_weight") * ctx.pad.depthMm() + soil * cover) / 1000;
+        double unfactored = (ctx.rules.number("concrete_unit_weight") * ctx.pad.depthMm() + soil * cover) / 1000;
         double width = axis.width(ctx.pad);
         boolean partial = false;
         Side worst = null;
         for (ActionCase a : ctx.cases(ActionCase.Kind.ULS)) {
             Resultant r = ctx.resultant(a, gamma);
+            double load = PadContext.weightFactor(a, gamma) * unfactored;
             Optional<Ground.Contact> contact = Ground.solve(ctx.pad, r);
             if (contact.isEmpty() || contact.get().contactFraction() >= 1) {
                 continue;
@@ -71,7 +72,7 @@ final class HoggingCheck {
         }
         b.trace(ctx.footingWeight);
         b.trace(ctx.overburdenWeight);
-        b.trace(ctx.rules.parameter("gamma_g").asStep());
+        b.governing(worst.caseName).trace(ctx.rules.parameter("gamma_g").asStep());
         Step moment = b.value("moment", Step.of("M,hog", "γG·(γconc·h + γsoil·hs)·b·l²/2 − ∫ q·(distance beyond the"
                 + " face) dA", worst.terms + " (" + worst.caseName + ")", worst.momentKnm, "kNm", "EN 1992-1-1 6.1"));
         Optional<Reinforcement> r = ctx.pad.reinforcement();

@@ -91,12 +91,23 @@ final class PadContext {
 
     /**
      * The resultant of case {@code a} on the base with the footing's and the overburden's weight factored by
-     * {@code gammaG} (0: the column actions alone).
+     * {@code gammaG} for a designer's case, by the combination's own factor on the permanent actions for a generated
+     * case (EN 1990 Table A1.2, note on γG: all permanent actions of one source take the same factor), and by 0 when
+     * {@code gammaG} is 0 (the column actions alone).
      */
     Resultant resultant(ActionCase a, double gammaG) {
-        double weights = gammaG * (footingWeight.value() + overburdenWeight.value());
+        double weights = weightFactor(a, gammaG) * (footingWeight.value() + overburdenWeight.value());
         return new Resultant(a, BaseActions.of(a.name(), a.nKn(), a.mxKnm(), a.myKnm(), a.hxKn(), a.hyKn(),
                 pad.depthMm(), PlanGeometry.point(pad.column().position()), weights));
+    }
+
+    /**
+     * The factor on the footing's and the overburden's weight under case {@code a}: {@code designer} for a designer's
+     * case (the check chooses γG,sup or γG,inf), the combination's factor on the permanent actions for a generated
+     * one; 0 stays 0 (the column actions alone).
+     */
+    static double weightFactor(ActionCase a, double designer) {
+        return designer == 0 ? 0 : a.selfWeightFactor().orElse(designer);
     }
 
     /** The face of the column (or of its equivalent square) on side {@code sign} along {@code axis}, mm. */

@@ -1,6 +1,8 @@
 package dev.countercheck.element.padfooting;
 
 import dev.countercheck.element.Axis;
+import dev.countercheck.element.CombinationsCheck;
+import dev.countercheck.element.CombinedRuns;
 import dev.countercheck.element.DetailingVariables;
 import dev.countercheck.element.RuleChecks;
 import dev.countercheck.eurocode.Num;
@@ -58,7 +60,7 @@ final class PadFootingReviewer {
 
     /** What the detailing rules of a ruleset may use and define for pad footings: the checks not computed in Java. */
     static final ElementRules RULE_VOCABULARY = new ElementRules(PadScopes.SCOPES, DetailingVariables.subjects(),
-            CATALOGUE.quantityUnits(id -> !checks().containsKey(id)));
+            CATALOGUE.quantityUnits(id -> !checks().containsKey(id) && !id.equals(CombinationsCheck.ID)));
 
     private final ElementAssembler assembler;
 
@@ -67,6 +69,20 @@ final class PadFootingReviewer {
     }
 
     ElementReview review(PadFooting pad, Ruleset rules) {
+        CombinedRuns<Run> runs = new CombinedRuns<>(CATALOGUE, cases -> run(pad.withActions(cases), rules), Run::outcomes);
+        CombinedRuns.Result<Run> result = runs.review(pad, pad.actions(), rules);
+        List<CheckOutcome> outcomes = runs.inOrder(result);
+        return assembler.assemble(pad.id(), CATALOGUE, pad.description(), outcomes, pad.claims(),
+                result.shown().map(r -> cautions(r.ctx)).orElse(List.of()),
+                result.shown().flatMap(r -> DrawingNotes.of(r.ctx, outcomes)).<Drawing>map(d -> d))
+                .withCombinations(result.generated());
+    }
+
+    /** The context and the outcomes of every check but {@code combinations}, in catalogue order. */
+    private record Run(PadContext ctx, List<CheckOutcome> outcomes) {
+    }
+
+    private static Run run(PadFooting pad, Ruleset rules) {
         PadContext ctx = new PadContext(pad, rules);
         Map<String, CheckOutcome> done = new LinkedHashMap<>();
         checks().forEach((id, check) -> done.put(id, guarded(id, check, ctx)));
@@ -78,11 +94,13 @@ final class PadFootingReviewer {
         Map<String, DetailingVariables.Values> variables = new HashMap<>();
         List<CheckOutcome> outcomes = new ArrayList<>();
         for (String id : CATALOGUE.checks().keySet()) {
-            outcomes.add(done.containsKey(id) ? done.get(id) : RuleChecks.byRule(CATALOGUE, id, ctx.rules,
-                    PadScopes.SCOPES, (scope, subject) -> PadScopes.values(ctx, scope, subject, asRequired), variables));
+            if (!id.equals(CombinationsCheck.ID)) {
+                outcomes.add(done.containsKey(id) ? done.get(id) : RuleChecks.byRule(CATALOGUE, id, ctx.rules,
+                        PadScopes.SCOPES, (scope, subject) -> PadScopes.values(ctx, scope, subject, asRequired),
+                        variables));
+            }
         }
-        return assembler.assemble(pad.id(), CATALOGUE, pad.description(), outcomes, pad.claims(), cautions(ctx),
-                DrawingNotes.of(ctx, outcomes).<Drawing>map(d -> d));
+        return new Run(ctx, outcomes);
     }
 
     /** Element cautions: the linear pressure assumes a rigid footing (common practice: overhang ≤ ratio·h). */

@@ -12,6 +12,7 @@ import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.FindingKind;
 import dev.countercheck.statics.ColumnOutline;
 import dev.countercheck.statics.ControlPerimeter;
+import dev.countercheck.statics.ControlRegion;
 import dev.countercheck.statics.PressureField;
 import dev.countercheck.submission.ActionCase;
 import dev.countercheck.submission.Column;
@@ -56,7 +57,7 @@ final class PunchingChecks {
         if (beta == null) {
             return b.notApplicable("no ULS case presses the column onto the footing").build();
         }
-        b.value("beta", beta);
+        b.governing(worstCase).value("beta", beta);
         Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
                 + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
         Step u0 = b.value("u0", c.shape() == ColumnShape.CIRCULAR
@@ -101,23 +102,22 @@ final class PunchingChecks {
         Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), ctx.fck.value()));
         ColumnOutline outline = PlanGeometry.outline(ctx.pad.column());
         int count = (int) Math.ceil(2 / step.value() - 1e-9);
-        List<ActionCase> cases = ctx.cases(ActionCase.Kind.ULS);
-        PressureField[] fields = new PressureField[cases.size()];
         Perimeter governing = null;
+        List<ActionCase> cases = ctx.cases(ActionCase.Kind.ULS);
+        List<Ground.Contact> contacts = cases.stream()
+                .map(c -> Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow()).toList();
         for (int j = 1; j <= count; j++) {
             double a = 2 * d.value() * j / count;
             double u = ControlPerimeter.lengthInPlan(outline, a, ctx.pad.planXMm(), ctx.pad.planYMm());
             double vRd = Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a).value() * u * d.value() / 1000;
-            for (int i = 0; i < fields.length; i++) {
+            ControlRegion region = ControlRegion.of(outline, a);
+            for (int i = 0; i < cases.size(); i++) {
                 ActionCase c = cases.get(i);
-                if (fields[i] == null) {
-                    fields[i] = Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow().field();
-                }
-                double reduced = c.nKn() - fields[i].forceInsidePerimeter(outline, a);
+                double reduced = c.nKn() - contacts.get(i).field().forceInsidePerimeter(region);
                 if (reduced <= 1e-9 * Math.abs(c.nKn()) || u <= 0) {
                     continue;
                 }
-                Perimeter p = new Perimeter(a, u, fields[i], reduced,
+                Perimeter p = new Perimeter(a, u, contacts.get(i).field(), reduced,
                         ControlPerimeter.betaValue(outline, a, reduced, c.mxKnm(), c.myKnm()), c, vRd);
                 if (governing == null || p.utilisation() > governing.utilisation()) {
                     governing = p;
@@ -129,6 +129,7 @@ final class PunchingChecks {
                     + " face carries the whole column load in every ULS case").build();
         }
         Perimeter g = governing;
+        b.governing(g.c.name());
         b.value("a", Step.of("a", "the distance of greatest β·VEd,red/VRd, searched in steps of (Δa/d)·d up to 2d",
                 count + " perimeters", g.aMm, "mm", "EN 1992-1-1 6.4.4(2)"));
         Step full = ControlPerimeter.full(outline, g.aMm);

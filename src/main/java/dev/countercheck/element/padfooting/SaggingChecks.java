@@ -49,6 +49,7 @@ final class SaggingChecks {
         b.trace(ctx.fyd);
         ctx.equivalentSquare().ifPresent(b::trace);
         Part worst = worst(ctx, axis, 0, true);
+        b.governing(worst.caseName);
         b.trace(worst.resultant.force());
         Step moment = b.value("moment", Step.of("MEd", "∫ q·(distance beyond the column face) dA",
                 worst.resultant.moment().substituted() + " (" + worst.caseName + ")", worst.resultant.momentKnm(),
@@ -87,6 +88,7 @@ final class SaggingChecks {
         }
         ctx.equivalentSquare().ifPresent(b::trace);
         Part worst = worst(ctx, axis, d.value(), false);
+        b.governing(worst.caseName);
         Step ved = b.value("ved", Step.of("VEd", "∫ q dA beyond d from the column face",
                 worst.resultant.force().substituted() + " (" + worst.caseName + ")", worst.resultant.forceKn(), "kN",
                 "EN 1992-1-1 6.2.2"));

@@ -1,14 +1,11 @@
 package dev.countercheck.element.pilecap;
 
 import dev.countercheck.element.Axis;
-import dev.countercheck.element.Combinations;
 import dev.countercheck.element.DetailingVariables;
 import dev.countercheck.element.CombinationsCheck;
+import dev.countercheck.element.CombinedRuns;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.OutOfRangeException;
-import dev.countercheck.review.CheckResult;
-import dev.countercheck.review.GeneratedCase;
-import dev.countercheck.submission.ActionCase;
 import dev.countercheck.element.RuleChecks;
 import dev.countercheck.review.Value;
 import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
@@ -24,10 +21,8 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import java.util.Set;
 import java.util.function.Function;
-import java.util.stream.Collectors;
 
 import static dev.countercheck.submission.PileCapChecks.CATALOGUE;
 
@@ -84,34 +79,12 @@ final class PileCapReviewer {
             CATALOGUE.quantityUnits(id -> !checks().containsKey(id) && !id.equals(CombinationsCheck.ID)));
 
     ElementReview review(PileCap cap, Ruleset rules) {
-        if (cap.loads().isEmpty()) {
-            Run run = run(cap, rules);
-            return assemble(cap, run, CombinationsCheck.notAsked(CATALOGUE), List.of());
-        }
-        Combinations generated;
-        try {
-            generated = Combinations.of(cap.loads(), rules);
-        } catch (IllegalArgumentException e) {
-            CheckOutcome why = CombinationsCheck.notFormed(CATALOGUE, e.getMessage());
-            if (!hasUls(cap.actions())) {
-                return assembler.assemble(cap.id(), CATALOGUE, cap.description(), CATALOGUE.checks().keySet().stream()
-                        .map(id -> id.equals(CombinationsCheck.ID) ? why : Checks.builder(id)
-                                .notChecked("the combinations of the loads could not be formed: " + e.getMessage())
-                                .build()).toList(), cap.claims(), List.of(), Optional.empty());
-            }
-            return assemble(cap, run(cap, rules), why, List.of());
-        }
-        List<ActionCase> cases = generated.cases(cap.location());
-        List<ActionCase> both = new ArrayList<>(cap.actions());
-        both.addAll(cases);
-        Run union = run(cap.withActions(both), rules);
-        CheckOutcome comparison = hasUls(cap.actions())
-                ? CombinationsCheck.compare(CATALOGUE, results(run(cap, rules)), results(run(cap.withActions(cases),
-                        rules)), cap.actions().size(), cases.size(), rules.number("claim_tolerance"))
-                : CombinationsCheck.generatedOnly(CATALOGUE, cases.size(), cap.actions().size());
-        Set<String> names = cases.stream().map(ActionCase::name).collect(Collectors.toSet());
-        return assemble(cap, union, comparison, generated.forReport(CombinationsCheck.governed(
-                union.outcomes.stream().map(CheckOutcome::result).toList(), names)));
+        CombinedRuns<Run> runs = new CombinedRuns<>(CATALOGUE, cases -> run(cap.withActions(cases), rules), Run::outcomes);
+        CombinedRuns.Result<Run> result = runs.review(cap, cap.actions(), rules);
+        List<CheckOutcome> outcomes = runs.inOrder(result);
+        return assembler.assemble(cap.id(), CATALOGUE, cap.description(), outcomes, cap.claims(),
+                result.shown().map(r -> cautions(r.ctx)).orElse(List.of()),
+                result.shown().map(r -> DrawingNotes.of(r.ctx, outcomes))).withCombinations(result.generated());
     }
 
     /** The context and the outcomes of every check but {@code combinations}, in catalogue order. */
@@ -138,26 +111,6 @@ final class PileCapReviewer {
             }
         }
         return new Run(ctx, outcomes);
-    }
-
-    private ElementReview assemble(PileCap cap, Run run, CheckOutcome combinations, List<GeneratedCase> generated) {
-        List<CheckOutcome> outcomes = new ArrayList<>();
-        for (String id : CATALOGUE.checks().keySet()) {
-            outcomes.add(id.equals(CombinationsCheck.ID) ? combinations
-                    : run.outcomes.stream().filter(o -> o.result().id().equals(id)).findFirst().orElseThrow());
-        }
-        return assembler.assemble(cap.id(), CATALOGUE, cap.description(), outcomes, cap.claims(), cautions(run.ctx),
-                Optional.of(DrawingNotes.of(run.ctx, outcomes))).withCombinations(generated);
-    }
-
-    private static Map<String, CheckResult> results(Run run) {
-        Map<String, CheckResult> map = new LinkedHashMap<>();
-        run.outcomes.forEach(o -> map.put(o.result().id(), o.result()));
-        return map;
-    }
-
-    private static boolean hasUls(List<ActionCase> actions) {
-        return actions.stream().anyMatch(a -> a.kind() == ActionCase.Kind.ULS);
     }
 
     /** What the review took as given about the element as a whole. */
