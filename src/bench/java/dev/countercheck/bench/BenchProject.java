@@ -40,6 +40,38 @@ final class BenchProject {
         return file;
     }
 
+    /**
+     * A project of one pad footing: moments about both axes (two-way partial contact under the
+     * ULS case, solved by the no-tension solver), soil strength with uls-geo and equ cases (bearing
+     * resistance, sliding, overturning), service cases. Dimensions invented for timing only.
+     */
+    static Path writeOnePad(Path file) throws IOException {
+        Files.writeString(file, header(1) + """
+                  - id: P-00001
+                    type: pad-footing
+                    description: Benchmark pad, moments about both axes
+                    plan: {x: 2700, y: 2300}
+                    depth: 650
+                    cast_against: soil
+                    soil: {allowable_bearing: 325, overburden: 550, unit_weight: 19, phi_k: 31, gamma_k: 19, groundwater_depth: 2800}
+                    column: {shape: rectangular, size: [450, 400], position: [50, 0], starter_bars: {count: 8, diameter: 16}}
+                    actions:
+                      - {name: ULS-1, kind: uls, N: 1350, Mx: 310, My: 420, Hx: 35}
+                      - {name: ULS-2, kind: uls, N: 1700, Mx: 90, My: 120}
+                      - {name: GEO-1, kind: uls-geo, N: 1050, Mx: 240, My: 330, Hx: 30}
+                      - {name: EQU-1, kind: equ, N: 800, Mx: 260, My: 350, Hx: 35}
+                      - {name: SLS-1, kind: sls-characteristic, N: 980, Mx: 200, My: 270, Hx: 25}
+                    reinforcement:
+                      cover: {bottom: 75, top: 50, side: 75}
+                      bottom:
+                        - {direction: x, count: 13, diameter: 20, layer: 1}
+                        - {direction: y, count: 15, diameter: 16, layer: 2}
+                    claims:
+                      bearing-pressure: {q_max: 330}
+                """, StandardCharsets.UTF_8);
+        return file;
+    }
+
     private static String header(int count) {
         return """
                 countercheck: 1

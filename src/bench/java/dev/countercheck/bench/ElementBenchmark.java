@@ -24,7 +24,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
 
-/** Average time of the steps of a review for one element: review, ruleset load, JSON and HTML rendering. */
+/** Average time of the steps of a review for one element (4-pile cap, 9-pile cap, pad footing), ruleset load, JSON and HTML rendering. */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MICROSECONDS)
@@ -42,6 +42,7 @@ public class ElementBenchmark {
     private Ruleset rules;
     private Submission fourPiles;
     private Submission ninePiles;
+    private Submission pad;
     private Review fourPileReview;
 
     @Setup
@@ -50,6 +51,7 @@ public class ElementBenchmark {
         rules = loader.load("en1992-recommended");
         fourPiles = new SubmissionReader(ElementKinds.binders()).read(BenchProject.writeOne(dir.resolve("four.yaml"), 4));
         ninePiles = new SubmissionReader(ElementKinds.binders()).read(BenchProject.writeOne(dir.resolve("nine.yaml"), 9));
+        pad = new SubmissionReader(ElementKinds.binders()).read(BenchProject.writeOnePad(dir.resolve("pad.yaml")));
         fourPileReview = reviewer.review(fourPiles, rules, DATE);
     }
 
@@ -61,6 +63,11 @@ public class ElementBenchmark {
     @Benchmark
     public Review reviewNinePileCap() {
         return reviewer.review(ninePiles, rules, DATE);
+    }
+
+    @Benchmark
+    public Review reviewPadFooting() {
+        return reviewer.review(pad, rules, DATE);
     }
 
     @Benchmark

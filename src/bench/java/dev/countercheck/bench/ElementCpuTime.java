@@ -19,7 +19,7 @@ import java.util.List;
 import java.util.function.Supplier;
 
 /**
- * The CPU time of this thread per operation (review of one 4-pile and one 9-pile cap, JSON and HTML
+ * The CPU time of this thread per operation (review of one 4-pile and one 9-pile cap and one pad footing, JSON and HTML
  * of one element), warm: unlike JMH's wall-clock average it stays meaningful while other processes
  * compete for the cores. Median and spread over {@code -Dbatches=N} batches (default 7).
  */
@@ -38,15 +38,18 @@ public final class ElementCpuTime {
                 .load("en1992-recommended");
         Submission four = new SubmissionReader(ElementKinds.binders()).read(BenchProject.writeOne(dir.resolve("four.yaml"), 4));
         Submission nine = new SubmissionReader(ElementKinds.binders()).read(BenchProject.writeOne(dir.resolve("nine.yaml"), 9));
+        Submission pad = new SubmissionReader(ElementKinds.binders()).read(BenchProject.writeOnePad(dir.resolve("pad.yaml")));
         Review fourReview = reviewer.review(four, rules, "2026-01-01");
         JsonResultWriter json = new JsonResultWriter();
         HtmlReportWriter html = new HtmlReportWriter();
         report("review of a 4-pile cap", batches, () -> reviewer.review(four, rules, "2026-01-01"));
         report("review of a 9-pile cap", batches, () -> reviewer.review(nine, rules, "2026-01-01"));
+        report("review of a pad footing", batches, () -> reviewer.review(pad, rules, "2026-01-01"));
         report("JSON of one element", batches, () -> json.write(fourReview));
         report("HTML of one element", batches, () -> html.write(fourReview));
         Files.delete(dir.resolve("four.yaml"));
         Files.delete(dir.resolve("nine.yaml"));
+        Files.delete(dir.resolve("pad.yaml"));
         Files.delete(dir);
     }
 

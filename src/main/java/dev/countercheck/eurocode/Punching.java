@@ -6,6 +6,9 @@ public final class Punching {
     private static final String C_6_4_5_3 = "EN 1992-1-1 6.4.5(3)";
     private static final String C_PERIMETER = "EN 1992-1-1 6.4.2(1), Figure 6.13; 6.4.4(2)";
     private static final String C_TABLE_6_1 = "EN 1992-1-1 6.4.3(3), Table 6.1";
+    private static final String C_W1 = "EN 1992-1-1 6.4.3(3), Exp. (6.41), at distance a (6.4.4(2))";
+    private static final String C_BETA = "EN 1992-1-1 6.4.3(3), Exp. (6.39); 6.4.4(2), Exp. (6.51)";
+    private static final String C_BETA_CIRCULAR = "EN 1992-1-1 6.4.3(3), Exp. (6.42), at distance a (6.4.4(2))";
     /** Table 6.1: c1/c2 and k. */
     private static final double[] RATIO = {0.5, 1.0, 2.0, 3.0};
     private static final double[] K = {0.45, 0.60, 0.70, 0.80};
@@ -49,12 +52,17 @@ public final class Punching {
      * @return u, mm
      */
     public static Step u1Rectangular(double cxMm, double cyMm, double aMm) {
+        double u = u1RectangularValue(cxMm, cyMm, aMm);
+        return Step.of("u", "2·(cx + cy) + 2·π·a",
+                "2·(" + Num.f(cxMm) + " + " + Num.f(cyMm) + ") + 2·π·" + Num.f(aMm), u, "mm", C_PERIMETER);
+    }
+
+    /** The value of {@link #u1Rectangular} alone (no trace text: a search over many perimeters), mm. */
+    public static double u1RectangularValue(double cxMm, double cyMm, double aMm) {
         Bounds.positive("cx", cxMm, "mm", C_PERIMETER);
         Bounds.positive("cy", cyMm, "mm", C_PERIMETER);
         Bounds.positive("a", aMm, "mm", C_PERIMETER);
-        return Step.of("u", "2·(cx + cy) + 2·π·a",
-                "2·(" + Num.f(cxMm) + " + " + Num.f(cyMm) + ") + 2·π·" + Num.f(aMm),
-                2 * (cxMm + cyMm) + 2 * Math.PI * aMm, "mm", C_PERIMETER);
+        return 2 * (cxMm + cyMm) + 2 * Math.PI * aMm;
     }
 
     /**
@@ -142,25 +150,45 @@ public final class Punching {
      * @return k, -
      */
     public static Step kEccentricity(double c1Mm, double c2Mm) {
-        Bounds.positive("c1", c1Mm, "mm", C_TABLE_6_1);
-        Bounds.positive("c2", c2Mm, "mm", C_TABLE_6_1);
+        double k = kEccentricityValue(c1Mm, c2Mm);
         double ratio = c1Mm / c2Mm;
         String formula = "k(c1/c2), Table 6.1, linear between rows";
         String substituted = "k(" + Num.f(c1Mm) + "/" + Num.f(c2Mm) + " = " + Num.f(ratio) + ")";
-        if (ratio <= RATIO[0]) {
-            return Step.withRemark("k", formula, substituted, K[0], "-", C_TABLE_6_1, "c1/c2 ≤ 0.5: k = 0.45");
+        int row = upperRow(ratio);
+        String remark = row == 0 ? "c1/c2 ≤ 0.5: k = 0.45" : row == RATIO.length ? "c1/c2 ≥ 3.0: k = 0.80"
+                : "interpolated between c1/c2 = " + Num.f(RATIO[row - 1]) + " and " + Num.f(RATIO[row]);
+        return Step.withRemark("k", formula, substituted, k, "-", C_TABLE_6_1, remark);
+    }
+
+    /** The value of {@link #kEccentricity} alone (no trace text: a search over many perimeters), -. */
+    public static double kEccentricityValue(double c1Mm, double c2Mm) {
+        Bounds.positive("c1", c1Mm, "mm", C_TABLE_6_1);
+        Bounds.positive("c2", c2Mm, "mm", C_TABLE_6_1);
+        double ratio = c1Mm / c2Mm;
+        int i = upperRow(ratio);
+        if (i == 0 || i == RATIO.length) {
+            return K[Math.min(i, RATIO.length - 1)];
         }
+        return K[i - 1] + (K[i] - K[i - 1]) * (ratio - RATIO[i - 1]) / (RATIO[i] - RATIO[i - 1]);
+    }
+
+    /**
+     * The row of Table 6.1 above c1/c2 (k is interpolated from the row before it): 0 at or below the
+     * first row, the number of rows at or above the last.
+     */
+    private static int upperRow(double ratio) {
         int last = RATIO.length - 1;
+        if (ratio <= RATIO[0]) {
+            return 0;
+        }
         if (ratio >= RATIO[last]) {
-            return Step.withRemark("k", formula, substituted, K[last], "-", C_TABLE_6_1, "c1/c2 ≥ 3.0: k = 0.80");
+            return RATIO.length;
         }
         int i = 1;
         while (ratio > RATIO[i]) {
             i++;
         }
-        double k = K[i - 1] + (K[i] - K[i - 1]) * (ratio - RATIO[i - 1]) / (RATIO[i] - RATIO[i - 1]);
-        return Step.withRemark("k", formula, substituted, k, "-", C_TABLE_6_1,
-                "interpolated between c1/c2 = " + Num.f(RATIO[i - 1]) + " and " + Num.f(RATIO[i]));
+        return i;
     }
 
     /**
@@ -174,17 +202,21 @@ public final class Punching {
      * @return W, mm²
      */
     public static Step w1Rectangular(double c1Mm, double c2Mm, double aMm) {
-        String clause = "EN 1992-1-1 6.4.3(3), Exp. (6.41), at distance a (6.4.4(2))";
-        Bounds.positive("c1", c1Mm, "mm", clause);
-        Bounds.positive("c2", c2Mm, "mm", clause);
-        Bounds.positive("a", aMm, "mm", clause);
+        double w = w1RectangularValue(c1Mm, c2Mm, aMm);
         String c1 = Num.f(c1Mm);
         String c2 = Num.f(c2Mm);
         String a = Num.f(aMm);
         return Step.of("W", "c1²/2 + c1·c2 + 2·c2·a + 4·a² + π·a·c1",
                 c1 + "²/2 + " + c1 + "·" + c2 + " + 2·" + c2 + "·" + a + " + 4·" + a + "² + π·" + a + "·" + c1,
-                c1Mm * c1Mm / 2 + c1Mm * c2Mm + 2 * c2Mm * aMm + 4 * aMm * aMm + Math.PI * aMm * c1Mm, "mm2",
-                clause);
+                w, "mm2", C_W1);
+    }
+
+    /** The value of {@link #w1Rectangular} alone (no trace text: a search over many perimeters), mm². */
+    public static double w1RectangularValue(double c1Mm, double c2Mm, double aMm) {
+        Bounds.positive("c1", c1Mm, "mm", C_W1);
+        Bounds.positive("c2", c2Mm, "mm", C_W1);
+        Bounds.positive("a", aMm, "mm", C_W1);
+        return c1Mm * c1Mm / 2 + c1Mm * c2Mm + 2 * c2Mm * aMm + 4 * aMm * aMm + Math.PI * aMm * c1Mm;
     }
 
     /**
@@ -200,17 +232,21 @@ public final class Punching {
      * @return β, -, ≥ 1
      */
     public static Step betaEccentric(double k, double mEdKnm, double vEdKn, double uMm, double wMm2) {
-        String clause = "EN 1992-1-1 6.4.3(3), Exp. (6.39); 6.4.4(2), Exp. (6.51)";
-        Bounds.positiveAtMost("k", k, "-", 1.0, clause);
-        double moment = Math.abs(mEdKnm);
-        Bounds.nonNegative("|MEd|", moment, "kNm", clause);
-        Bounds.positive("VEd", vEdKn, "kN", clause);
-        Bounds.positive("u", uMm, "mm", clause);
-        Bounds.positive("W", wMm2, "mm2", clause);
+        double beta = betaEccentricValue(k, mEdKnm, vEdKn, uMm, wMm2);
         return Step.of("β", "1 + k·(MEd/VEd)·(u/W)",
-                "1 + " + Num.f(k) + "·(" + Num.f(moment) + "·1000/" + Num.f(vEdKn) + ")·(" + Num.f(uMm) + "/"
-                        + Num.f(wMm2) + ")",
-                1 + k * (moment * 1000 / vEdKn) * (uMm / wMm2), "-", clause);
+                "1 + " + Num.f(k) + "·(" + Num.f(Math.abs(mEdKnm)) + "·1000/" + Num.f(vEdKn) + ")·(" + Num.f(uMm) + "/"
+                        + Num.f(wMm2) + ")", beta, "-", C_BETA);
+    }
+
+    /** The value of {@link #betaEccentric} alone (no trace text: a search over many perimeters), -. */
+    public static double betaEccentricValue(double k, double mEdKnm, double vEdKn, double uMm, double wMm2) {
+        Bounds.positiveAtMost("k", k, "-", 1.0, C_BETA);
+        double moment = Math.abs(mEdKnm);
+        Bounds.nonNegative("|MEd|", moment, "kNm", C_BETA);
+        Bounds.positive("VEd", vEdKn, "kN", C_BETA);
+        Bounds.positive("u", uMm, "mm", C_BETA);
+        Bounds.positive("W", wMm2, "mm2", C_BETA);
+        return 1 + k * (moment * 1000 / vEdKn) * (uMm / wMm2);
     }
 
     /**
@@ -230,8 +266,13 @@ public final class Punching {
             return betaWhole;
         }
         return Step.withRemark("β", "1 + (β(u) − 1)·u'/u", "1 + (" + Num.f(betaWhole.value()) + " − 1)·"
-                        + Num.f(uPartMm) + "/" + Num.f(uWholeMm), 1 + (betaWhole.value() - 1) * uPartMm / uWholeMm,
+                        + Num.f(uPartMm) + "/" + Num.f(uWholeMm), betaOnPartValue(betaWhole.value(), uPartMm, uWholeMm),
                 "-", clause, "u' the part of the perimeter on the element; W of the whole perimeter");
+    }
+
+    /** The value of {@link #betaOnPart} without its trace, for searches over many perimeters. */
+    public static double betaOnPartValue(double betaWhole, double uPartMm, double uWholeMm) {
+        return uPartMm >= uWholeMm ? betaWhole : 1 + (betaWhole - 1) * uPartMm / uWholeMm;
     }
 
     /**
@@ -245,11 +286,16 @@ public final class Punching {
      * @return β, -, ≥ 1
      */
     public static Step betaCircular(double eMm, double diameterMm, double aMm) {
-        String clause = "EN 1992-1-1 6.4.3(3), Exp. (6.42), at distance a (6.4.4(2))";
-        Bounds.nonNegative("e", eMm, "mm", clause);
-        Bounds.positive("D", diameterMm, "mm", clause);
-        Bounds.positive("a", aMm, "mm", clause);
+        double beta = betaCircularValue(eMm, diameterMm, aMm);
         return Step.of("β", "1 + 0.6·π·e/(D + 2·a)", "1 + 0.6·π·" + Num.f(eMm) + "/(" + Num.f(diameterMm) + " + 2·"
-                + Num.f(aMm) + ")", 1 + 0.6 * Math.PI * eMm / (diameterMm + 2 * aMm), "-", clause);
+                + Num.f(aMm) + ")", beta, "-", C_BETA_CIRCULAR);
+    }
+
+    /** The value of {@link #betaCircular} alone (no trace text: a search over many perimeters), -. */
+    public static double betaCircularValue(double eMm, double diameterMm, double aMm) {
+        Bounds.nonNegative("e", eMm, "mm", C_BETA_CIRCULAR);
+        Bounds.positive("D", diameterMm, "mm", C_BETA_CIRCULAR);
+        Bounds.positive("a", aMm, "mm", C_BETA_CIRCULAR);
+        return 1 + 0.6 * Math.PI * eMm / (diameterMm + 2 * aMm);
     }
 }

@@ -3,6 +3,8 @@ package dev.countercheck.statics;
 import dev.countercheck.eurocode.Punching;
 import dev.countercheck.eurocode.Step;
 
+import java.util.List;
+
 /**
  * A control perimeter at distance a from the column face, with rounded corners (EN 1992-1-1
  * 6.4.2(1)): its length, the part of it that lies on a plan centred on the origin, the share of a pile
@@ -12,6 +14,21 @@ public final class ControlPerimeter {
 
     /** Chords per quarter arc of the enclosed region's outline (1°: the region's area is short by 0.005 %). */
     private static final int CHORDS_PER_QUARTER = 90;
+
+    /** cos φ and sin φ at the region's vertices, φ = (π/2)·(q + i/chords) on quarter q, i = 0 … chords. */
+    private static final double[] ARC_COS = new double[4 * (CHORDS_PER_QUARTER + 1)];
+    private static final double[] ARC_SIN = new double[4 * (CHORDS_PER_QUARTER + 1)];
+
+    static {
+        int n = CHORDS_PER_QUARTER + 1;
+        for (int q = 0; q < 4; q++) {
+            for (int i = 0; i < n; i++) {
+                double phi = Math.PI / 2 * (q + (double) i / CHORDS_PER_QUARTER);
+                ARC_COS[q * n + i] = Math.cos(phi);
+                ARC_SIN[q * n + i] = Math.sin(phi);
+            }
+        }
+    }
 
     private static final int STRIPS = 400;
     /** The margin, as a share of a + D, by which a head must clear the perimeter to skip the strips. */
@@ -62,6 +79,22 @@ public final class ControlPerimeter {
     }
 
     /**
+     * The value of {@link #beta} alone, without its trace text (the search over many perimeters and cases;
+     * the governing one is traced by {@link #beta}): the same arithmetic and the same range checks.
+     */
+    public static double betaValue(ColumnOutline c, double aMm, double vEdKn, double mxKnm, double myKnm) {
+        if (c.circular()) {
+            return Punching.betaCircularValue(Math.hypot(mxKnm, myKnm) * 1000 / vEdKn, c.cxMm(), aMm);
+        }
+        double u = Punching.u1RectangularValue(c.cxMm(), c.cyMm(), aMm);
+        double alongX = Punching.betaEccentricValue(Punching.kEccentricityValue(c.cxMm(), c.cyMm()), myKnm, vEdKn,
+                u, Punching.w1RectangularValue(c.cxMm(), c.cyMm(), aMm));
+        double alongY = Punching.betaEccentricValue(Punching.kEccentricityValue(c.cyMm(), c.cxMm()), mxKnm, vEdKn,
+                u, Punching.w1RectangularValue(c.cyMm(), c.cxMm(), aMm));
+        return alongX + alongY - 1;
+    }
+
+    /**
      * Length of the perimeter at distance a that lies within the plan |x| ≤ planX/2, |y| ≤ planY/2
      * (the cap, centred on the origin; a free edge cuts the perimeter off, EN 1992-1-1 6.4.2(4)), mm.
      * The perimeter is four straight sides and four quarter arcs of radius a about the column corners
@@ -105,57 +138,128 @@ public final class ControlPerimeter {
     /**
      * Share (0 to 1) of a circular pile head's area that lies inside the control perimeter at distance
      * a from the column face (EN 1992-1-1 6.4.4(2): the pile relieves the load by that share of its
-     * reaction): the mean of {@value #STRIPS} strips across x and as many across y, so that the share
-     * turns with the cap; the region inside the perimeter is convex, so each strip meets it once.
-     * A head clear of the perimeter (its centre farther than a + D/2 from the column) has none of its
-     * area inside, and a head clear within it (nearer than a − D/2) all of it: the strips are summed
-     * only for a head the perimeter crosses.
+     * reaction), as {@link Heads#shareInside} for a group of one head.
      *
      * @param centre     pile centre
      * @param diameterMm pile head diameter, mm
      */
     public static double headShareInside(ColumnOutline c, double aMm, PlanPoint centre, double diameterMm) {
-        double distance = distanceFromColumn(c, centre);
-        double clear = CLEARANCE * (aMm + diameterMm);
-        if (distance > aMm + diameterMm / 2 + clear) {
-            return 0;
-        }
-        if (distance < aMm - diameterMm / 2 - clear) {
-            return 1;
-        }
-        return (stripShare(c, aMm, centre, diameterMm)
-                + stripShare(c.turned(), aMm, new PlanPoint(centre.yMm(), centre.xMm()), diameterMm)) / 2;
+        return heads(c, List.of(centre), diameterMm).shareInside(0, aMm);
     }
 
-    /** The share of the head inside the perimeter by strips across x. */
-    private static double stripShare(ColumnOutline c, double aMm, PlanPoint centre, double diameterMm) {
-        double r = diameterMm / 2;
-        double width = diameterMm / STRIPS;
-        double whole = 0;
-        double inside = 0;
-        for (int i = 0; i < STRIPS; i++) {
-            double x = centre.xMm() - r + (i + 0.5) * width;
-            double chord = Math.sqrt(Math.max(0, r * r - sq(x - centre.xMm())));
-            whole += 2 * chord;
-            double half = halfHeightInside(c, aMm, x);
-            if (half >= 0) {
-                double lo = Math.max(centre.yMm() - chord, c.centre().yMm() - half);
-                double hi = Math.min(centre.yMm() + chord, c.centre().yMm() + half);
-                inside += Math.max(0, hi - lo);
+    /** The pile heads of a group about the column, prepared once for the perimeters at every distance a. */
+    public static Heads heads(ColumnOutline c, List<PlanPoint> centres, double diameterMm) {
+        return new Heads(c, centres, diameterMm);
+    }
+
+    /**
+     * Circular pile heads of one diameter about a column. The share of a head inside the perimeter at
+     * distance a is the mean of {@value #STRIPS} strips across x and as many across y, so that the share
+     * turns with the cap; the region inside the perimeter is convex, so each strip meets it once. A head
+     * clear of the perimeter (its centre farther than a + D/2 from the column) has none of its area
+     * inside, and a head clear within it (nearer than a − D/2) all of it: the strips are summed only for a
+     * head the perimeter crosses. What does not depend on a (the strips' chords, their distances from the
+     * column, the head's area by strips) is computed once per head.
+     */
+    public static final class Heads {
+
+        private final ColumnOutline column;
+        private final List<PlanPoint> centres;
+        private final double diameterMm;
+        private final double[] distances;
+        /** Each head's strips across x and across y, made when a perimeter first crosses the head. */
+        private final Strips[][] strips;
+
+        private Heads(ColumnOutline c, List<PlanPoint> centres, double diameterMm) {
+            this.column = c;
+            this.centres = List.copyOf(centres);
+            this.diameterMm = diameterMm;
+            distances = new double[centres.size()];
+            strips = new Strips[centres.size()][];
+            for (int i = 0; i < distances.length; i++) {
+                distances[i] = distanceFromColumn(c, centres.get(i));
             }
         }
-        return whole == 0 ? 0 : inside / whole;
+
+        /** Share (0 to 1) of head {@code i}'s area inside the control perimeter at distance a, mm. */
+        public double shareInside(int i, double aMm) {
+            double clear = CLEARANCE * (aMm + diameterMm);
+            if (distances[i] > aMm + diameterMm / 2 + clear) {
+                return 0;
+            }
+            if (distances[i] < aMm - diameterMm / 2 - clear) {
+                return 1;
+            }
+            if (strips[i] == null) {
+                PlanPoint p = centres.get(i);
+                strips[i] = new Strips[] {new Strips(column, p, diameterMm),
+                    new Strips(column.turned(), new PlanPoint(p.yMm(), p.xMm()), diameterMm)};
+            }
+            return (strips[i][0].shareInside(aMm) + strips[i][1].shareInside(aMm)) / 2;
+        }
     }
 
-    /** Half the height of the region within distance a of the column at abscissa x, mm; −1 outside it. */
-    private static double halfHeightInside(ColumnOutline c, double aMm, double x) {
-        double dx = Math.abs(x - c.centre().xMm());
-        if (c.circular()) {
-            double radius = c.cxMm() / 2 + aMm;
-            return dx > radius ? -1 : Math.sqrt(radius * radius - dx * dx);
+    /**
+     * The strips of one head across x (a head across y is the same with x and y swapped, the column
+     * turned): each strip's lower and upper edge on the head, its distance from the column along x
+     * (beyond the column's side, or from a circular column's centre), and the head's area by strips.
+     */
+    private static final class Strips {
+
+        private final boolean circular;
+        private final double columnY;
+        private final double columnHalfY;
+        private final double columnRadius;
+        private final double[] bottoms = new double[STRIPS];
+        private final double[] tops = new double[STRIPS];
+        private final double[] beyond = new double[STRIPS];
+        private final double whole;
+
+        Strips(ColumnOutline c, PlanPoint centre, double diameterMm) {
+            circular = c.circular();
+            columnY = c.centre().yMm();
+            columnHalfY = c.cyMm() / 2;
+            columnRadius = c.cxMm() / 2;
+            double r = diameterMm / 2;
+            double width = diameterMm / STRIPS;
+            double sum = 0;
+            for (int i = 0; i < STRIPS; i++) {
+                double x = centre.xMm() - r + (i + 0.5) * width;
+                double chord = Math.sqrt(Math.max(0, r * r - sq(x - centre.xMm())));
+                sum += 2 * chord;
+                bottoms[i] = centre.yMm() - chord;
+                tops[i] = centre.yMm() + chord;
+                double dx = Math.abs(x - c.centre().xMm());
+                beyond[i] = circular ? dx : Math.max(0, dx - c.cxMm() / 2);
+            }
+            whole = sum;
         }
-        double beyond = Math.max(0, dx - c.cxMm() / 2);
-        return beyond > aMm ? -1 : c.cyMm() / 2 + Math.sqrt(aMm * aMm - beyond * beyond);
+
+        /** The share of the head inside the perimeter at distance a by these strips. */
+        double shareInside(double aMm) {
+            double inside = 0;
+            double radius = columnRadius + aMm;
+            for (int i = 0; i < STRIPS; i++) {
+                double half = halfHeightInside(aMm, radius, beyond[i]);
+                if (half >= 0) {
+                    double lo = Math.max(bottoms[i], columnY - half);
+                    double hi = Math.min(tops[i], columnY + half);
+                    inside += Math.max(0, hi - lo);
+                }
+            }
+            return whole == 0 ? 0 : inside / whole;
+        }
+
+        /**
+         * Half the height of the region within distance a of the column at a strip {@code beyond} from it
+         * (a circular column: from its centre, within {@code radius} = D/2 + a), mm; −1 outside it.
+         */
+        private double halfHeightInside(double aMm, double radius, double beyond) {
+            if (circular) {
+                return beyond > radius ? -1 : Math.sqrt(radius * radius - beyond * beyond);
+            }
+            return beyond > aMm ? -1 : columnHalfY + Math.sqrt(aMm * aMm - beyond * beyond);
+        }
     }
 
     /**
@@ -176,12 +280,14 @@ public final class ControlPerimeter {
         double[][] corners = {{hx, hy}, {-hx, hy}, {-hx, -hy}, {hx, -hy}};
         for (int q = 0; q < 4; q++) {
             for (int i = 0; i < n; i++) {
-                double phi = Math.PI / 2 * (q + (double) i / CHORDS_PER_QUARTER);
-                xs[q * n + i] = x0 + corners[q][0] + aMm * Math.cos(phi);
-                ys[q * n + i] = y0 + corners[q][1] + aMm * Math.sin(phi);
+                xs[q * n + i] = x0 + corners[q][0] + aMm * ARC_COS[q * n + i];
+                ys[q * n + i] = y0 + corners[q][1] + aMm * ARC_SIN[q * n + i];
             }
         }
-        return ConvexPolygon.of(xs, ys);
+        // The vertices lie within hx + a and hy + a of the centre; the box is widened far beyond rounding.
+        double slack = 1e-9 * (Math.abs(x0) + Math.abs(y0) + hx + hy + aMm);
+        return ConvexPolygon.of(xs, ys).enclosedBy(x0 - hx - aMm - slack, y0 - hy - aMm - slack,
+                x0 + hx + aMm + slack, y0 + hy + aMm + slack);
     }
 
     private static double sq(double v) {

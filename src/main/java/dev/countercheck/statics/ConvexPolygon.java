@@ -9,8 +9,13 @@ import java.util.function.DoubleBinaryOperator;
  */
 final class ConvexPolygon {
 
+    /** The margin, relative to the terms of a + b·x + c·y, by which a bounding box clears a half-plane. */
+    private static final double CLEAR = 1e-12;
+
     private final double[] xs;
     private final double[] ys;
+    /** The bounding box (min x, min y, max x, max y), made when first asked for. */
+    private double[] box;
 
     private ConvexPolygon(double[] xs, double[] ys) {
         this.xs = xs;
@@ -37,6 +42,15 @@ final class ConvexPolygon {
             y[i] = cy + r * Math.sin(phi);
         }
         return new ConvexPolygon(x, y);
+    }
+
+    /**
+     * The same polygon, told a box that encloses it (known from how it was drawn, so that {@link #intersect}
+     * need not look through its vertices for one); a box larger than the polygon only skips fewer edges.
+     */
+    ConvexPolygon enclosedBy(double minX, double minY, double maxX, double maxY) {
+        box = new double[] {minX, minY, maxX, maxY};
+        return this;
     }
 
     /** Whether {@code other} has the same vertices in the same order (exactly). */
@@ -79,7 +93,11 @@ final class ConvexPolygon {
         return new ConvexPolygon(java.util.Arrays.copyOf(nx, m), java.util.Arrays.copyOf(ny, m));
     }
 
-    /** The intersection with another convex polygon (clipped by each of its edges). */
+    /**
+     * The intersection with another convex polygon (clipped by each of its edges). An edge whose half-plane
+     * holds this polygon's bounding box with a margin far above rounding is skipped: clipping by it would
+     * return every vertex unchanged, in the same order.
+     */
     ConvexPolygon intersect(ConvexPolygon other) {
         ConvexPolygon result = this;
         int n = other.xs.length;
@@ -88,9 +106,31 @@ final class ConvexPolygon {
             double ex = other.xs[j] - other.xs[i];
             double ey = other.ys[j] - other.ys[i];
             // Left of the edge i → j (inside for a counter-clockwise polygon): ex·(y − yi) − ey·(x − xi) ≥ 0.
-            result = result.clip(ey * other.xs[i] - ex * other.ys[i], -ey, ex);
+            double a = ey * other.xs[i] - ex * other.ys[i];
+            if (!result.clearlyWithin(a, -ey, ex)) {
+                result = result.clip(a, -ey, ex);
+            }
         }
         return result;
+    }
+
+    /** Whether a + b·x + c·y is positive at every vertex by more than its rounding error (by the bounding box). */
+    private boolean clearlyWithin(double a, double b, double c) {
+        if (box == null) {
+            double[] bb = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY,
+                Double.NEGATIVE_INFINITY};
+            for (int i = 0; i < xs.length; i++) {
+                bb[0] = Math.min(bb[0], xs[i]);
+                bb[1] = Math.min(bb[1], ys[i]);
+                bb[2] = Math.max(bb[2], xs[i]);
+                bb[3] = Math.max(bb[3], ys[i]);
+            }
+            box = bb;
+        }
+        double least = a + b * (b >= 0 ? box[0] : box[2]) + c * (c >= 0 ? box[1] : box[3]);
+        double scale = Math.abs(a) + Math.abs(b) * Math.max(Math.abs(box[0]), Math.abs(box[2]))
+                + Math.abs(c) * Math.max(Math.abs(box[1]), Math.abs(box[3]));
+        return least > CLEAR * scale;
     }
 
     /** ∫ g dA for g of degree ≤ 2 (exact), 0 for a polygon of fewer than three vertices. */

@@ -112,9 +112,13 @@ public final class PressureField {
 
     /** As {@link #insidePerimeter(ColumnOutline, double)}, with the region formed once for several fields. */
     public Step insidePerimeter(ControlRegion region) {
-        ConvexPolygon inside = region.on(contact);
         return Step.of("ΔVEd", "∫ q dA inside the control perimeter at a, on the plan",
-                "a = " + Num.f(region.aMm()) + " mm", forceOver(inside), "kN", BASIS + "; EN 1992-1-1 6.4.4(2)");
+                "a = " + Num.f(region.aMm()) + " mm", forceInsidePerimeter(region), "kN", BASIS + "; EN 1992-1-1 6.4.4(2)");
+    }
+
+    /** The value of {@link #insidePerimeter(ControlRegion)} alone (no trace text: a search over many perimeters), kN. */
+    public double forceInsidePerimeter(ControlRegion region) {
+        return forceOver(region.on(contact));
     }
 
     private double forceOver(ConvexPolygon part) {

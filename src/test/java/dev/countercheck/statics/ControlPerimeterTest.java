@@ -2,6 +2,8 @@ package dev.countercheck.statics;
 
 import org.junit.jupiter.api.Test;
 
+import java.util.List;
+
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 import static org.assertj.core.api.Assertions.withinPercentage;
@@ -41,5 +43,21 @@ class ControlPerimeterTest {
         // Circular column, a = 100: the disc of radius 300, π·300²/(π·2000²) = 0.0225 (hand calculation).
         assertThat(ControlPerimeter.headShareInside(ROUND, 100, new PlanPoint(0, 0), 4000))
                 .isCloseTo(0.0225, withinPercentage(0.5));
+    }
+
+    @Test
+    void aGroupOfHeadsGivesEachHeadItsOwnShare() {
+        // The heads of a group, prepared once for every a, give each head the share it has alone.
+        List<PlanPoint> heads = List.of(new PlanPoint(500, 0), new PlanPoint(-430, 380), new PlanPoint(900, 0),
+                new PlanPoint(250, 0));
+        ControlPerimeter.Heads group = ControlPerimeter.heads(SQUARE, heads, 200);
+        for (double a : new double[] {120, 300, 455.5, 700}) {
+            for (int i = 0; i < heads.size(); i++) {
+                assertThat(group.shareInside(i, a))
+                        .isEqualTo(ControlPerimeter.headShareInside(SQUARE, a, heads.get(i), 200));
+            }
+        }
+        // Centred on a straight side at a = 300, half inside by symmetry (as above).
+        assertThat(group.shareInside(0, 300)).isCloseTo(0.5, within(0.002));
     }
 }

@@ -30,4 +30,21 @@ class PunchingBetaTest {
         // β = 1 + 0.6·π·200/(500 + 2·1200) = 1.129997 (EN 1992-1-1 Exp. 6.42, D + 4d = D + 2a; hand calculation).
         assertThat(ControlPerimeter.beta(c, 1200, 2500, 300, 400).value()).isCloseTo(1.129997, within(1e-5));
     }
+
+    @Test
+    void theSearchValueIsTheTracedValueToTheLastBit() {
+        // The perimeter search compares β by value and traces only the governing perimeter: both must be
+        // the same double, or the trace would show a β the search did not use. Invented sizes and loads.
+        ColumnOutline[] columns = {ColumnOutline.rectangular(600, 300, new PlanPoint(0, 0)),
+            ColumnOutline.rectangular(350, 900, new PlanPoint(120, -80)), ColumnOutline.rectangular(400, 400,
+                new PlanPoint(0, 0)), ColumnOutline.circular(550, new PlanPoint(0, 0))};
+        for (ColumnOutline c : columns) {
+            for (double a : new double[] {17.3, 480, 1600}) {
+                for (double[] m : new double[][] {{0, 0}, {150, -300}, {-75.5, 910}}) {
+                    assertThat(ControlPerimeter.betaValue(c, a, 2317.5, m[0], m[1]))
+                            .isEqualTo(ControlPerimeter.beta(c, a, 2317.5, m[0], m[1]).value());
+                }
+            }
+        }
+    }
 }

@@ -14,6 +14,7 @@ import dev.countercheck.review.FindingKind;
 import dev.countercheck.statics.ColumnOutline;
 import dev.countercheck.statics.ControlPerimeter;
 import dev.countercheck.statics.ControlRegion;
+import dev.countercheck.statics.PressureField;
 import dev.countercheck.submission.ActionCase;
 
 import java.util.List;
@@ -36,11 +37,14 @@ final class PunchingChecks {
                 PadFootingReviewer.NOUN);
     }
 
-    /** One control perimeter of one case: a, u on the plan, the deduction, VEd,red, β, and VRd. */
-    private record Perimeter(double aMm, double uMm, Step deduction, double vEdRedKn, Step betaWhole, Step beta,
-                             String caseName, double vRdKn) {
+    /**
+     * One control perimeter of one case: a, u on the plan, the case's ground pressure, VEd,red, β (by value:
+     * the governing perimeter's trace is written once the search is over), and VRd.
+     */
+    private record Perimeter(double aMm, double uMm, PressureField field, double vEdRedKn, double beta, ActionCase c,
+                             double vRdKn) {
         double utilisation() {
-            return beta.value() * vEdRedKn / vRdKn;
+            return beta * vEdRedKn / vRdKn;
         }
     }
 
@@ -75,14 +79,13 @@ final class PunchingChecks {
             ControlRegion region = ControlRegion.of(outline, a);
             for (int i = 0; i < cases.size(); i++) {
                 ActionCase c = cases.get(i);
-                Step deduction = contacts.get(i).field().insidePerimeter(region);
-                double reduced = c.nKn() - deduction.value();
+                double reduced = c.nKn() - contacts.get(i).field().forceInsidePerimeter(region);
                 if (reduced <= 1e-9 * Math.abs(c.nKn()) || u <= 0) {
                     continue;
                 }
-                Step betaWhole = ControlPerimeter.beta(outline, a, reduced, c.mxKnm(), c.myKnm());
-                Perimeter p = new Perimeter(a, u, deduction, reduced, betaWhole,
-                        Punching.betaOnPart(betaWhole, u, whole), c.name(), vRd);
+                double betaWhole = ControlPerimeter.betaValue(outline, a, reduced, c.mxKnm(), c.myKnm());
+                Perimeter p = new Perimeter(a, u, contacts.get(i).field(), reduced,
+                        Punching.betaOnPartValue(betaWhole, u, whole), c, vRd);
                 if (governing == null || p.utilisation() > governing.utilisation()) {
                     governing = p;
                 }
@@ -93,7 +96,7 @@ final class PunchingChecks {
                     + " face carries the whole column load in every ULS case").build();
         }
         Perimeter g = governing;
-        b.governing(g.caseName);
+        b.governing(g.c.name());
         b.value("a", Step.of("a", "the distance of greatest β·VEd,red/VRd, searched in steps of (Δa/d)·d up to 2d",
                 count + " perimeters", g.aMm, "mm", "EN 1992-1-1 6.4.4(2)"));
         Step full = ControlPerimeter.full(outline, g.aMm);
@@ -103,13 +106,15 @@ final class PunchingChecks {
                     + " mm perimeter on the footing counts (EN 1992-1-1 6.4.2(4))");
         }
         b.value("u", u);
-        b.trace(g.deduction);
-        Step reduced = b.trace(Step.of("VEd,red", "N − ΔVEd", g.caseName + ": " + Num.f(g.vEdRedKn + g.deduction.value())
-                + " − " + Num.f(g.deduction.value()), g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.48)"));
-        if (g.beta != g.betaWhole) {
-            b.trace(g.betaWhole);
+        Step deduction = b.trace(g.field.insidePerimeter(outline, g.aMm));
+        Step reduced = b.trace(Step.of("VEd,red", "N − ΔVEd", g.c.name() + ": " + Num.f(g.vEdRedKn + deduction.value())
+                + " − " + Num.f(deduction.value()), g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.48)"));
+        Step betaWhole = ControlPerimeter.beta(outline, g.aMm, g.vEdRedKn, g.c.mxKnm(), g.c.myKnm());
+        Step betaPart = Punching.betaOnPart(betaWhole, g.uMm, full.value());
+        if (betaPart != betaWhole) {
+            b.trace(betaWhole);
         }
-        Step beta = b.value("beta", g.beta);
+        Step beta = b.value("beta", betaPart);
         Step ved = b.value("ved", Step.of("β·VEd,red", "β·VEd,red", Num.f(beta.value()) + "·"
                 + Num.f(reduced.value()), beta.value() * reduced.value(), "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.51)"));
         Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), g.aMm));
@@ -117,7 +122,7 @@ final class PunchingChecks {
                 + Num.f(d.value()) + "/1000", g.vRdKn, "kN", "EN 1992-1-1 6.4.4(2)"));
         return b.require(ved.value(), vrd.value(), FindingKind.CAPACITY, "capacity", "β·VEd,red = "
                 + Num.f(ved.value()) + " kN at the control perimeter a = " + Num.f(g.aMm) + " mm from the column"
-                + " face exceeds VRd = " + Num.f(vrd.value()) + " kN (" + g.caseName + ").").build();
+                + " face exceeds VRd = " + Num.f(vrd.value()) + " kN (" + g.c.name() + ").").build();
     }
 
     /**

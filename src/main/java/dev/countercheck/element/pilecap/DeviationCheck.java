@@ -55,16 +55,14 @@ final class DeviationCheck {
                     double[] r = ctx.reactions(shifted, u.action(), ctx.gammaSup(u.action())).reactionsKn();
                     double[] rInf = ctx.reactions(shifted, u.action(), ctx.gammaInf(u.action())).reactionsKn();
                     for (int i = 0; i < r.length; i++) {
-                        String at = "pile " + (i + 1) + " in " + u.action().name() + " when pile " + (moved + 1)
-                                + " is " + Num.f(delta.value()) + " mm off position at " + (45 * dir) + "° from +x";
                         if (r[i] > worst) {
                             worst = r[i];
-                            where = at;
+                            where = at(i, u, moved, delta, dir);
                             worstCase = u.action().name();
                         }
                         if (rInf[i] < least) {
                             least = rInf[i];
-                            whereLeast = at;
+                            whereLeast = at(i, u, moved, delta, dir);
                             leastCase = u.action().name();
                         }
                     }
@@ -94,5 +92,11 @@ final class DeviationCheck {
 
     private static String capitalised(String text) {
         return Character.toUpperCase(text.charAt(0)) + text.substring(1);
+    }
+
+    /** Where a reaction was found: pile i in case u when pile {@code moved} is δ off position in direction {@code dir}. */
+    private static String at(int i, UlsCase u, int moved, Step delta, int dir) {
+        return "pile " + (i + 1) + " in " + u.action().name() + " when pile " + (moved + 1) + " is "
+                + Num.f(delta.value()) + " mm off position at " + (45 * dir) + "° from +x";
     }
 }

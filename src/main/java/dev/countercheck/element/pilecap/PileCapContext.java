@@ -49,10 +49,13 @@ final class PileCapContext {
     final Step fckShear;
     final Step fctd;
     final Step fyd;
+    /** The line the group lies on as designed (empty for a group in plan), found once for every solve. */
+    private final Optional<double[]> designLine;
 
     PileCapContext(PileCap cap, Ruleset rules) {
         this.cap = cap;
         this.rules = rules;
+        this.designLine = PileGroupReactions.lineOf(PlanGeometry.points(cap.piles().positions()));
         this.section = Section.of(cap.reinforcement(), cap.depthMm());
         double fckMpa = cap.materials().fckMpa();
         this.fck = Step.of("fck", "characteristic cylinder strength",
@@ -137,7 +140,7 @@ final class PileCapContext {
         }
         double h = cap.depthMm() / 1000.0;
         return PileGroupReactions.solve(PlanGeometry.points(piles), loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h,
-                PileGroupReactions.lineOf(PlanGeometry.points(cap.piles().positions())));
+                designLine);
     }
 
     /**

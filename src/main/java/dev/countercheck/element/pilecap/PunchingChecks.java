@@ -13,7 +13,6 @@ import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.FindingKind;
 import dev.countercheck.statics.ColumnOutline;
 import dev.countercheck.statics.ControlPerimeter;
-import dev.countercheck.statics.PlanPoint;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -33,11 +32,14 @@ final class PunchingChecks {
                 ctx.rules), PileCapReviewer.NOUN);
     }
 
-    /** One control perimeter at distance a: its length on the cap, the reduced load and the resistance. */
-    private record Perimeter(double aMm, double uMm, double[] shares, double vEdRedKn, Step beta, String caseName,
+    /**
+     * One control perimeter at distance a: its length on the cap, the reduced load of its worst case, β by
+     * value (the governing perimeter's trace is written once the search is over) and the resistance.
+     */
+    private record Perimeter(double aMm, double uMm, double[] shares, double vEdRedKn, double beta, UlsCase c,
                              double vRdMpa, double vRdKn) {
         double utilisation() {
-            return beta.value() * vEdRedKn / vRdKn;
+            return beta * vEdRedKn / vRdKn;
         }
     }
 
@@ -62,10 +64,14 @@ final class PunchingChecks {
         Step stress = b.trace(Shear.vRdcStress(cRdc, k.value(), rho.value(), fckV));
         Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), fckV));
         int count = (int) Math.ceil(2 / step.value() - 1e-9);
+        ColumnOutline column = PlanGeometry.outline(ctx.cap.column());
+        ControlPerimeter.Heads heads = ControlPerimeter.heads(column, PlanGeometry.points(ctx.cap.piles().positions()),
+                ctx.cap.piles().diameterMm());
         Perimeter governing = null;
         for (int j = 1; j <= count; j++) {
             double a = 2 * d.value() * j / count;
-            Perimeter p = at(ctx, a, d.value(), Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a));
+            Perimeter p = at(ctx, column, heads, a, d.value(),
+                    Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a));
             if (p.vEdRedKn > 0 && p.uMm > 0 && (governing == null || p.utilisation() > governing.utilisation())) {
                 governing = p;
             }
@@ -90,11 +96,13 @@ final class PunchingChecks {
                 relief.add("P" + (i + 1) + "·" + Num.f(g.shares[i]));
             }
         }
+        String caseName = g.c.action().name();
         Step reduced = b.trace(Step.of("VEd,red", "N − Σ P_i·(share of the pile head inside u)",
-                g.caseName + (relief.isEmpty() ? ", no pile inside" : ", inside: " + String.join(" + ", relief)),
+                caseName + (relief.isEmpty() ? ", no pile inside" : ", inside: " + String.join(" + ", relief)),
                 g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2)"));
-        Step beta = b.trace(g.beta);
-        b.governing(g.caseName);
+        Step beta = b.trace(ControlPerimeter.beta(column, g.aMm, g.vEdRedKn, g.c.action().mxKnm(),
+                g.c.action().myKnm()));
+        b.governing(caseName);
         Step ved = b.value("ved", Step.of("β·VEd,red", "β·VEd,red", Num.f(beta.value()) + "·"
                 + Num.f(reduced.value()), beta.value() * reduced.value(), "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.51)"));
         Step vRd = b.trace(Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), g.aMm));
@@ -107,16 +115,14 @@ final class PunchingChecks {
     }
 
     /** The perimeter at distance a, the worst ULS case (column actions alone) and its resistance. */
-    private static Perimeter at(PileCapContext ctx, double a, double d, Step vRd) {
-        ColumnOutline column = PlanGeometry.outline(ctx.cap.column());
-        List<PlanPoint> piles = PlanGeometry.points(ctx.cap.piles().positions());
+    private static Perimeter at(PileCapContext ctx, ColumnOutline column, ControlPerimeter.Heads heads, double a,
+                                double d, Step vRd) {
         double u = ControlPerimeter.lengthInPlan(column, a, ctx.cap.planXMm(), ctx.cap.planYMm());
-        double[] shares = new double[piles.size()];
-        for (int i = 0; i < piles.size(); i++) {
-            shares[i] = ControlPerimeter.headShareInside(column, a, piles.get(i), ctx.cap.piles().diameterMm());
+        double[] shares = new double[ctx.cap.piles().positions().size()];
+        for (int i = 0; i < shares.length; i++) {
+            shares[i] = heads.shareInside(i, a);
         }
-        Perimeter worst = new Perimeter(a, u, shares, 0, Step.of("β", "no load", "1", 1, "-", ""), "", vRd.value(),
-                vRd.value() * u * d / 1000);
+        Perimeter worst = new Perimeter(a, u, shares, 0, 1, null, vRd.value(), vRd.value() * u * d / 1000);
         for (UlsCase c : ctx.uls) {
             double[] p = c.columnOnly().reactionsKn();
             double v = c.action().nKn();
@@ -124,8 +130,8 @@ final class PunchingChecks {
                 v -= p[i] * shares[i];
             }
             if (v > LOAD_RESIDUE * c.action().nKn()) {
-                Perimeter here = new Perimeter(a, u, shares, v, ControlPerimeter.beta(column, a, v, c.action().mxKnm(),
-                        c.action().myKnm()), c.action().name(), vRd.value(), vRd.value() * u * d / 1000);
+                Perimeter here = new Perimeter(a, u, shares, v, ControlPerimeter.betaValue(column, a, v,
+                        c.action().mxKnm(), c.action().myKnm()), c, vRd.value(), vRd.value() * u * d / 1000);
                 if (here.utilisation() > worst.utilisation()) {
                     worst = here;
                 }

@@ -1,0 +1,45 @@
+package dev.countercheck.statics;
+
+import org.junit.jupiter.api.Test;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/**
+ * Intersection of convex polygons: skipping the edges whose half-plane clears the clipped polygon must give
+ * the same vertices, to the bit, as clipping by every edge. Invented shapes.
+ */
+class ConvexPolygonTest {
+
+    @Test
+    void skippingTheEdgesThatClearTheRegionChangesNoVertex() {
+        ConvexPolygon region = ControlPerimeter.region(ColumnOutline.rectangular(450, 300, new PlanPoint(40, -25)), 610);
+        ConvexPolygon[] others = {
+            ConvexPolygon.rectangle(-2000, -2000, 2000, 2000),   // holds the region: every edge skipped
+            ConvexPolygon.rectangle(-700, -2000, 2000, 2000),    // cuts it on one side
+            ConvexPolygon.rectangle(-615.2, -631, 655.2, 585.0), // grazes it within a fraction of a millimetre
+            ConvexPolygon.of(new double[] {-1500, 900, 1400, -1200}, new double[] {-1300, -700, 1500, 900}),
+            ConvexPolygon.regular(300, 100, 800, 7),
+        };
+        for (ConvexPolygon other : others) {
+            ConvexPolygon fast = region.intersect(other);
+            ConvexPolygon every = clipByEveryEdge(region, other);
+            assertThat(fast.size()).isEqualTo(every.size());
+            for (int i = 0; i < fast.size(); i++) {
+                assertThat(fast.x(i)).isEqualTo(every.x(i));
+                assertThat(fast.y(i)).isEqualTo(every.y(i));
+            }
+        }
+    }
+
+    private static ConvexPolygon clipByEveryEdge(ConvexPolygon p, ConvexPolygon other) {
+        ConvexPolygon result = p;
+        int n = other.size();
+        for (int i = 0; i < n && result.size() >= 3; i++) {
+            int j = (i + 1) % n;
+            double ex = other.x(j) - other.x(i);
+            double ey = other.y(j) - other.y(i);
+            result = result.clip(ey * other.x(i) - ex * other.y(i), -ey, ex);
+        }
+        return result;
+    }
+}
