@@ -186,7 +186,7 @@ final class GeotechnicalChecks {
         if (cases.isEmpty()) {
             return b.notChecked("not given: an action case of kind equ").build();
         }
-        Step gammaInf = b.trace(ctx.rules.parameter("equ_gamma_g_inf").asStep());
+        Step gammaInf = b.trace(ctx.rules.parameter("equ_g_inf_factor").asStep());
         double weights = gammaInf.value() * (ctx.footingWeight.value() + ctx.overburdenWeight.value());
         double h = ctx.pad.depthMm() / 1000;
         Overturning.Edge worst = null;

@@ -49,8 +49,8 @@ final class PadFootingReviewer {
                     + " of the footing beyond the column face (bending), d beyond it (shear) or h/2 from the edge"
                     + " (anchorage, EN 1992-1-1 9.8.2.2(5)).",
             "Punching: control perimeters from d/50 to 2d from the column face, clipped to the plan; the ground"
-                    + " pressure inside each is deducted; β from the column's own moments with u and W of the whole"
-                    + " perimeter; ρ from the bars within the column width + 3d on each side.",
+                    + " pressure inside each is deducted; β from the column's own moments with W of the whole"
+                    + " perimeter, its moment part taken on the share of the perimeter on the plan; ρ from the bars within the column width + 3d on each side.",
             "Concrete properties come from the expressions of EN 1992-1-1 Table 3.1, unrounded.");
 
     /** The ruleset parameters the pad-footing checks read. */
@@ -59,7 +59,7 @@ final class PadFootingReviewer {
             "punching_search_step", "circular_column_square", "stress_block_lambda", "xi_limit",
             "concrete_unit_weight", "anchorage_alpha5", "footing_anchorage_x", "footing_column_inset",
             "footing_zi_factor", "footing_rigidity_ratio", "geo_gamma_phi", "geo_gamma_c", "geo_gamma_cu",
-            "geo_gamma_rv", "geo_gamma_rh", "equ_gamma_g_inf", "water_unit_weight");
+            "geo_gamma_rv", "geo_gamma_rh", "equ_g_inf_factor", "water_unit_weight");
 
     /** What the detailing rules of a ruleset may use and define for pad footings: the checks not computed in Java. */
     static final ElementRules RULE_VOCABULARY = new ElementRules(PadScopes.SCOPES, DetailingVariables.subjects(),

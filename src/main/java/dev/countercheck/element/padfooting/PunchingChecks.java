@@ -24,7 +24,8 @@ import java.util.Optional;
  * {@code punching-face} (6.4.5(3)) and {@code punching-perimeter} (6.4.4(2)) of a pad: the column load
  * less the ground pressure inside control perimeters at a from the column face, 0 &lt; a ≤ 2d, each
  * clipped to the plan (the part off the footing does not count), β from the column's own moments with
- * u and W of the whole perimeter.
+ * W of the whole perimeter and its moment part taken on the share u'/u of the perimeter on the plan
+ * ({@link dev.countercheck.eurocode.Punching#betaOnPart}).
  */
 final class PunchingChecks {
 
