@@ -41,7 +41,15 @@ final class ShearCheck {
         Section section = ctx.section.get();
         Step d = b.trace(section.d(axis.bars()));
         ctx.equivalentSquare().ifPresent(b::trace);
+        double gammaC = ctx.rules.number("gamma_c");
+        double cRdcFactor = ctx.rules.number("c_rdc_factor");
+        Step cRdc = Step.of("CRd,c", "0.18/γc", Num.f(cRdcFactor) + "/" + Num.f(gammaC), cRdcFactor / gammaC,
+                "-", ctx.clauseOf("c_rdc_factor"));
+        Step k = Shear.kSize(d.value());
+        double fckV = ctx.fckShear.value();
+        Step vMin = Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), fckV);
         Side worst = null;
+        Resistance worstResistance = null;
         Side worstUnreduced = null;
         for (UlsCase u : ctx.uls) {
             for (int sign : new int[] {1, -1}) {
@@ -49,8 +57,11 @@ final class ShearCheck {
                 if (side == null) {
                     continue;
                 }
-                if (worst == null || side.ved > worst.ved) {
+                Resistance r = Resistance.of(ShearWidth.of(ctx, axis, side.piles, section), d.value(), cRdc, k, vMin,
+                        fckV);
+                if (worst == null || governs(side, r, worst, worstResistance)) {
                     worst = side;
+                    worstResistance = r;
                 }
                 if (worstUnreduced == null || side.unreduced > worstUnreduced.unreduced) {
                     worstUnreduced = side;
@@ -68,21 +79,19 @@ final class ShearCheck {
                 worst.ved, "kN", "EN 1992-1-1 6.2.2(6)"));
         Step unreduced = b.value("ved_unreduced", Step.of("VEd,0", "Σ P_i (piles beyond the face)",
                 worstUnreduced.caseName, worstUnreduced.unreduced, "kN", "EN 1992-1-1 6.2.2(6)"));
-        ShearWidth effective = ShearWidth.of(ctx, axis, worst.piles, section);
+        ShearWidth effective = worstResistance.effective;
         double width = b.value("b", effective.width()).value();
         Step nu = b.trace(Shear.nu(ctx.fck.value()));
         b.trace(ctx.fcdShear);
         Step vMax = b.value("vrd_max", Shear.vEdMax(nu.value(), ctx.fcdShear.value(), width, d.value()));
-        Step rho = b.trace(Shear.rhoL(b.trace(effective.as()).value(), width, d.value()));
-        Step k = b.trace(Shear.kSize(d.value()));
-        double gammaC = ctx.rules.number("gamma_c");
-        double cRdcFactor = ctx.rules.number("c_rdc_factor");
-        Step cRdc = b.trace(Step.of("CRd,c", "0.18/γc", Num.f(cRdcFactor) + "/" + Num.f(gammaC), cRdcFactor / gammaC,
-                "-", ctx.clauseOf("c_rdc_factor")));
-        double fckV = b.trace(ctx.fckShear).value();
-        Step stress = b.trace(Shear.vRdcStress(cRdc.value(), k.value(), rho.value(), fckV));
-        Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), fckV));
-        Step vrdc = b.value("vrdc", Shear.vRdc(stress, vMin, width, d.value()));
+        b.trace(effective.as());
+        b.trace(worstResistance.rho);
+        b.trace(k);
+        b.trace(cRdc);
+        b.trace(ctx.fckShear);
+        b.trace(worstResistance.stress);
+        b.trace(vMin);
+        Step vrdc = b.value("vrdc", worstResistance.vrdc);
         b.require(ved.value(), vrdc.value(), FindingKind.CAPACITY, "capacity", "VEd = " + Num.f(ved.value()) + " kN exceeds VRd,c = "
                 + Num.f(vrdc.value()) + " kN on the section across " + axis.label() + " (" + worst.caseName + ").");
         b.require(unreduced.value(), vMax.value(), FindingKind.CAPACITY, "strut-crushing", "Unreduced VEd = " + Num.f(unreduced.value())
@@ -122,6 +131,34 @@ final class ShearCheck {
         return Step.of("av,raw,P" + pile, "(face to pile centre) − (0.5 − i)·φ",
                 Num.f(faceToCentreMm) + " − (0.5 − " + Num.f(inside) + ")·" + Num.f(phi), faceToCentreMm - offset,
                 "mm", ctx.clauseOf("shear_section_inside_pile"));
+    }
+
+    /** The resistance VRd,c of one side's section: its effective width, ρl, the stress and the force. */
+    private record Resistance(ShearWidth effective, Step rho, Step stress, Step vrdc) {
+        static Resistance of(ShearWidth effective, double dMm, Step cRdc, Step k, Step vMin, double fckV) {
+            double width = effective.width().value();
+            Step rho = Shear.rhoL(effective.as().value(), width, dMm);
+            Step stress = Shear.vRdcStress(cRdc.value(), k.value(), rho.value(), fckV);
+            return new Resistance(effective, rho, stress, Shear.vRdc(stress, vMin, width, dMm));
+        }
+    }
+
+    /**
+     * Whether {@code side} governs over the one found so far: the greater VEd/VRd,c (over widely spaced
+     * piles the two sides of a column have their own width and steel, so the side of the greater VEd
+     * need not be the critical one), then the greater VEd, then the shorter av, so that the choice
+     * depends on the cap and not on the order the sides are visited in.
+     */
+    private static boolean governs(Side side, Resistance r, Side worst, Resistance worstR) {
+        double u = side.ved / r.vrdc.value();
+        double w = worst.ved / worstR.vrdc.value();
+        if (Math.abs(u - w) > 1e-9 * Math.max(1, Math.abs(w))) {
+            return u > w;
+        }
+        if (Math.abs(side.ved - worst.ved) > 1e-9 * Math.max(1, Math.abs(worst.ved))) {
+            return side.ved > worst.ved;
+        }
+        return side.av.value() < worst.av.value() - 1e-9;
     }
 
     /** The side {@code sign} (+1 beyond the +face, −1 beyond the −face) of case {@code u}, or null when empty. */

@@ -53,6 +53,13 @@ class TwoAndThreePileCapHandCalculationTest {
      * tie-x: T = 1350·825/865 = 1287.6 kN; As,req = 1287.6·1000/434.78 = 2961.4 mm².
      * tie-y: +y side 1350·(720 + 240)/845 = 1533.7 kN; −y side 2·1350·(720 − 240)/845 = 1533.7 kN
      * (equilibrium about the node); As,req = 1533.7·1000/434.78 = 3527.6 mm²; As,prov = 12·π·20²/4 = 3769.9 mm².
+     * shear-y (column as a 400 mm square, faces at y = −40 and −440; piles widely spaced: 1650 > 3φ, so each
+     * side's section is the strips 3φ = 1500 wide about its own piles, common practice):
+     * +y side, the pile at y = 720: av = 760 − (0.5 − 0.2)·500 = 610 ≥ 0.5d = 422.5; β = 610/(2·845) =
+     * 0.36095; VEd = 0.36095·1350 = 487.28 kN on b = 1500 (0.325 kN/mm);
+     * −y side, the two piles at y = −720: av = 280 − 150 = 130 → 0.5d = 422.5; β = 0.25; VEd = 675 kN on
+     * the union of two strips, the whole 2600 (0.260 kN/mm), with about the same ρl. The +y side has the
+     * smaller VEd but the greater VEd/VRd,c, and it governs.
      */
     @Test
     void threePileCap() {
@@ -67,5 +74,9 @@ class TwoAndThreePileCapHandCalculationTest {
         assertThat(value(cap, "punching-face", "u0")).isCloseTo(Math.PI * 500, withinPercentage(0.01)); // π·D
         // One-way shear takes the circular column as a square of side 0.8·500 = 400 mm (common practice).
         assertThat(check(cap, "shear-y").trace()).anyMatch(t -> t.symbol().equals("c,eq") && t.value() == 400);
+        assertThat(value(cap, "shear-y", "av")).isCloseTo(610, withinPercentage(0.01)); // hand calculation
+        assertThat(value(cap, "shear-y", "beta")).isCloseTo(0.36095, withinPercentage(0.01)); // hand calculation
+        assertThat(value(cap, "shear-y", "ved")).isCloseTo(487.28, withinPercentage(0.01)); // hand calculation
+        assertThat(value(cap, "shear-y", "b")).isCloseTo(1500, withinPercentage(0.01)); // hand calculation
     }
 }
