@@ -6,6 +6,7 @@ import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.Severity;
+import dev.countercheck.review.Value;
 import dev.countercheck.ruleset.CheckDef;
 import dev.countercheck.ruleset.CheckDef.DerivedDef;
 import dev.countercheck.ruleset.CheckDef.RequirementDef;
@@ -17,6 +18,7 @@ import dev.countercheck.ruleset.Variable;
 import dev.countercheck.submission.CheckCatalogue;
 
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -45,6 +47,39 @@ public final class RuleChecks {
     }
 
     /**
+     * The outcome of every check of a type's catalogue but {@code combinations}, in catalogue order: the
+     * type's own outcome where it computed one, else the ruleset's rule for the check, each scope's
+     * variables formed once per subject.
+     *
+     * @param computed the outcomes the type's reviewer computed, by check id
+     * @param scopes   the variables of each scope of the type, with units and descriptions
+     * @param form     forms the variables of a scope for a subject
+     */
+    public static List<CheckOutcome> inCatalogueOrder(CheckCatalogue catalogue, Map<String, CheckOutcome> computed,
+                                                      Ruleset rules, Map<String, Map<String, Variable>> scopes,
+                                                      BiFunction<String, String, DetailingVariables.Values> form) {
+        Map<String, DetailingVariables.Values> formed = new HashMap<>();
+        List<CheckOutcome> outcomes = new ArrayList<>();
+        for (String id : catalogue.checks().keySet()) {
+            if (!id.equals(CombinationsCheck.ID)) {
+                outcomes.add(computed.containsKey(id) ? computed.get(id)
+                        : byRule(catalogue, id, rules, scopes, form, formed));
+            }
+        }
+        return outcomes;
+    }
+
+    /** As,req of each direction as check {@code prefix}-x or -y computed it; 0 where it did not. */
+    public static Map<Axis, Double> asRequired(Map<String, CheckOutcome> computed, String prefix) {
+        Map<Axis, Double> asRequired = new EnumMap<>(Axis.class);
+        for (Axis axis : Axis.values()) {
+            Value v = computed.get(prefix + "-" + axis.label()).result().values().get("as_required");
+            asRequired.put(axis, v == null ? 0.0 : v.value());
+        }
+        return asRequired;
+    }
+
+    /**
      * The ruleset's rule for check {@code id} of an element, run on the subject the id names; not-checked
      * when the ruleset has no rule for it or the scope's variables cannot be formed.
      *
@@ -52,7 +87,7 @@ public final class RuleChecks {
      * @param form      forms the variables of a scope for a subject
      * @param formed    the variables formed so far for this element, by scope and subject (formed once each)
      */
-    public static CheckOutcome byRule(CheckCatalogue catalogue, String id, Ruleset rules,
+    private static CheckOutcome byRule(CheckCatalogue catalogue, String id, Ruleset rules,
                                       Map<String, Map<String, Variable>> scopes,
                                       BiFunction<String, String, DetailingVariables.Values> form,
                                       Map<String, DetailingVariables.Values> formed) {

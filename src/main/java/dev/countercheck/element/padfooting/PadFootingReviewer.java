@@ -11,14 +11,10 @@ import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.Drawing;
 import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
-import dev.countercheck.review.Value;
 import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.submission.PadFooting;
 
-import java.util.ArrayList;
-import java.util.EnumMap;
-import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -89,20 +85,9 @@ final class PadFootingReviewer {
         PadContext ctx = new PadContext(pad, rules);
         Map<String, CheckOutcome> done = new LinkedHashMap<>();
         checks().forEach((id, check) -> done.put(id, guarded(id, check, ctx)));
-        Map<Axis, Double> asRequired = new EnumMap<>(Axis.class);
-        for (Axis axis : Axis.values()) {
-            Value v = done.get("bending-" + axis.label()).result().values().get("as_required");
-            asRequired.put(axis, v == null ? 0.0 : v.value());
-        }
-        Map<String, DetailingVariables.Values> variables = new HashMap<>();
-        List<CheckOutcome> outcomes = new ArrayList<>();
-        for (String id : CATALOGUE.checks().keySet()) {
-            if (!id.equals(CombinationsCheck.ID)) {
-                outcomes.add(done.containsKey(id) ? done.get(id) : RuleChecks.byRule(CATALOGUE, id, ctx.rules,
-                        PadScopes.SCOPES, (scope, subject) -> PadScopes.values(ctx, scope, subject, asRequired),
-                        variables));
-            }
-        }
+        Map<Axis, Double> asRequired = RuleChecks.asRequired(done, "bending");
+        List<CheckOutcome> outcomes = RuleChecks.inCatalogueOrder(CATALOGUE, done, ctx.rules, PadScopes.SCOPES,
+                (scope, subject) -> PadScopes.values(ctx, scope, subject, asRequired));
         return new Run(ctx, outcomes);
     }
 

@@ -7,7 +7,6 @@ import dev.countercheck.element.CombinedRuns;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.OutOfRangeException;
 import dev.countercheck.element.RuleChecks;
-import dev.countercheck.review.Value;
 import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.ElementAssembler;
@@ -15,9 +14,6 @@ import dev.countercheck.review.ElementReview;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.submission.PileCap;
 
-import java.util.ArrayList;
-import java.util.EnumMap;
-import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -99,20 +95,9 @@ final class PileCapReviewer {
         Map<String, Function<PileCapContext, CheckOutcome>> checks = checks();
         Map<String, CheckOutcome> done = new LinkedHashMap<>();
         checks.forEach((id, check) -> done.put(id, guarded(id, check, ctx)));
-        Map<Axis, Double> asRequired = new EnumMap<>(Axis.class);
-        for (Axis axis : Axis.values()) {
-            Value v = done.get("tie-" + axis.label()).result().values().get("as_required");
-            asRequired.put(axis, v == null ? 0.0 : v.value());
-        }
-        Map<String, DetailingVariables.Values> variables = new HashMap<>();
-        List<CheckOutcome> outcomes = new ArrayList<>();
-        for (String id : CATALOGUE.checks().keySet()) {
-            if (!id.equals(CombinationsCheck.ID)) {
-                outcomes.add(done.containsKey(id) ? done.get(id) : RuleChecks.byRule(CATALOGUE, id, ctx.rules,
-                        DetailingScopes.SCOPES, (scope, subject) -> DetailingScopes.values(ctx, scope, subject, asRequired),
-                        variables));
-            }
-        }
+        Map<Axis, Double> asRequired = RuleChecks.asRequired(done, "tie");
+        List<CheckOutcome> outcomes = RuleChecks.inCatalogueOrder(CATALOGUE, done, ctx.rules, DetailingScopes.SCOPES,
+                (scope, subject) -> DetailingScopes.values(ctx, scope, subject, asRequired));
         return new Run(ctx, outcomes);
     }
 

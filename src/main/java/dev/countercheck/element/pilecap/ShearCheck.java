@@ -51,14 +51,20 @@ final class ShearCheck {
         Side worst = null;
         Resistance worstResistance = null;
         Side worstUnreduced = null;
+        // A side's section (its piles, width and steel) is the same in every case: its resistance is formed once.
+        Resistance[] resistanceOfSide = new Resistance[2];
         for (UlsCase u : ctx.uls) {
             for (int sign : new int[] {1, -1}) {
                 Side side = side(ctx, axis, sign, d.value(), u);
                 if (side == null) {
                     continue;
                 }
-                Resistance r = Resistance.of(ShearWidth.of(ctx, axis, side.piles, section), d.value(), cRdc, k, vMin,
-                        fckV);
+                int index = sign > 0 ? 0 : 1;
+                if (resistanceOfSide[index] == null) {
+                    resistanceOfSide[index] = Resistance.of(ShearWidth.of(ctx, axis, side.piles, section), d.value(),
+                            cRdc, k, vMin, fckV);
+                }
+                Resistance r = resistanceOfSide[index];
                 if (worst == null || governs(side, r, worst, worstResistance)) {
                     worst = side;
                     worstResistance = r;
