@@ -155,9 +155,9 @@ class CommandsTest {
     }
 
     @Test
-    void aFolderReviewWritesEveryReportTheIndexAndWithPdfThePdfs(@TempDir Path out) {
+    void aFolderReviewWritesEveryReportAndTheIndex(@TempDir Path out) {
         SampleSubmissionsTest.Run r = run("review", "sample-submissions", "--out", out.toString(), "--date",
-                "2026-12-01", "--pdf");
+                "2026-12-01");
         // harbour-lane has critical findings (its comment says so): exit 1.
         assertThat(r.exit()).as(r.err()).isEqualTo(ExitCodes.FINDINGS);
         assertThat(r.err()).contains("[1/5]").contains("[2/5]").contains("[5/5]");
@@ -165,10 +165,33 @@ class CommandsTest {
                 "tannery-row-pads"}) {
             assertThat(out.resolve(base + ".json")).isNotEmptyFile();
             assertThat(out.resolve(base + ".html")).isNotEmptyFile();
-            assertThat(out.resolve(base + ".pdf")).isNotEmptyFile();
+            assertThat(out.resolve(base + ".pdf")).as("no PDF without --pdf").doesNotExist();
         }
         assertThat(out.resolve("index.html")).content().contains("harbour-lane.html").contains("mill-road-depot.html")
                 .contains("quayside-annex.html").contains("tannery-row-pads.html");
+    }
+
+    /**
+     * With {@code --pdf} a folder review writes each submission's PDF beside its JSON and HTML: shown on a folder of
+     * the two smallest samples (a cap and a pad; SampleReportsTest reads the PDF of every sample).
+     */
+    @Test
+    void aFolderReviewWithPdfWritesEachSubmissionsPdf(@TempDir Path dir) throws IOException {
+        Path folder = Files.createDirectories(dir.resolve("submissions"));
+        Path out = dir.resolve("reports");
+        for (String base : new String[] {"mill-road-depot", "tannery-row-pads"}) {
+            Files.copy(Path.of("sample-submissions", base + ".yaml"), folder.resolve(base + ".yaml"));
+        }
+        SampleSubmissionsTest.Run r = run("review", folder.toString(), "--out", out.toString(), "--date",
+                "2026-12-01", "--pdf");
+        assertThat(r.exit()).as(r.err()).isIn(ExitCodes.OK, ExitCodes.FINDINGS);
+        assertThat(r.err()).contains("[1/2]").contains("[2/2]");
+        for (String base : new String[] {"mill-road-depot", "tannery-row-pads"}) {
+            assertThat(out.resolve(base + ".json")).isNotEmptyFile();
+            assertThat(out.resolve(base + ".html")).isNotEmptyFile();
+            assertThat(out.resolve(base + ".pdf")).isNotEmptyFile();
+        }
+        assertThat(out.resolve("index.html")).content().contains("mill-road-depot.html").contains("tannery-row-pads.html");
     }
 
     /** The combinations of the Mill Road sample: text by default, YAML items ready to paste as actions. */
@@ -189,27 +212,27 @@ class CommandsTest {
             throws IOException {
         Path first = Files.createDirectories(dir.resolve("first"));
         Path second = Files.createDirectories(dir.resolve("second"));
-        SampleSubmissionsTest.Run r = run("review", "sample-submissions/quayside-annex.yaml", "--out", first.toString(),
+        SampleSubmissionsTest.Run r = run("review", "sample-submissions/mill-road-depot.yaml", "--out", first.toString(),
                 "--date", "2026-12-01", "--pdf");
-        run("review", "sample-submissions/quayside-annex.yaml", "--out", second.toString(), "--date", "2026-12-01",
+        run("review", "sample-submissions/mill-road-depot.yaml", "--out", second.toString(), "--date", "2026-12-01",
                 "--pdf");
         assertThat(r.exit()).as(r.err()).isIn(ExitCodes.OK, ExitCodes.FINDINGS);
         List<Path> written;
         try (Stream<Path> files = Files.list(first)) {
             written = files.sorted().toList();
         }
-        assertThat(written).extracting(p -> p.getFileName().toString()).contains("quayside-annex.json",
-                "quayside-annex.html", "quayside-annex.pdf", "quayside-annex.responses.csv");
+        assertThat(written).extracting(p -> p.getFileName().toString()).contains("mill-road-depot.json",
+                "mill-road-depot.html", "mill-road-depot.pdf", "mill-road-depot.responses.csv");
         for (Path file : written) {
             assertThat(r.out()).as("the output line names " + file).contains(file.toString());
         }
-        byte[] pdf = Files.readAllBytes(first.resolve("quayside-annex.pdf"));
-        assertThat(Files.readAllBytes(second.resolve("quayside-annex.pdf"))).as("same bytes under --date").isEqualTo(pdf);
+        byte[] pdf = Files.readAllBytes(first.resolve("mill-road-depot.pdf"));
+        assertThat(Files.readAllBytes(second.resolve("mill-road-depot.pdf"))).as("same bytes under --date").isEqualTo(pdf);
         try (PDDocument document = Loader.loadPDF(pdf)) {
             var attached = document.getDocumentCatalog().getNames().getEmbeddedFiles().getNames()
-                    .get("quayside-annex.json").getEmbeddedFile();
+                    .get("mill-road-depot.json").getEmbeddedFile();
             assertThat(attached.toByteArray()).as("the attachment is the JSON file, byte for byte")
-                    .isEqualTo(Files.readAllBytes(first.resolve("quayside-annex.json")));
+                    .isEqualTo(Files.readAllBytes(first.resolve("mill-road-depot.json")));
         }
     }
 }

@@ -14,6 +14,8 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 
@@ -164,7 +166,8 @@ class HostileInputCliTest {
      * Kills a run at every step of writing its reports and checks what the folder then holds. The
      * run is a separate Java process (see {@link HaltingRun}) that halts, as a kill would, just
      * before its n-th write step: before a temporary report or the set's journal is created, and
-     * before one of them is moved into place; n runs from 1 until a run completes. The folder
+     * before one of them is moved into place; n runs from 1 until a run completes (two runs at a
+     * time, each in a folder of its own, and checked in the order of n). The folder
      * starts with the reports of the previous revision; after every halt each report is byte for
      * byte the previous one or the new one, and anything else left is a hidden temporary file or
      * journal. Once the next run has tidied the folder ({@link OutputSet#recover}, the first thing
@@ -188,45 +191,56 @@ class HostileInputCliTest {
         assertThat(reports).containsExactly("plan.html", "plan.json", "plan.responses.csv", "plan.responses.xlsx");
 
         int halted = 0;
-        for (int n = 1; ; n++) {
-            assertThat(n).as("a run of four reports ends within a few write steps").isLessThan(20);
-            Path out = temp.resolve("killed-at-" + n);
-            Files.createDirectories(out);
-            for (String report : reports) {
-                Files.copy(previous.resolve(report), out.resolve(report));
-            }
-
-            int code = HaltingRun.start(n, out, "review", newSubmission.toString(), "--out", out.toString(),
-                    "--date", DATE);
-
-            for (String report : reports) {
-                byte[] left = Files.readAllBytes(out.resolve(report));
-                assertThat(left).as("%s after a halt at write %d", report, n)
-                        .satisfiesAnyOf(b -> assertThat(b).isEqualTo(Files.readAllBytes(previous.resolve(report))),
-                                b -> assertThat(b).isEqualTo(Files.readAllBytes(expected.resolve(report))));
-            }
-            assertThat(names(out)).as("besides the reports, only hidden temporary files and journals")
-                    .allMatch(name -> reports.contains(name) || (name.startsWith(".")
-                            && (name.endsWith(".tmp") || name.endsWith(".set"))));
-            OutputSet.recover(out);
-            assertThat(names(out)).as("after the next run's tidying, the reports only").isEqualTo(reports);
-            boolean allPrevious = true;
-            boolean allNew = true;
-            for (String report : reports) {
-                byte[] left = Files.readAllBytes(out.resolve(report));
-                allPrevious &= java.util.Arrays.equals(left, Files.readAllBytes(previous.resolve(report)));
-                allNew &= java.util.Arrays.equals(left, Files.readAllBytes(expected.resolve(report)));
-            }
-            assertThat(allPrevious || allNew).as("after a halt at write %d the set is the previous or the new one", n)
-                    .isTrue();
-            if (code != HaltingRun.HALTED) {
-                assertThat(names(out)).as("a completed run leaves the new reports only").isEqualTo(reports);
+        boolean completed = false;
+        for (int first = 1; !completed; first += HaltingRun.AT_ONCE) {
+            assertThat(first).as("a run of four reports ends within a few write steps").isLessThan(20);
+            Map<Integer, Process> runs = new TreeMap<>();
+            for (int n = first; n < first + HaltingRun.AT_ONCE; n++) {
+                Path out = temp.resolve("killed-at-" + n);
+                Files.createDirectories(out);
                 for (String report : reports) {
-                    assertThat(Files.readAllBytes(out.resolve(report))).isEqualTo(Files.readAllBytes(expected.resolve(report)));
+                    Files.copy(previous.resolve(report), out.resolve(report));
                 }
-                break;
+                runs.put(n, HaltingRun.start(n, out, "review", newSubmission.toString(), "--out", out.toString(),
+                        "--date", DATE));
             }
-            halted++;
+            for (Map.Entry<Integer, Process> run : runs.entrySet()) {
+                int n = run.getKey();
+                Path out = temp.resolve("killed-at-" + n);
+                int code = run.getValue().waitFor();
+
+                for (String report : reports) {
+                    byte[] left = Files.readAllBytes(out.resolve(report));
+                    assertThat(left).as("%s after a halt at write %d", report, n)
+                            .satisfiesAnyOf(b -> assertThat(b).isEqualTo(Files.readAllBytes(previous.resolve(report))),
+                                    b -> assertThat(b).isEqualTo(Files.readAllBytes(expected.resolve(report))));
+                }
+                assertThat(names(out)).as("besides the reports, only hidden temporary files and journals")
+                        .allMatch(name -> reports.contains(name) || (name.startsWith(".")
+                                && (name.endsWith(".tmp") || name.endsWith(".set"))));
+                OutputSet.recover(out);
+                assertThat(names(out)).as("after the next run's tidying, the reports only").isEqualTo(reports);
+                boolean allPrevious = true;
+                boolean allNew = true;
+                for (String report : reports) {
+                    byte[] left = Files.readAllBytes(out.resolve(report));
+                    allPrevious &= java.util.Arrays.equals(left, Files.readAllBytes(previous.resolve(report)));
+                    allNew &= java.util.Arrays.equals(left, Files.readAllBytes(expected.resolve(report)));
+                }
+                assertThat(allPrevious || allNew).as("after a halt at write %d the set is the previous or the new one", n)
+                        .isTrue();
+                if (code != HaltingRun.HALTED) {
+                    assertThat(names(out)).as("a completed run leaves the new reports only").isEqualTo(reports);
+                    for (String report : reports) {
+                        assertThat(Files.readAllBytes(out.resolve(report)))
+                                .isEqualTo(Files.readAllBytes(expected.resolve(report)));
+                    }
+                    completed = true;
+                } else {
+                    assertThat(completed).as("a run halted at write %d after one completed before it", n).isFalse();
+                    halted++;
+                }
+            }
         }
         assertThat(halted).as("runs halted before each temporary file, the journal, and each move")
                 .isGreaterThanOrEqualTo(2 * reports.size());
@@ -242,9 +256,11 @@ class HostileInputCliTest {
     static final class HaltingRun {
 
         static final int HALTED = 99;
+        /** Runs started together: the two cores of the machine CI runs on (the test's own JVM only waits). */
+        static final int AT_ONCE = 2;
 
-        /** Runs {@code args} in a new process that halts before write {@code n} in {@code folder}; its exit status. */
-        static int start(int n, Path folder, String... args) throws IOException, InterruptedException {
+        /** Starts {@code args} in a new process that halts before write {@code n} in {@code folder}. */
+        static Process start(int n, Path folder, String... args) throws IOException {
             List<String> command = new ArrayList<>(List.of(
                     Path.of(System.getProperty("java.home"), "bin", "java").toString(),
                     "-Djava.security.manager=allow", // Java 18 and later refuse a security manager without it
@@ -252,9 +268,8 @@ class HostileInputCliTest {
                     "-cp", System.getProperty("java.class.path"),
                     HaltingRun.class.getName(), String.valueOf(n), folder.toAbsolutePath().toString()));
             command.addAll(List.of(args));
-            Process process = new ProcessBuilder(command).redirectErrorStream(true)
+            return new ProcessBuilder(command).redirectErrorStream(true)
                     .redirectOutput(ProcessBuilder.Redirect.DISCARD).start();
-            return process.waitFor();
         }
 
         @SuppressWarnings("removal")

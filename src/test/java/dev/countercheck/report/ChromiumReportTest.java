@@ -8,6 +8,7 @@ import org.jsoup.nodes.Element;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.io.IOException;
@@ -32,8 +33,11 @@ import static org.assertj.core.api.Assertions.assertThat;
  * sample's report, one of its elements on its own and one check's derivation opened
  * ({@code <sample>-page-one.png}, {@code <sample>-element-<id>.png}, {@code <sample>-derivation.png}).
  *
- * <p>Skipped, with the reason, where {@code /usr/bin/chromium} is absent.
+ * <p>Skipped, with the reason, where {@code /usr/bin/chromium} is absent. Tagged {@code browser}: not part of
+ * {@code mvn verify} (ten browser starts, a sixth of the suite's time); {@code .ci/run} runs it after the suite
+ * with {@code mvn -B test -Pbrowser}.
  */
+@Tag("browser")
 class ChromiumReportTest {
 
     private static final Path CHROMIUM = Path.of("/usr/bin/chromium");
