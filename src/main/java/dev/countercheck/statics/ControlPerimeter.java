@@ -56,6 +56,13 @@ public final class ControlPerimeter {
                 : Punching.u1Rectangular(c.cxMm(), c.cyMm(), aMm);
     }
 
+    /** The value of {@link #full} alone (no trace text: a search over many perimeters), mm. */
+    public static double fullValue(ColumnOutline c, double aMm) {
+        return c.circular()
+                ? Punching.u1CircularValue(c.cxMm(), aMm)
+                : Punching.u1RectangularValue(c.cxMm(), c.cyMm(), aMm);
+    }
+
     /**
      * β for the column's moments at the perimeter at distance a (EN 1992-1-1 6.4.3(3), Exp. (6.39) with
      * W of Exp. (6.41) and k of Table 6.1, summed over both axes; 6.4.4(2), Exp. (6.51) within 2d); a
