@@ -15,7 +15,7 @@ import java.util.TreeMap;
  * What each name a rule's formula may write means, taken from where the name is declared: a parameter's or a
  * table's note, a scope variable's description (every kind's scopes, in the order of the kinds and the scopes'
  * names; a name that two scopes describe differently, such as {@code phi}, has both), a derived quantity's symbol. The report
- * defines the names of a rule-derived step with it; built once per review.
+ * defines the names of a rule-derived step with it; built once per review (the scopes' part once).
  */
 final class RulesetNames {
 
@@ -23,15 +23,7 @@ final class RulesetNames {
     }
 
     static Map<String, String> of(Ruleset rules) {
-        Map<String, Set<String>> described = new TreeMap<>();
-        for (ElementKind<?> kind : ElementKinds.ALL) {
-            for (Map<String, Variable> scope : new TreeMap<>(kind.ruleVocabulary().scopes()).values()) {
-                new TreeMap<>(scope).forEach((name, v) -> described.computeIfAbsent(name, k -> new LinkedHashSet<>())
-                        .add(v.description()));
-            }
-        }
-        Map<String, String> names = new TreeMap<>();
-        described.forEach((name, descriptions) -> names.put(name, String.join(" / ", descriptions)));
+        Map<String, String> names = new TreeMap<>(ScopeNames.DESCRIBED);
         for (Parameter p : rules.parameters().values()) {
             names.put(p.name(), p.note() + " (" + p.symbol() + ", ruleset parameter)");
         }
@@ -67,5 +59,24 @@ final class RulesetNames {
         }
         symbols.values().removeIf(symbol -> symbol.contains(" "));
         return Map.copyOf(symbols);
+    }
+
+    /** The scope variables' descriptions of every kind: they are the program's, formed once when first needed. */
+    private static final class ScopeNames {
+
+        static final Map<String, String> DESCRIBED = described();
+
+        private static Map<String, String> described() {
+            Map<String, Set<String>> described = new TreeMap<>();
+            for (ElementKind<?> kind : ElementKinds.ALL) {
+                for (Map<String, Variable> scope : new TreeMap<>(kind.ruleVocabulary().scopes()).values()) {
+                    new TreeMap<>(scope).forEach((name, v) -> described.computeIfAbsent(name,
+                            k -> new LinkedHashSet<>()).add(v.description()));
+                }
+            }
+            Map<String, String> names = new TreeMap<>();
+            described.forEach((name, descriptions) -> names.put(name, String.join(" / ", descriptions)));
+            return Map.copyOf(names);
+        }
     }
 }

@@ -36,10 +36,37 @@ public final class Num {
             double magnitude = Math.abs(scaled);
             double fraction = magnitude - Math.floor(magnitude);
             if (magnitude >= 1000 && magnitude < 10_000 && Math.abs(fraction - 0.5) > TIE_MARGIN) {
-                return BigDecimal.valueOf(Math.round(scaled), scale).stripTrailingZeros().toPlainString();
+                return plain(Math.round(scaled), scale);
             }
         }
         return exact(value);
+    }
+
+    /**
+     * unscaled·10^(−scale) written as {@code BigDecimal.valueOf(unscaled, scale).stripTrailingZeros().toPlainString()}
+     * writes it: no exponent, no trailing zeros after the point, the point only when a digit follows it.
+     */
+    static String plain(long unscaled, int scale) {
+        long m = unscaled;
+        int s = scale;
+        while (s > 0 && m % 10 == 0) {
+            m /= 10;
+            s--;
+        }
+        StringBuilder out = new StringBuilder(24);
+        if (m < 0) {
+            out.append('-');
+        }
+        String digits = Long.toString(Math.abs(m));
+        if (s <= 0) {
+            out.append(digits);
+            out.append("0".repeat(-s));
+        } else if (digits.length() > s) {
+            out.append(digits, 0, digits.length() - s).append('.').append(digits, digits.length() - s, digits.length());
+        } else {
+            out.append("0.").append("0".repeat(s - digits.length())).append(digits);
+        }
+        return out.toString();
     }
 
     /** {@link #f} by exact decimal arithmetic on the binary value. */

@@ -9,6 +9,7 @@ public final class Punching {
     private static final String C_W1 = "EN 1992-1-1 6.4.3(3), Exp. (6.41), at distance a (6.4.4(2))";
     private static final String C_BETA = "EN 1992-1-1 6.4.3(3), Exp. (6.39); 6.4.4(2), Exp. (6.51)";
     private static final String C_BETA_CIRCULAR = "EN 1992-1-1 6.4.3(3), Exp. (6.42), at distance a (6.4.4(2))";
+    private static final String C_VRD_ENHANCED = "EN 1992-1-1 6.4.4(2), Exp. (6.50)";
     /** Table 6.1: c1/c2 and k. */
     private static final double[] RATIO = {0.5, 1.0, 2.0, 3.0};
     private static final double[] K = {0.45, 0.60, 0.70, 0.80};
@@ -74,10 +75,15 @@ public final class Punching {
      * @return u, mm
      */
     public static Step u1Circular(double diameterMm, double aMm) {
+        return Step.of("u", "π·(D + 2·a)", "π·(" + Num.f(diameterMm) + " + 2·" + Num.f(aMm) + ")",
+                u1CircularValue(diameterMm, aMm), "mm", C_PERIMETER);
+    }
+
+    /** The value of {@link #u1Circular} alone (no trace text: a search over many perimeters), mm. */
+    public static double u1CircularValue(double diameterMm, double aMm) {
         Bounds.positive("D", diameterMm, "mm", C_PERIMETER);
         Bounds.positive("a", aMm, "mm", C_PERIMETER);
-        return Step.of("u", "π·(D + 2·a)", "π·(" + Num.f(diameterMm) + " + 2·" + Num.f(aMm) + ")",
-                Math.PI * (diameterMm + 2 * aMm), "mm", C_PERIMETER);
+        return Math.PI * (diameterMm + 2 * aMm);
     }
 
     /**
@@ -130,15 +136,19 @@ public final class Punching {
      * @return vRd, MPa
      */
     public static Step vRdEnhanced(double vRdcStress, double vMinMpa, double dMm, double aMm) {
-        String clause = "EN 1992-1-1 6.4.4(2), Exp. (6.50)";
-        Bounds.nonNegative("vRd,c", vRdcStress, "MPa", clause);
-        Bounds.nonNegative("vmin", vMinMpa, "MPa", clause);
-        Bounds.positive("d", dMm, "mm", clause);
-        Bounds.positiveAtMost("a", aMm, "mm", 2 * dMm, clause);
         return Step.withRemark("vRd", "max(vRd,c; vmin)·2·d/a",
                 "max(" + Num.f(vRdcStress) + "; " + Num.f(vMinMpa) + ")·2·" + Num.f(dMm) + "/" + Num.f(aMm),
-                Math.max(vRdcStress, vMinMpa) * 2 * dMm / aMm, "MPa", clause,
+                vRdEnhancedValue(vRdcStress, vMinMpa, dMm, aMm), "MPa", C_VRD_ENHANCED,
                 Shear.governing(vRdcStress, vMinMpa));
+    }
+
+    /** The value of {@link #vRdEnhanced} alone (no trace text: a search over many perimeters), MPa. */
+    public static double vRdEnhancedValue(double vRdcStress, double vMinMpa, double dMm, double aMm) {
+        Bounds.nonNegative("vRd,c", vRdcStress, "MPa", C_VRD_ENHANCED);
+        Bounds.nonNegative("vmin", vMinMpa, "MPa", C_VRD_ENHANCED);
+        Bounds.positive("d", dMm, "mm", C_VRD_ENHANCED);
+        Bounds.positiveAtMost("a", aMm, "mm", 2 * dMm, C_VRD_ENHANCED);
+        return Math.max(vRdcStress, vMinMpa) * 2 * dMm / aMm;
     }
 
     /**

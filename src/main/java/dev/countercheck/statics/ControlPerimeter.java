@@ -56,6 +56,13 @@ public final class ControlPerimeter {
                 : Punching.u1Rectangular(c.cxMm(), c.cyMm(), aMm);
     }
 
+    /** The value of {@link #full} alone (no trace text: a search over many perimeters), mm. */
+    public static double fullValue(ColumnOutline c, double aMm) {
+        return c.circular()
+                ? Punching.u1CircularValue(c.cxMm(), aMm)
+                : Punching.u1RectangularValue(c.cxMm(), c.cyMm(), aMm);
+    }
+
     /**
      * β for the column's moments at the perimeter at distance a (EN 1992-1-1 6.4.3(3), Exp. (6.39) with
      * W of Exp. (6.41) and k of Table 6.1, summed over both axes; 6.4.4(2), Exp. (6.51) within 2d); a
@@ -213,6 +220,8 @@ public final class ControlPerimeter {
         private final double[] bottoms = new double[STRIPS];
         private final double[] tops = new double[STRIPS];
         private final double[] beyond = new double[STRIPS];
+        /** The strip nearest the column: {@code beyond} falls to it and rises after it. */
+        private final int nearest;
         private final double whole;
 
         Strips(ColumnOutline c, PlanPoint centre, double diameterMm) {
@@ -233,13 +242,30 @@ public final class ControlPerimeter {
                 beyond[i] = circular ? dx : Math.max(0, dx - c.cxMm() / 2);
             }
             whole = sum;
+            int m = 0;
+            for (int i = 1; i < STRIPS; i++) {
+                if (beyond[i] < beyond[m]) {
+                    m = i;
+                }
+            }
+            nearest = m;
         }
 
-        /** The share of the head inside the perimeter at distance a by these strips. */
+        /**
+         * The share of the head inside the perimeter at distance a by these strips. The strips the region reaches
+         * ({@code beyond} within a, or within D/2 + a of a circular column's centre) are those next to the
+         * nearest, found by bisection on each side of it; the others add nothing to the sum.
+         */
         double shareInside(double aMm) {
             double inside = 0;
             double radius = columnRadius + aMm;
-            for (int i = 0; i < STRIPS; i++) {
+            double reach = circular ? radius : aMm;
+            if (beyond[nearest] > reach) {
+                return whole == 0 ? 0 : inside / whole;
+            }
+            int first = firstWithin(reach);
+            int last = lastWithin(reach);
+            for (int i = first; i <= last; i++) {
                 double half = halfHeightInside(aMm, radius, beyond[i]);
                 if (half >= 0) {
                     double lo = Math.max(bottoms[i], columnY - half);
@@ -248,6 +274,36 @@ public final class ControlPerimeter {
                 }
             }
             return whole == 0 ? 0 : inside / whole;
+        }
+
+        /** The first strip up to the nearest whose {@code beyond} is within {@code reach} (the nearest's is). */
+        private int firstWithin(double reach) {
+            int lo = 0;
+            int hi = nearest;
+            while (lo < hi) {
+                int mid = (lo + hi) >>> 1;
+                if (beyond[mid] <= reach) {
+                    hi = mid;
+                } else {
+                    lo = mid + 1;
+                }
+            }
+            return lo;
+        }
+
+        /** The last strip from the nearest on whose {@code beyond} is within {@code reach} (the nearest's is). */
+        private int lastWithin(double reach) {
+            int lo = nearest;
+            int hi = STRIPS - 1;
+            while (lo < hi) {
+                int mid = (lo + hi + 1) >>> 1;
+                if (beyond[mid] <= reach) {
+                    lo = mid;
+                } else {
+                    hi = mid - 1;
+                }
+            }
+            return lo;
         }
 
         /**

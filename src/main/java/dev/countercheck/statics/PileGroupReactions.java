@@ -85,7 +85,7 @@ public final class PileGroupReactions {
             dx[i] = piles.get(i).xMm() - xBar;
             dy[i] = piles.get(i).yMm() - yBar;
         }
-        Spread g = Spread.of(piles);
+        Spread g = Spread.of(piles, xBar, yBar);
         if (n == 1) {
             p[0] = v;
             return new Distribution(v, mx, my, p, Math.hypot(mx, my), g.plane(0, 0, dx, dy, true));
@@ -138,8 +138,12 @@ public final class PileGroupReactions {
         }
 
         static Spread of(List<PlanPoint> piles) {
-            double xBar = piles.stream().mapToDouble(PlanPoint::xMm).average().orElse(0);
-            double yBar = piles.stream().mapToDouble(PlanPoint::yMm).average().orElse(0);
+            return of(piles, piles.stream().mapToDouble(PlanPoint::xMm).average().orElse(0),
+                    piles.stream().mapToDouble(PlanPoint::yMm).average().orElse(0));
+        }
+
+        /** About the centroid (x̄, ȳ) of {@code piles}, found by the caller. */
+        static Spread of(List<PlanPoint> piles, double xBar, double yBar) {
             double sxx = 0;
             double syy = 0;
             double sxy = 0;

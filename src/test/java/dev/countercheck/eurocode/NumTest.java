@@ -46,6 +46,21 @@ class NumTest {
         }
     }
 
+    /** The fast path's plain text is the text BigDecimal writes for the same unscaled value and scale. */
+    @Test
+    void plainTextIsWhatBigDecimalWrites() {
+        java.util.Random random = new java.util.Random(14);
+        for (int i = 0; i < 20_000; i++) {
+            long unscaled = (random.nextBoolean() ? 1 : -1) * (1000 + random.nextInt(9001));
+            if (random.nextInt(4) == 0) {
+                unscaled = unscaled / 100 * 100;
+            }
+            int scale = random.nextInt(45) - 22;
+            assertThat(Num.plain(unscaled, scale)).as("%d, %d", unscaled, scale).isEqualTo(
+                    java.math.BigDecimal.valueOf(unscaled, scale).stripTrailingZeros().toPlainString());
+        }
+    }
+
     /** Error messages may quote a bad input that is not a finite number; formatting must not throw. */
     @Test
     void printsNonFiniteValuesInsteadOfThrowing() {

@@ -3,6 +3,7 @@ package dev.countercheck.statics;
 import org.junit.jupiter.api.Test;
 
 import java.util.List;
+import java.util.Random;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
@@ -59,5 +60,55 @@ class ControlPerimeterTest {
         }
         // Centred on a straight side at a = 300, half inside by symmetry (as above).
         assertThat(group.shareInside(0, 300)).isCloseTo(0.5, within(0.002));
+    }
+
+    /**
+     * The strips the perimeter cannot reach are passed over: the share is, to the last bit, the sum over all 400
+     * strips across x and across y that the method states (the oracle below, written out here). Invented sizes.
+     */
+    @Test
+    void theShareIsTheSumOverEveryStrip() {
+        Random random = new Random(14);
+        for (int trial = 0; trial < 300; trial++) {
+            PlanPoint centre = new PlanPoint(random.nextInt(401) - 200, random.nextInt(401) - 200);
+            ColumnOutline c = random.nextBoolean()
+                    ? ColumnOutline.rectangular(200 + random.nextInt(600), 200 + random.nextInt(600), centre)
+                    : ColumnOutline.circular(200 + random.nextInt(600), centre);
+            PlanPoint head = new PlanPoint(random.nextInt(3001) - 1500, random.nextInt(3001) - 1500);
+            double diameter = 300 + random.nextInt(600);
+            double a = 1 + random.nextInt(2000);
+            double oracle = (everyStrip(c, a, head, diameter)
+                    + everyStrip(c.turned(), a, new PlanPoint(head.yMm(), head.xMm()), diameter)) / 2;
+            double clear = 1e-9 * (a + diameter);
+            double distance = ControlPerimeter.distanceFromColumn(c, head);
+            if (distance > a + diameter / 2 + clear || distance < a - diameter / 2 - clear) {
+                continue;
+            }
+            assertThat(ControlPerimeter.headShareInside(c, a, head, diameter)).as("trial %d", trial).isEqualTo(oracle);
+        }
+    }
+
+    /** The share inside by 400 strips across x, each summed in order. */
+    private static double everyStrip(ColumnOutline c, double a, PlanPoint p, double diameter) {
+        double r = diameter / 2;
+        double width = diameter / 400;
+        double inside = 0;
+        double whole = 0;
+        for (int i = 0; i < 400; i++) {
+            double x = p.xMm() - r + (i + 0.5) * width;
+            double chord = Math.sqrt(Math.max(0, r * r - (x - p.xMm()) * (x - p.xMm())));
+            whole += 2 * chord;
+            double dx = Math.abs(x - c.centre().xMm());
+            double beyond = c.circular() ? dx : Math.max(0, dx - c.cxMm() / 2);
+            double reach = c.circular() ? c.cxMm() / 2 + a : a;
+            if (beyond <= reach) {
+                double half = c.circular() ? Math.sqrt(reach * reach - beyond * beyond)
+                        : c.cyMm() / 2 + Math.sqrt(a * a - beyond * beyond);
+                double lo = Math.max(p.yMm() - chord, c.centre().yMm() - half);
+                double hi = Math.min(p.yMm() + chord, c.centre().yMm() + half);
+                inside += Math.max(0, hi - lo);
+            }
+        }
+        return whole == 0 ? 0 : inside / whole;
     }
 }

@@ -1,6 +1,7 @@
 package dev.countercheck.element.padfooting;
 
 import dev.countercheck.element.Axis;
+import dev.countercheck.element.PerimeterSearch;
 import dev.countercheck.element.PlanGeometry;
 import dev.countercheck.element.PunchingFace;
 import dev.countercheck.element.Section;
@@ -68,30 +69,11 @@ final class PunchingChecks {
         Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), ctx.fck.value()));
         ColumnOutline outline = PlanGeometry.outline(ctx.pad.column());
         int count = (int) Math.ceil(2 / step.value() - 1e-9);
-        Perimeter governing = null;
         List<ActionCase> cases = ctx.cases(ActionCase.Kind.ULS);
-        List<Ground.Contact> contacts = cases.stream()
-                .map(c -> Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow()).toList();
-        for (int j = 1; j <= count; j++) {
-            double a = 2 * d.value() * j / count;
-            double u = ControlPerimeter.lengthInPlan(outline, a, ctx.pad.planXMm(), ctx.pad.planYMm());
-            double whole = ControlPerimeter.full(outline, a).value();
-            double vRd = Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a).value() * u * d.value() / 1000;
-            ControlRegion region = ControlRegion.of(outline, a);
-            for (int i = 0; i < cases.size(); i++) {
-                ActionCase c = cases.get(i);
-                double reduced = c.nKn() - contacts.get(i).field().forceInsidePerimeter(region);
-                if (reduced <= 1e-9 * Math.abs(c.nKn()) || u <= 0) {
-                    continue;
-                }
-                double betaWhole = ControlPerimeter.betaValue(outline, a, reduced, c.mxKnm(), c.myKnm());
-                Perimeter p = new Perimeter(a, u, contacts.get(i).field(), reduced,
-                        Punching.betaOnPartValue(betaWhole, u, whole), c, vRd);
-                if (governing == null || p.utilisation() > governing.utilisation()) {
-                    governing = p;
-                }
-            }
-        }
+        List<PressureField> fields = cases.stream()
+                .map(c -> Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow().field()).toList();
+        Perimeter governing = PerimeterSearch.governing(count, new Perimeters(ctx, outline, cases, fields, d.value(),
+                count, stress.value(), vMin.value()));
         if (governing == null) {
             return b.notApplicable("the ground pressure within 2d = " + Num.f(2 * d.value()) + " mm of the column"
                     + " face carries the whole column load in every ULS case").build();
@@ -124,6 +106,110 @@ final class PunchingChecks {
         return b.require(ved.value(), vrd.value(), FindingKind.CAPACITY, "capacity", "β·VEd,red = "
                 + Num.f(ved.value()) + " kN at the control perimeter a = " + Num.f(g.aMm) + " mm from the column"
                 + " face exceeds VRd = " + Num.f(vrd.value()) + " kN (" + g.c.name() + ").").build();
+    }
+
+    /**
+     * The perimeters at a = 2d·j/count (j = 1 … count) of one pad for {@link PerimeterSearch}: the relief is
+     * the ground pressure inside the perimeter in each ULS case (never less at a greater a: the pressure is
+     * nowhere negative), the perimeter that of the worst case. u, its whole length and VRd of every
+     * perimeter are formed first, in order.
+     */
+    private static final class Perimeters implements PerimeterSearch.Perimeters<double[], Perimeter> {
+
+        /**
+         * How far below the computed pressure inside a smaller perimeter that inside a greater one may come out,
+         * as a share of N plus the whole ground pressure: the rounding of the clipped polygons' integrals (about
+         * 10⁻¹³ of the whole), widely covered.
+         */
+        private static final double INTEGRAL_ROUNDING = 1e-9;
+
+        private final ColumnOutline outline;
+        private final List<ActionCase> cases;
+        private final List<PressureField> fields;
+        /** Per case, |N| plus the whole ground pressure: the scale of the integrals' rounding. */
+        private final double[] scale;
+        private final double[] a;
+        private final double[] u;
+        private final double[] whole;
+        private final double[] vRdKn;
+
+        Perimeters(PadContext ctx, ColumnOutline outline, List<ActionCase> cases, List<PressureField> fields, double d,
+                   int count, double stress, double vMin) {
+            this.outline = outline;
+            this.cases = cases;
+            this.fields = fields;
+            scale = new double[cases.size()];
+            for (int i = 0; i < scale.length; i++) {
+                scale[i] = Math.abs(cases.get(i).nKn()) + Math.abs(fields.get(i).total().value());
+            }
+            a = new double[count + 1];
+            u = new double[count + 1];
+            whole = new double[count + 1];
+            vRdKn = new double[count + 1];
+            for (int j = 1; j <= count; j++) {
+                a[j] = 2 * d * j / count;
+                u[j] = ControlPerimeter.lengthInPlan(outline, a[j], ctx.pad.planXMm(), ctx.pad.planYMm());
+                whole[j] = ControlPerimeter.fullValue(outline, a[j]);
+                vRdKn[j] = Punching.vRdEnhancedValue(stress, vMin, d, a[j]) * u[j] * d / 1000;
+            }
+        }
+
+        @Override
+        public double[] none() {
+            return new double[cases.size()];
+        }
+
+        @Override
+        public double[] relief(int j) {
+            ControlRegion region = ControlRegion.of(outline, a[j]);
+            double[] inside = none();
+            for (int i = 0; i < inside.length; i++) {
+                inside[i] = fields.get(i).forceInsidePerimeter(region);
+            }
+            return inside;
+        }
+
+        @Override
+        public Perimeter perimeter(int j, double[] inside) {
+            Perimeter worst = null;
+            for (int i = 0; i < cases.size(); i++) {
+                ActionCase c = cases.get(i);
+                double reduced = c.nKn() - inside[i];
+                if (reduced <= 1e-9 * Math.abs(c.nKn()) || u[j] <= 0) {
+                    continue;
+                }
+                Perimeter p = new Perimeter(a[j], u[j], fields.get(i), reduced, beta(j, c, reduced), c, vRdKn[j]);
+                if (worst == null || p.utilisation() > worst.utilisation()) {
+                    worst = p;
+                }
+            }
+            return worst;
+        }
+
+        @Override
+        public double utilisation(Perimeter perimeter) {
+            return perimeter.utilisation();
+        }
+
+        /** β·VEd,red/VRd of the worst case with the pressure inside the smaller perimeter, less its rounding. */
+        @Override
+        public double bound(int j, double[] least, double[] most) {
+            double bound = 0;
+            for (int i = 0; i < cases.size(); i++) {
+                ActionCase c = cases.get(i);
+                double reduced = c.nKn() - least[i] + INTEGRAL_ROUNDING * scale[i];
+                if (reduced > 1e-9 * Math.abs(c.nKn()) && u[j] > 0) {
+                    bound = Math.max(bound, beta(j, c, reduced) * reduced / vRdKn[j]);
+                }
+            }
+            return bound;
+        }
+
+        /** β of case c at perimeter j for VEd,red, on the part of the perimeter on the plan (by value). */
+        private double beta(int j, ActionCase c, double reduced) {
+            double betaWhole = ControlPerimeter.betaValue(outline, a[j], reduced, c.mxKnm(), c.myKnm());
+            return Punching.betaOnPartValue(betaWhole, u[j], whole[j]);
+        }
     }
 
     /**

@@ -37,11 +37,9 @@ final class DeviationCheck {
             b.trace(ctx.rules.parameter("gamma_g_inf").asStep());
         }
         double worst = Double.NEGATIVE_INFINITY;
-        String where = "";
+        Where worstAt = null;
         double least = Double.POSITIVE_INFINITY;
-        String whereLeast = "";
-        String worstCase = "";
-        String leastCase = "";
+        Where leastAt = null;
         double nominalMax = Double.NEGATIVE_INFINITY;
         for (UlsCase u : ctx.uls) {
             nominalMax = Math.max(nominalMax, u.withSelfWeight().max());
@@ -57,18 +55,20 @@ final class DeviationCheck {
                     for (int i = 0; i < r.length; i++) {
                         if (r[i] > worst) {
                             worst = r[i];
-                            where = at(i, u, moved, delta, dir);
-                            worstCase = u.action().name();
+                            worstAt = new Where(i, u, moved, dir);
                         }
                         if (rInf[i] < least) {
                             least = rInf[i];
-                            whereLeast = at(i, u, moved, delta, dir);
-                            leastCase = u.action().name();
+                            leastAt = new Where(i, u, moved, dir);
                         }
                     }
                 }
             }
         }
+        String where = worstAt == null ? "" : worstAt.text(delta);
+        String whereLeast = leastAt == null ? "" : leastAt.text(delta);
+        String worstCase = worstAt == null ? "" : worstAt.u().action().name();
+        String leastCase = leastAt == null ? "" : leastAt.u().action().name();
         b.value("max", Step.of("P,max,δ", "max P_i with one pile off position by δ (own weight × γG,sup)", where,
                 worst, "kN", BASIS));
         b.value("min", Step.of("P,min,δ", "min P_i with one pile off position by δ (own weight × γG,inf)",
@@ -95,8 +95,12 @@ final class DeviationCheck {
     }
 
     /** Where a reaction was found: pile i in case u when pile {@code moved} is δ off position in direction {@code dir}. */
-    private static String at(int i, UlsCase u, int moved, Step delta, int dir) {
-        return "pile " + (i + 1) + " in " + u.action().name() + " when pile " + (moved + 1) + " is "
-                + Num.f(delta.value()) + " mm off position at " + (45 * dir) + "° from +x";
+    private record Where(int i, UlsCase u, int moved, int dir) {
+
+        /** In words, written once the search is over. */
+        String text(Step delta) {
+            return "pile " + (i + 1) + " in " + u.action().name() + " when pile " + (moved + 1) + " is "
+                    + Num.f(delta.value()) + " mm off position at " + (45 * dir) + "° from +x";
+        }
     }
 }

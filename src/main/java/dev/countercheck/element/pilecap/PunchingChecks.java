@@ -1,5 +1,6 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.PerimeterSearch;
 import dev.countercheck.element.PlanGeometry;
 import dev.countercheck.element.PunchingFace;
 import dev.countercheck.element.Section;
@@ -64,18 +65,8 @@ final class PunchingChecks {
         Step stress = b.trace(Shear.vRdcStress(cRdc, k.value(), rho.value(), fckV));
         Step vMin = b.trace(Shear.vMin(ctx.rules.number("v_min_coefficient"), k.value(), fckV));
         int count = (int) Math.ceil(2 / step.value() - 1e-9);
-        ColumnOutline column = PlanGeometry.outline(ctx.cap.column());
-        ControlPerimeter.Heads heads = ControlPerimeter.heads(column, PlanGeometry.points(ctx.cap.piles().positions()),
-                ctx.cap.piles().diameterMm());
-        Perimeter governing = null;
-        for (int j = 1; j <= count; j++) {
-            double a = 2 * d.value() * j / count;
-            Perimeter p = at(ctx, column, heads, a, d.value(),
-                    Punching.vRdEnhanced(stress.value(), vMin.value(), d.value(), a));
-            if (p.vEdRedKn > 0 && p.uMm > 0 && (governing == null || p.utilisation() > governing.utilisation())) {
-                governing = p;
-            }
-        }
+        Perimeter governing = PerimeterSearch.governing(count, new Perimeters(ctx, d.value(), count, stress.value(),
+                vMin.value()));
         if (governing == null) {
             return b.notApplicable("no control perimeter from the column face to 2d = " + Num.f(2 * d.value())
                     + " mm carries a load: the piles within it take the whole column load").build();
@@ -83,7 +74,8 @@ final class PunchingChecks {
         Perimeter g = governing;
         b.value("a", Step.of("a", "the distance of greatest VEd,red/VRd, searched in steps of (Δa/d)·d up to 2d",
                 count + " perimeters", g.aMm, "mm", "EN 1992-1-1 6.4.4(2)"));
-        Step full = ControlPerimeter.full(PlanGeometry.outline(ctx.cap.column()), g.aMm);
+        ColumnOutline column = PlanGeometry.outline(ctx.cap.column());
+        Step full = ControlPerimeter.full(column, g.aMm);
         Step u = new Step("u", full.formula(), full.substituted(), g.uMm, "mm", full.clause(), full.remark());
         if (g.uMm < full.value() - 1e-6) {
             u = u.remarked("only the " + Num.f(g.uMm) + " mm of the " + Num.f(full.value())
@@ -114,29 +106,101 @@ final class PunchingChecks {
         return b.build();
     }
 
-    /** The perimeter at distance a, the worst ULS case (column actions alone) and its resistance. */
-    private static Perimeter at(PileCapContext ctx, ColumnOutline column, ControlPerimeter.Heads heads, double a,
-                                double d, Step vRd) {
-        double u = ControlPerimeter.lengthInPlan(column, a, ctx.cap.planXMm(), ctx.cap.planYMm());
-        double[] shares = new double[ctx.cap.piles().positions().size()];
-        for (int i = 0; i < shares.length; i++) {
-            shares[i] = heads.shareInside(i, a);
+    /**
+     * The perimeters at a = 2d·j/count (j = 1 … count) of one cap for {@link PerimeterSearch}: the relief is
+     * the share of each pile head inside the perimeter (never less at a greater a), the perimeter that of the
+     * worst ULS case (column actions alone). u and VRd of every perimeter are formed first, in order.
+     */
+    private static final class Perimeters implements PerimeterSearch.Perimeters<double[], Perimeter> {
+
+        private final PileCapContext ctx;
+        private final ColumnOutline column;
+        private final ControlPerimeter.Heads heads;
+        private final double[] a;
+        private final double[] u;
+        private final double[] vRdMpa;
+        private final double[] vRdKn;
+
+        Perimeters(PileCapContext ctx, double d, int count, double stress, double vMin) {
+            this.ctx = ctx;
+            this.column = PlanGeometry.outline(ctx.cap.column());
+            this.heads = ControlPerimeter.heads(column, PlanGeometry.points(ctx.cap.piles().positions()),
+                    ctx.cap.piles().diameterMm());
+            a = new double[count + 1];
+            u = new double[count + 1];
+            vRdMpa = new double[count + 1];
+            vRdKn = new double[count + 1];
+            for (int j = 1; j <= count; j++) {
+                a[j] = 2 * d * j / count;
+                vRdMpa[j] = Punching.vRdEnhancedValue(stress, vMin, d, a[j]);
+                u[j] = ControlPerimeter.lengthInPlan(column, a[j], ctx.cap.planXMm(), ctx.cap.planYMm());
+                vRdKn[j] = vRdMpa[j] * u[j] * d / 1000;
+            }
         }
-        Perimeter worst = new Perimeter(a, u, shares, 0, 1, null, vRd.value(), vRd.value() * u * d / 1000);
-        for (UlsCase c : ctx.uls) {
+
+        @Override
+        public double[] none() {
+            return new double[ctx.cap.piles().positions().size()];
+        }
+
+        @Override
+        public double[] relief(int j) {
+            double[] shares = none();
+            for (int i = 0; i < shares.length; i++) {
+                shares[i] = heads.shareInside(i, a[j]);
+            }
+            return shares;
+        }
+
+        @Override
+        public Perimeter perimeter(int j, double[] shares) {
+            Perimeter worst = new Perimeter(a[j], u[j], shares, 0, 1, null, vRdMpa[j], vRdKn[j]);
+            for (UlsCase c : ctx.uls) {
+                double v = reduced(c, shares, shares);
+                if (v > LOAD_RESIDUE * c.action().nKn()) {
+                    Perimeter here = new Perimeter(a[j], u[j], shares, v, ControlPerimeter.betaValue(column, a[j], v,
+                            c.action().mxKnm(), c.action().myKnm()), c, vRdMpa[j], vRdKn[j]);
+                    if (here.utilisation() > worst.utilisation()) {
+                        worst = here;
+                    }
+                }
+            }
+            return worst.vEdRedKn > 0 && worst.uMm > 0 ? worst : null;
+        }
+
+        @Override
+        public double utilisation(Perimeter perimeter) {
+            return perimeter.utilisation();
+        }
+
+        /** β·VEd,red/VRd of the worst case with the least share of each pile in compression, the most in tension. */
+        @Override
+        public double bound(int j, double[] least, double[] most) {
+            double bound = 0;
+            if (u[j] <= 0) {
+                return bound;
+            }
+            for (UlsCase c : ctx.uls) {
+                double v = reduced(c, least, most);
+                if (v > LOAD_RESIDUE * c.action().nKn()) {
+                    double beta = ControlPerimeter.betaValue(column, a[j], v, c.action().mxKnm(), c.action().myKnm());
+                    bound = Math.max(bound, beta * v / vRdKn[j]);
+                }
+            }
+            return bound;
+        }
+
+        /**
+         * VEd,red = N − Σ P_i·share_i of case c, the share of a pile in compression from {@code compressed}, of one
+         * in tension from {@code tensioned} (the same array for the perimeter's own shares).
+         */
+        private static double reduced(UlsCase c, double[] compressed, double[] tensioned) {
             double[] p = c.columnOnly().reactionsKn();
             double v = c.action().nKn();
             for (int i = 0; i < p.length; i++) {
-                v -= p[i] * shares[i];
+                v -= p[i] * (p[i] > 0 ? compressed[i] : tensioned[i]);
             }
-            if (v > LOAD_RESIDUE * c.action().nKn()) {
-                Perimeter here = new Perimeter(a, u, shares, v, ControlPerimeter.betaValue(column, a, v,
-                        c.action().mxKnm(), c.action().myKnm()), c, vRd.value(), vRd.value() * u * d / 1000);
-                if (here.utilisation() > worst.utilisation()) {
-                    worst = here;
-                }
-            }
+            return v;
         }
-        return worst;
     }
 }
