@@ -72,6 +72,7 @@ public final class OutputSet implements AutoCloseable {
             ThreadLocalRandom.current().nextLong());
     private final Map<Path, Content> files = new LinkedHashMap<>();
     private final List<Path> written = new ArrayList<>();
+    private final List<Pattern> retired = new ArrayList<>();
     private boolean committed;
 
     private OutputSet(Path folder, Sink sink) {
@@ -115,6 +116,16 @@ public final class OutputSet implements AutoCloseable {
     }
 
     /**
+     * Names the files of an earlier run that this set no longer writes (the part pages of a report that
+     * has since shrunk): once the set is in place, each file of the folder whose whole name matches
+     * {@code names}, that is not one of the set's files and that bears the tool's mark, is removed.
+     */
+    public OutputSet retire(Pattern names) {
+        retired.add(names);
+        return this;
+    }
+
+    /**
      * Writes every file of the set and replaces the reports together.
      *
      * @throws IOException when a file cannot be written (nothing is replaced then), or a report
@@ -140,6 +151,26 @@ public final class OutputSet implements AutoCloseable {
         ReportFiles.move(pending, journal);
         committed = true;
         complete(folder, id);
+        removeRetired();
+    }
+
+    private void removeRetired() throws IOException {
+        if (retired.isEmpty()) {
+            return;
+        }
+        List<Path> stale = new ArrayList<>();
+        try (DirectoryStream<Path> listing = Files.newDirectoryStream(folder)) {
+            for (Path file : listing) {
+                String name = file.getFileName().toString();
+                if (!files.containsKey(file) && retired.stream().anyMatch(p -> p.matcher(name).matches())
+                        && ReportMarkers.replaceable(file)) {
+                    stale.add(file);
+                }
+            }
+        }
+        for (Path file : stale) {
+            Files.deleteIfExists(file);
+        }
     }
 
     /** Removes the temporary files of a set that was not committed. */

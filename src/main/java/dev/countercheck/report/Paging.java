@@ -75,8 +75,16 @@ public record Paging(String projectFile, int parts, int part) {
 
     /** The file name of part {@code k} (from 1). */
     public String partFile(int k) {
-        String base = projectFile.endsWith(".html") ? projectFile.substring(0, projectFile.length() - 5) : projectFile;
-        return base + ".part-" + k + ".html";
+        return base(projectFile) + ".part-" + k + ".html";
+    }
+
+    /** The names of every part page {@link #partFile} can give for the report {@code projectFile}, whatever the number of parts. */
+    public static Pattern partFiles(String projectFile) {
+        return Pattern.compile(Pattern.quote(base(projectFile)) + "\\.part-[1-9][0-9]*\\.html");
+    }
+
+    private static String base(String projectFile) {
+        return projectFile.endsWith(".html") ? projectFile.substring(0, projectFile.length() - 5) : projectFile;
     }
 
     /** The link to {@code anchor} from the page being written: within the page, or to the page that holds it. */

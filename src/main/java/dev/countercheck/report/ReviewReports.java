@@ -12,7 +12,8 @@ import java.util.Optional;
  * element by element, the HTML as the template runs; a large project's HTML on several pages, see
  * {@link Paging}), and, when asked for, the PDF. The PDF is laid out once from the report as one
  * HTML page, with the JSON result attached (which is then made as text once, for both files); for a
- * report of one page, that very HTML text is also the HTML file.
+ * report of one page, that very HTML text is also the HTML file. Part pages of an earlier, larger
+ * report of the same name that this one does not write are removed once the new reports are in place.
  */
 public final class ReviewReports {
 
@@ -28,6 +29,7 @@ public final class ReviewReports {
     public static List<String> addTo(OutputSet set, Review review, ReviewRound round, String json, String html,
                                      Optional<String> pdf) {
         List<HtmlReportWriter.Page> pages = new HtmlReportWriter().pages(review, round, html);
+        set.retire(Paging.partFiles(html));
         if (pdf.isEmpty()) {
             set.addText(json, out -> new JsonResultWriter().write(review, round, out));
             pages.forEach(p -> set.addText(p.fileName(), p.content()));

@@ -58,6 +58,25 @@ class HtmlPagesTest {
         assertThat(Files.readString(dir.resolve("r.html"))).isEqualTo(new HtmlReportWriter().write(review));
     }
 
+    /** A report that shrinks leaves no part page of the larger one behind, and never touches a file the tool did not write. */
+    @Test
+    void aSmallerReportRemovesThePartsOfTheLargerOneItReplaces() throws IOException {
+        write(reviewOf(2 * Paging.PER_PART + 1));
+        Files.writeString(dir.resolve("r.part-9.html"), "<p>someone's own page</p>\n");
+        Files.writeString(dir.resolve("other.part-1.html"), Files.readString(dir.resolve("r.part-1.html")));
+
+        write(reviewOf(Paging.PER_PART + 1));
+        assertThat(dir.resolve("r.part-3.html")).doesNotExist();
+        assertThat(dir.resolve("r.part-2.html")).exists();
+
+        write(reviewOf(2));
+        assertThat(dir.resolve("r.part-1.html")).doesNotExist();
+        assertThat(dir.resolve("r.part-2.html")).doesNotExist();
+        assertThat(dir.resolve("r.part-9.html")).hasContent("<p>someone's own page</p>");
+        assertThat(dir.resolve("other.part-1.html")).exists();
+        assertThat(dir.resolve("r.html")).exists();
+    }
+
     @Test
     void aLargerProjectHasAProjectPageAndPartsOfElementsWhoseLinksAllResolve() throws IOException {
         Review review = reviewOf(2 * Paging.PER_PART + 1);
