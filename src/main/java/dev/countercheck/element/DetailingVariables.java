@@ -63,8 +63,8 @@ public final class DetailingVariables {
         Map<String, Variable> s = new LinkedHashMap<>();
         s.put("element", Variable.text("what the element is called in messages: cap or footing", noun));
         s.put("h", Variable.number("mm", "overall depth h", 1200));
-        s.put("plan_x", Variable.number("mm", "plan length along x", 2700));
-        s.put("plan_y", Variable.number("mm", "plan length along y", 2700));
+        s.put("plan_x", Variable.number("mm", "plan length along x", 2700).written("Lx"));
+        s.put("plan_y", Variable.number("mm", "plan length along y", 2700).written("Ly"));
         s.put("fck", Variable.number("MPa", "characteristic cylinder strength", 32));
         s.put("fyk", Variable.number("MPa", "characteristic yield strength of the bars", 500));
         s.put("fctm", Variable.number("MPa", "mean tensile strength (Table 3.1)", 3.0));
@@ -76,35 +76,35 @@ public final class DetailingVariables {
         s.put("cast_against", Variable.text("what the bottom face is cast against: blinding, soil or formwork",
                 "blinding"));
         s.put("cast_against_sides", castAgainstSides);
-        s.put("cover_bottom", Variable.number("mm", "stated nominal bottom cover", 75));
-        s.put("cover_top", Variable.number("mm", "stated nominal top cover", 50));
-        s.put("cover_side", Variable.number("mm", "stated nominal side cover", 75));
-        s.put("delta_c_dev", Variable.number("mm", "Δc_dev as stated, else the ruleset's cover_deviation", 10));
+        s.put("cover_bottom", Variable.number("mm", "stated nominal bottom cover", 75).written("c_bottom"));
+        s.put("cover_top", Variable.number("mm", "stated nominal top cover", 50).written("c_top"));
+        s.put("cover_side", Variable.number("mm", "stated nominal side cover", 75).written("c_side"));
+        s.put("delta_c_dev", Variable.number("mm", "Δc_dev as stated, else the ruleset's cover_deviation", 10).written("Δcdev"));
         s.put("embedment", embedment);
-        s.put("phi_bottom", Variable.number("mm", "largest bar of the bottom layer 1", 25));
-        s.put("phi_top", Variable.number("mm", "largest top bar (0 when none)", 16));
-        s.put("phi_side", Variable.number("mm", "side bars (else the largest bottom bar)", 12));
-        s.put("as_x", Variable.number("mm2", "area of the bottom x-bars", 5000));
-        s.put("as_y", Variable.number("mm2", "area of the bottom y-bars", 5000));
-        s.put("ac_x", Variable.number("mm2", "concrete section across the x-bars: plan_y·h", 3.2e6));
-        s.put("ac_y", Variable.number("mm2", "concrete section across the y-bars: plan_x·h", 3.2e6));
+        s.put("phi_bottom", Variable.number("mm", "largest bar of the bottom layer 1", 25).written("φbottom"));
+        s.put("phi_top", Variable.number("mm", "largest top bar (0 when none)", 16).written("φtop"));
+        s.put("phi_side", Variable.number("mm", "side bars (else the largest bottom bar)", 12).written("φside"));
+        s.put("as_x", Variable.number("mm2", "area of the bottom x-bars", 5000).written("As,x"));
+        s.put("as_y", Variable.number("mm2", "area of the bottom y-bars", 5000).written("As,y"));
+        s.put("ac_x", Variable.number("mm2", "concrete section across the x-bars: plan_y·h", 3.2e6).written("Ac,x"));
+        s.put("ac_y", Variable.number("mm2", "concrete section across the y-bars: plan_x·h", 3.2e6).written("Ac,y"));
         s.put("has_sls_qp", Variable.bool("a sls-quasi-permanent action case is given"));
-        s.put("sigma_qp_x", Variable.number("MPa", "quasi-permanent stress in the x-bars (0 without a QP case)", 250));
-        s.put("sigma_qp_y", Variable.number("MPa", "quasi-permanent stress in the y-bars (0 without a QP case)", 250));
-        s.put("phi_x", Variable.number("mm", "largest bottom x-bar", 25));
-        s.put("phi_y", Variable.number("mm", "largest bottom y-bar", 25));
-        s.put("spacing_x", Variable.number("mm", "centre spacing of the bottom x-bars", 200));
-        s.put("spacing_y", Variable.number("mm", "centre spacing of the bottom y-bars", 200));
+        s.put("sigma_qp_x", Variable.number("MPa", "quasi-permanent stress in the x-bars (0 without a QP case)", 250).written("σs,qp,x"));
+        s.put("sigma_qp_y", Variable.number("MPa", "quasi-permanent stress in the y-bars (0 without a QP case)", 250).written("σs,qp,y"));
+        s.put("phi_x", Variable.number("mm", "largest bottom x-bar", 25).written("φx"));
+        s.put("phi_y", Variable.number("mm", "largest bottom y-bar", 25).written("φy"));
+        s.put("spacing_x", Variable.number("mm", "centre spacing of the bottom x-bars", 200).written("sx"));
+        s.put("spacing_y", Variable.number("mm", "centre spacing of the bottom y-bars", 200).written("sy"));
         return s;
     }
 
     /** The starter-bar scope: the section's variables and the starters'. */
     public static Map<String, Variable> starters(Map<String, Variable> section) {
         Map<String, Variable> starters = new LinkedHashMap<>(section);
-        starters.put("phi", Variable.number("mm", "starter bar diameter", 25));
-        starters.put("count", Variable.number("-", "number of starter bars", 8));
-        starters.put("phi_layer1", Variable.number("mm", "largest bottom bar of layer 1", 25));
-        starters.put("phi_layer2", Variable.number("mm", "largest bottom bar of layer 2 (0 when none)", 25));
+        starters.put("phi", Variable.number("mm", "starter bar diameter", 25).written("φ"));
+        starters.put("count", Variable.number("-", "number of starter bars", 8).written("n"));
+        starters.put("phi_layer1", Variable.number("mm", "largest bottom bar of layer 1", 25).written("φ1"));
+        starters.put("phi_layer2", Variable.number("mm", "largest bottom bar of layer 2 (0 when none)", 25).written("φ2"));
         return starters;
     }
 

@@ -106,7 +106,8 @@ public final class ProjectReviewer {
         return new Review(tool,
                 new Review.SubmissionInfo(submission.file(), submission.sha256(), p.title(), p.reference(),
                         p.revision(), p.preparedBy(), p.date()),
-                new Review.RulesetInfo(rules.id(), rules.title(), rules.sha256(), rules.files(), RulesetNames.of(rules)),
+                new Review.RulesetInfo(rules.id(), rules.title(), rules.sha256(), rules.files(), RulesetNames.of(rules),
+                        RulesetNames.symbols(rules)),
                 reviewDate, ElementAssembler.overall(elements), elements, summary(elements),
                 List.copyOf(assumptions));
     }

@@ -43,4 +43,29 @@ final class RulesetNames {
         }
         return Map.copyOf(names);
     }
+
+    /**
+     * The standard's symbol of each name that declares one: a scope variable's, a parameter's, a table's, a
+     * derived quantity's (the first rule to derive a name gives its symbol). A symbol with a space in it is a
+     * phrase, not a symbol ({@code vmin coefficient}): the name is written as it is.
+     */
+    static Map<String, String> symbols(Ruleset rules) {
+        Map<String, String> symbols = new TreeMap<>();
+        for (ElementKind<?> kind : ElementKinds.ALL) {
+            for (Map<String, Variable> scope : new TreeMap<>(kind.ruleVocabulary().scopes()).values()) {
+                new TreeMap<>(scope).forEach((name, v) -> {
+                    if (!v.symbol().isEmpty()) {
+                        symbols.putIfAbsent(name, v.symbol());
+                    }
+                });
+            }
+        }
+        rules.parameters().values().forEach(p -> symbols.put(p.name(), p.symbol()));
+        rules.tables().values().forEach(t -> symbols.put(t.name(), t.symbol()));
+        for (CheckDef c : new TreeMap<>(rules.checks()).values()) {
+            c.derived().forEach(d -> symbols.putIfAbsent(d.name(), d.symbol()));
+        }
+        symbols.values().removeIf(symbol -> symbol.contains(" "));
+        return Map.copyOf(symbols);
+    }
 }

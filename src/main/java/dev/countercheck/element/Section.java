@@ -23,7 +23,7 @@ import java.util.Optional;
  */
 public record Section(List<BarSet> xBars, List<BarSet> yBars, Step dx, Step dy, Step dMean, Step asX, Step asY) {
 
-    private static final String BASIS = "common practice: layer 1 nearest the soffit (docs/pile-cap.md, effective depths)";
+    private static final String BASIS = "common practice: layer 1 nearest the soffit";
 
     /** The section of an element {@code depthMm} deep, or empty when it has no reinforcement or no bottom bars at all. */
     public static Optional<Section> of(Optional<Reinforcement> r, double depthMm) {

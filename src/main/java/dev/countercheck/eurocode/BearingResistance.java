@@ -176,7 +176,7 @@ public final class BearingResistance {
         double h2 = hbKn * hbKn + hlKn * hlKn;
         double cos2 = h2 == 0 ? 0 : hlKn * hlKn / h2;
         double m = mL * cos2 + mB * (1 - cos2);
-        String sub = "mB = " + Num.f(mB) + ", mL = " + Num.f(mL) + ", cos²θ = " + Num.f(cos2);
+        String sub = Num.f(mL) + "·" + Num.f(cos2) + " + " + Num.f(mB) + "·" + Num.f(1 - cos2);
         return h2 == 0
                 ? Step.withRemark("m", "mL·cos²θ + mB·sin²θ", sub, m, "-", D4, "no horizontal load: m = mB (unused)")
                 : Step.of("m", "mL·cos²θ + mB·sin²θ", sub, m, "-", D4);

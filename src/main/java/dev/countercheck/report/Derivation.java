@@ -1,5 +1,6 @@
 package dev.countercheck.report;
 
+import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.report.HtmlModel.Definition;
 import dev.countercheck.report.HtmlModel.StepView;
@@ -9,6 +10,8 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /**
  * A check's trace as a numbered derivation: each step names its quantity in words, and every symbol is defined
@@ -19,12 +22,25 @@ import java.util.Optional;
  */
 final class Derivation {
 
+    private static final Pattern PARAMETER = Pattern.compile("ruleset parameter \\S+");
+    private static final Pattern PARAMETER_VALUE = Pattern.compile("(\\S+) (\\(.+\\))");
+
     private final Glossary glossary;
     private final Map<String, String> rulesetNames;
+    private final RuleNotation notation;
+    private final List<String> rulesetFiles;
 
-    Derivation(Glossary glossary, Map<String, String> rulesetNames) {
+    /**
+     * @param rulesetNames what each name a rule's formula may write means
+     * @param ruleSymbols  the symbol of each such name that has one
+     * @param rulesetFiles the ruleset's files: a step whose clause ends with one in brackets came from a rule
+     */
+    Derivation(Glossary glossary, Map<String, String> rulesetNames, Map<String, String> ruleSymbols,
+               List<String> rulesetFiles) {
         this.glossary = glossary;
         this.rulesetNames = rulesetNames;
+        this.notation = new RuleNotation(ruleSymbols);
+        this.rulesetFiles = rulesetFiles;
     }
 
     /** The steps of check {@code checkId}'s trace, numbered from 1, anchored {@code <anchor>-s<n>}. */
@@ -33,31 +49,75 @@ final class Derivation {
         List<StepView> steps = new ArrayList<>(trace.size());
         for (int i = 0; i < trace.size(); i++) {
             Step step = trace.get(i);
-            String symbol = FormulaSymbols.base(step.symbol());
-            Optional<String> quantity = meaning(symbol, checkId);
+            String name = FormulaSymbols.base(step.symbol());
+            boolean fromRule = rulesetFiles.stream().anyMatch(f -> step.clause().endsWith(" (" + f + ")"));
+            String symbol = fromRule || name.contains("_") ? notation.symbol(name) : name;
+            Optional<String> quantity = meaning(symbol, checkId).or(() -> Optional.ofNullable(rulesetNames.get(name)));
             boolean definesSymbol = quantity.isPresent() && !quantity.get().equals(defined.get(symbol));
             quantity.ifPresent(q -> defined.put(symbol, q));
             List<String> uses = new ArrayList<>();
             uses.add(symbol);
             List<Definition> where = new ArrayList<>();
-            for (String name : FormulaSymbols.in(step.formula(), glossary)) {
-                if (name.equals(symbol)) {
-                    continue;
-                }
-                uses.add(name);
-                Optional<String> meaning = meaning(name, checkId);
-                if (meaning.isPresent() && !meaning.get().equals(defined.get(name))) {
-                    defined.put(name, meaning.get());
-                    where.add(new Definition(name, meaning.get()));
-                }
+            Optional<String> ruleFormula = fromRule ? notation.render(step.formula()) : Optional.empty();
+            if (ruleFormula.isPresent()) {
+                defineRuleNames(step.formula(), symbol, defined, uses, where);
+            } else {
+                defineSymbols(step.formula(), symbol, checkId, defined, uses, where);
             }
-            String substituted = step.substituted().equals(step.formula()) ? "" : step.substituted();
+            String formula = ruleFormula.orElse(step.formula());
+            String substituted = ruleFormula.isPresent()
+                    ? notation.render(step.substituted()).orElse(step.substituted()) : step.substituted();
+            String value = ReportNumbers.display(step.value(), step.unit());
+            Matcher parameter = PARAMETER_VALUE.matcher(substituted);
+            if (PARAMETER.matcher(formula).matches() && parameter.matches()) {
+                formula = formula + " " + parameter.group(2);
+                substituted = parameter.group(1);
+            }
+            if (substituted.equals(formula) || substituted.equals(value) || substituted.equals(Num.f(step.value()))) {
+                substituted = "";
+            }
             steps.add(new StepView(anchor + "-s" + (i + 1), i + 1, step.symbol(), symbol,
-                    FormulaSymbols.qualifier(step.symbol()), quantity.orElse(""), definesSymbol, step.formula(),
-                    substituted, ReportNumbers.display(step.value(), step.unit()), ReportNumbers.unit(step.unit()),
+                    FormulaSymbols.qualifier(step.symbol()), quantity.orElse(""), definesSymbol, formula,
+                    substituted, value, ReportNumbers.unit(step.unit()),
                     step.clause(), step.remark().orElse(""), List.copyOf(where), String.join("|", uses)));
         }
         return steps;
+    }
+
+    /** The symbols of a formula the code wrote, each defined by the glossary (or the ruleset) at its first use. */
+    private void defineSymbols(String formula, String symbol, String checkId, Map<String, String> defined,
+                               List<String> uses, List<Definition> where) {
+        for (String name : FormulaSymbols.in(formula, glossary)) {
+            if (name.equals(symbol)) {
+                continue;
+            }
+            uses.add(name);
+            Optional<String> meaning = meaning(name, checkId);
+            if (meaning.isPresent() && !meaning.get().equals(defined.get(name))) {
+                defined.put(name, meaning.get());
+                where.add(new Definition(name, meaning.get()));
+            }
+        }
+    }
+
+    /**
+     * The names of a rule's formula, each written as its symbol and defined by the ruleset's declaration at its
+     * first use, unless an earlier step defined that symbol already (a derived quantity by its own step).
+     */
+    private void defineRuleNames(String formula, String symbol, Map<String, String> defined, List<String> uses,
+                                 List<Definition> where) {
+        for (String name : RuleNotation.names(formula)) {
+            String shown = notation.symbol(name);
+            if (shown.equals(symbol) || uses.contains(shown)) {
+                continue;
+            }
+            uses.add(shown);
+            String meaning = rulesetNames.get(name);
+            if (meaning != null && !defined.containsKey(shown)) {
+                defined.put(shown, meaning);
+                where.add(new Definition(shown, meaning));
+            }
+        }
     }
 
     private Optional<String> meaning(String symbol, String checkId) {

@@ -298,7 +298,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     static HtmlModel of(Review review, ReviewRound round, Paging paging) {
         List<ElementReview> reviewed = review.elements();
         List<ElementView> elements = new ElementViews(reviewed.size(), i -> element(reviewed.get(i), i + 1, round,
-                review.ruleset().names()));
+                review.ruleset()));
         List<FindingRow> register = IntStream.range(0, reviewed.size())
                 .mapToObj(i -> findingRows(reviewed.get(i), "e" + (i + 1), round))
                 .flatMap(List::stream)
@@ -396,9 +396,10 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     }
 
     private static ElementView element(ElementReview element, int position, ReviewRound round,
-                                       Map<String, String> names) {
+                                       Review.RulesetInfo ruleset) {
         String anchor = "e" + position;
-        Derivation derivation = new Derivation(Glossary.bundled(), names);
+        Derivation derivation = new Derivation(Glossary.bundled(), ruleset.names(), ruleset.symbols(),
+                ruleset.files());
         List<CheckView> checks = IntStream.range(0, element.checks().size())
                 .mapToObj(i -> check(element, element.checks().get(i), checkAnchor(anchor, i), derivation))
                 .toList();

@@ -107,22 +107,23 @@ public final class PdfReportWriter {
         Document html = Jsoup.parse(page);
         addBookmarks(html);
         org.w3c.dom.Document dom = new W3CDom().fromJsoup(html);
-        try (PdfFonts fonts = PdfFonts.open();
-             PDDocument document = new PDDocument(IOUtils.createTempFileOnlyStreamCache())) {
+        try (PDDocument document = new PDDocument(IOUtils.createTempFileOnlyStreamCache());
+             PdfFonts fonts = PdfFonts.open(document)) {
+            BatikSVGDrawer drawings = new BatikSVGDrawer(SvgScriptMode.SECURE, SvgExternalResourceMode.SECURE);
             PdfRendererBuilder builder = new PdfRendererBuilder()
                     .withW3cDocument(dom, null)
                     .usePDDocument(document)
                     .usePdfAConformance(PdfAConformance.PDFA_3_U)
                     .useColorProfile(PdfArchive.srgbProfile())
-                    .useSVGDrawer(new BatikSVGDrawer(SvgScriptMode.SECURE, SvgExternalResourceMode.SECURE))
+                    .useSVGDrawer(drawings)
                     .useExternalResourceAccessControl((uri, type) -> false,
                             ExternalResourceControlPriority.RUN_BEFORE_RESOLVING_URI)
                     .useExternalResourceAccessControl((uri, type) -> false,
                             ExternalResourceControlPriority.RUN_AFTER_RESOLVING_URI)
                     .withProducer(producer(review));
-            fonts.register(builder);
-            // The renderer's fonts stay open until the document is saved: their subsets are embedded then.
+            // The fonts stay open until the document is saved: their subsets are embedded then.
             try (PdfBoxRenderer renderer = builder.buildPdfRenderer()) {
+                fonts.register(renderer.getFontResolver(), drawings);
                 layOut(renderer, document, review, page, jsonName, json);
                 document.save(out);
             }

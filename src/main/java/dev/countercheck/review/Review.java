@@ -32,12 +32,16 @@ public record Review(ToolInfo tool, SubmissionInfo submission, RulesetInfo rules
     /**
      * @param names what each name a rule's formula may write means (parameters, tables, the rule scopes' variables,
      *              the rules' derived quantities), for the report's derivations; the JSON does not carry it
+     * @param symbols the standard's symbol of each such name that has one (a parameter's, a table's, a derived
+     *                quantity's, a scope variable's {@code symbol}), which the report writes in a rule's formula
+     *                for the name; the JSON does not carry it either
      */
-    public record RulesetInfo(String id, String title, String sha256, List<String> files, Map<String, String> names) {
+    public record RulesetInfo(String id, String title, String sha256, List<String> files, Map<String, String> names,
+                              Map<String, String> symbols) {
 
-        /** A ruleset without the meanings of its names. */
+        /** A ruleset without the meanings and symbols of its names. */
         public RulesetInfo(String id, String title, String sha256, List<String> files) {
-            this(id, title, sha256, files, Map.of());
+            this(id, title, sha256, files, Map.of(), Map.of());
         }
     }
 

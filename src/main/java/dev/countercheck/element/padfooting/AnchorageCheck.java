@@ -29,7 +29,8 @@ final class AnchorageCheck {
     }
 
     /** The largest bar force over the sides and ULS cases, with its strip resultant and lever arm. */
-    private record Side(double fsKn, PressureField.Resultant strip, double zeMm, String caseName) {
+    /** @param rMm the distance of R from the column's centre line, towards the edge */
+    private record Side(double fsKn, PressureField.Resultant strip, double rMm, double zeMm, String caseName) {
     }
 
     static CheckOutcome run(PadContext ctx, Axis axis) {
@@ -59,17 +60,21 @@ final class AnchorageCheck {
             for (int sign : new int[] {1, -1}) {
                 double line = sign * (axis.length(ctx.pad) / 2 - x);
                 PressureField.Resultant strip = Ground.beyond(contact, axis, line, sign);
-                double column = axis.along(ctx.pad.column().position()) + sign * (half - inset.value() * 2 * half);
+                double centre = axis.along(ctx.pad.column().position());
+                double column = centre + sign * (half - inset.value() * 2 * half);
                 double ze = Math.max(0, sign * (Ground.along(axis, strip.centroid()) - column));
+                double fromCentre = sign * (Ground.along(axis, strip.centroid()) - centre);
                 double fs = strip.forceKn() * ze / zi;
                 if (worst == null || fs > worst.fsKn) {
-                    worst = new Side(fs, strip, ze, a.name());
+                    worst = new Side(fs, strip, fromCentre, ze, a.name());
                 }
             }
         }
         b.governing(worst.caseName).trace(worst.strip.force());
-        Step ze = b.trace(Step.of("ze", "from R to the column force " + Num.f(inset.value()) + "·c inside the face",
-                worst.caseName, worst.zeMm, "mm", "EN 1992-1-1 9.8.2.2(3), Figure 9.13"));
+        String c = axis == Axis.X ? "cx" : "cy";
+        Step ze = b.trace(Step.of("ze", "max(0; xR − " + c + "/2 + (e/b)·" + c + ")", "max(0; " + Num.f(worst.rMm)
+                + " − " + Num.f(2 * half) + "/2 + " + Num.f(inset.value()) + "·" + Num.f(2 * half) + ")", worst.zeMm,
+                "mm", "EN 1992-1-1 9.8.2.2(3), Figure 9.13"));
         Step force = b.value("force", Step.of("Fs", "R·ze/zi", Num.f(worst.strip.forceKn()) + "·" + Num.f(ze.value())
                 + "/(" + Num.f(ziShare.value()) + "·" + Num.f(d.value()) + ")", worst.fsKn, "kN",
                 "EN 1992-1-1 9.8.2.2(2), Exp. (9.13)"));
@@ -86,7 +91,8 @@ final class AnchorageCheck {
         double clear = (width - 2 * r.cover().sideMm() - phi) / Math.max(count - 1, 1) - phi;
         double cd = bent ? Math.min(clear / 2, r.cover().sideMm())
                 : Math.min(Math.min(clear / 2, r.cover().sideMm()), r.cover().bottomMm());
-        b.trace(Step.of("cd", bent ? "min(a/2, c_side)" : "min(a/2, c_side, c_bottom)", "a = " + Num.f(clear),
+        b.trace(Step.of("cd", bent ? "min(a/2; c_side)" : "min(a/2; c_side; c_bottom)", "min(" + Num.f(clear) + "/2; "
+                + Num.f(r.cover().sideMm()) + (bent ? "" : "; " + Num.f(r.cover().bottomMm())) + ")",
                 cd, "mm", "EN 1992-1-1 8.4.4, Figure 8.3"));
         Step alpha1 = b.trace(Anchorage.alpha1(bent, Math.max(0, cd), phi));
         Step alpha2 = b.trace(Anchorage.alpha2(bent, Math.max(0, cd), phi));

@@ -36,7 +36,8 @@ final class BearingCheck {
             Resultant r = ctx.resultant(a, 1.0);
             Optional<Ground.Contact> contact = Ground.solve(ctx.pad, r);
             if (contact.isEmpty()) {
-                b.trace(Step.of("e", "resultant on the base", r.formed(), Math.hypot(r.exMm(), r.eyMm()), "mm",
+                b.trace(Step.of("e", "√(e,x² + e,y²), resultant on the base", "√(" + PadContext.squared(r.exMm()) + " + "
+                        + PadContext.squared(r.eyMm()) + ")", Math.hypot(r.exMm(), r.eyMm()), "mm",
                         "EN 1997-1 6.5.4"));
                 return b.fail(FindingKind.CAPACITY, "no-equilibrium", "Under " + a.name() + " the resultant (e_x = "
                         + Num.f(r.exMm()) + " mm, e_y = " + Num.f(r.eyMm()) + " mm) lies at or beyond the footing edge:"
@@ -51,7 +52,7 @@ final class BearingCheck {
             }
         }
         b.governing(worst.load().action().name());
-        b.trace(Step.of("V", "N + Wf + Ws (characteristic)", worst.load().formed(), worst.load().vKn(), "kN",
+        b.trace(Step.of("V", "N + W (characteristic)", worst.load().vTerms(), worst.load().vKn(), "kN",
                 "EN 1990 6.5.3, Exp. (6.14b)"));
         Step qMax = b.value("q_max", worst.solved().qMax());
         double qMinValue = cases.stream().map(a -> Ground.solve(ctx.pad, ctx.resultant(a, 1.0)).orElseThrow())

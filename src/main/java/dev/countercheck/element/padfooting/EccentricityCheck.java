@@ -78,9 +78,9 @@ final class EccentricityCheck {
         }
         b.governing(governing).trace(ctx.footingWeight);
         b.trace(ctx.overburdenWeight);
-        b.value("e_x", Step.of("e,x", "|My*/V|, largest over the cases", ex.formed(), Math.abs(ex.exMm()), "mm",
+        b.value("e_x", Step.of("e,x", "|My*/V|, largest over the cases", ex.exTerms(), Math.abs(ex.exMm()), "mm",
                 "EN 1997-1 6.5.4"));
-        b.value("e_y", Step.of("e,y", "|Mx*/V|, largest over the cases", ey.formed(), Math.abs(ey.eyMm()), "mm",
+        b.value("e_y", Step.of("e,y", "|Mx*/V|, largest over the cases", ey.eyTerms(), Math.abs(ey.eyMm()), "mm",
                 "EN 1997-1 6.5.4"));
         if (least != null) {
             b.value("contact_fraction", least.solved().contactFraction());

@@ -99,7 +99,7 @@ final class GeotechnicalChecks {
                 + Num.f(depth), qTotal, "kPa", "EN 1997-1 Annex D"));
         b.trace(Step.of("q'", "γ·D − γw·(D − dw), water above the base", Num.f(qTotal) + " − " + Num.f(gammaW) + "·"
                 + Num.f(Math.max(0, depth - water)), qEff, "kPa", "EN 1997-1 Annex D"));
-        Step vd = b.value("vd", Step.of("Vd", "design vertical load, " + s.name, s.load.formed(), s.load.vKn(), "kN",
+        Step vd = b.value("vd", Step.of("Vd", "N + W (" + s.name + ")", s.load.vTerms(), s.load.vKn(), "kN",
                 "EN 1997-1 6.5.2.1, Exp. (6.1)"));
         b.value("b_eff", governingArea.bEff());
         b.value("l_eff", governingArea.lEff());
@@ -164,10 +164,10 @@ final class GeotechnicalChecks {
         }
         b.trace(ctx.footingWeight);
         b.trace(ctx.overburdenWeight);
-        b.trace(Step.of("Vd", "least vertical load, " + s.name, s.load.formed(), s.load.vKn(), "kN",
+        b.trace(Step.of("Vd", "N + W (least vertical load, " + s.name + ")", s.load.vTerms(), s.load.vKn(), "kN",
                 "EN 1997-1 6.5.3(8)"));
-        Step hd = b.value("hd", Step.of("Hd", "√(Hx² + Hy²)", Num.f(s.load.action().hxKn()) + ", "
-                + Num.f(s.load.action().hyKn()), Math.hypot(s.load.action().hxKn(), s.load.action().hyKn()), "kN",
+        Step hd = b.value("hd", Step.of("Hd", "√(Hx² + Hy²)", "√(" + PadContext.squared(s.load.action().hxKn()) + " + "
+                + PadContext.squared(s.load.action().hyKn()) + ")", Math.hypot(s.load.action().hxKn(), s.load.action().hyKn()), "kN",
                 "EN 1997-1 6.5.3(2), Exp. (6.2)"));
         Step rd = b.value("rd", worstRd);
         return b.require(hd.value(), rd.value(), FindingKind.CAPACITY, "capacity", "Hd = " + Num.f(hd.value())

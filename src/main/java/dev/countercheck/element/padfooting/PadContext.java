@@ -38,10 +38,19 @@ final class PadContext {
             return base.mxKnm() / base.vKn() * 1000;
         }
 
-        /** How V, Mx*, My* were formed, for a trace's substituted values. */
-        String formed() {
-            return action.name() + ": V = " + base.v().substituted() + " = " + Num.f(base.vKn()) + " kN, Mx* = "
-                    + Num.f(base.mxKnm()) + " kNm, My* = " + Num.f(base.myKnm()) + " kNm";
+        /** V written out as N + W with the case's numbers, for a trace's substituted values. */
+        String vTerms() {
+            return base.v().substituted();
+        }
+
+        /** e_x, the size of My* over V, with the case's numbers (mm). */
+        String exTerms() {
+            return "|" + Num.f(base.myKnm()) + "·1000/" + Num.f(base.vKn()) + "|";
+        }
+
+        /** e_y, the size of Mx* over V, with the case's numbers (mm). */
+        String eyTerms() {
+            return "|" + Num.f(base.mxKnm()) + "·1000/" + Num.f(base.vKn()) + "|";
         }
     }
 
@@ -136,5 +145,10 @@ final class PadContext {
 
     String clauseOf(String parameter) {
         return rules.parameter(parameter).clause();
+    }
+
+    /** A value squared as a term of a substituted formula: {@code 58.5²}, {@code (-3)²}. */
+    static String squared(double value) {
+        return (value < 0 ? "(" + Num.f(value) + ")" : Num.f(value)) + "²";
     }
 }

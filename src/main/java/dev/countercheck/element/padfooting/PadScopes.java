@@ -40,13 +40,13 @@ final class PadScopes {
                         + " field for it; a listed assumption)", "formwork"),
                 Variable.number("mm", "pile heads cast into the element: none under a pad (0)", 0));
         Map<String, Variable> bars = new LinkedHashMap<>(s);
-        bars.put("phi", Variable.number("mm", "bar diameter", 16));
-        bars.put("count", Variable.number("-", "number of bars", 12));
-        bars.put("as_provided", Variable.number("mm2", "area of the bars of this direction", 2400));
+        bars.put("phi", Variable.number("mm", "bar diameter", 16).written("φ"));
+        bars.put("count", Variable.number("-", "number of bars", 12).written("n"));
+        bars.put("as_provided", Variable.number("mm2", "area of the bars of this direction", 2400).written("As,prov"));
         bars.put("as_required", Variable.number("mm2", "As,req of this direction's bending check (0 when not computed)",
-                1800));
+                1800).written("As,req"));
         bars.put("d", Variable.number("mm", "effective depth of these bars", 540));
-        bars.put("b_t", Variable.number("mm", "footing width across these bars", 2200));
+        bars.put("b_t", Variable.number("mm", "footing width across these bars", 2200).written("bt"));
         return Map.of(SECTION, s, BARS, bars, STARTERS, DetailingVariables.starters(s));
     }
 

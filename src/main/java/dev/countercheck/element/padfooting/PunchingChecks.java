@@ -108,7 +108,7 @@ final class PunchingChecks {
         }
         b.value("u", u);
         Step deduction = b.trace(g.field.insidePerimeter(outline, g.aMm));
-        Step reduced = b.trace(Step.of("VEd,red", "N − ΔVEd", g.c.name() + ": " + Num.f(g.vEdRedKn + deduction.value())
+        Step reduced = b.trace(Step.of("VEd,red", "N − ΔVEd", Num.f(g.vEdRedKn + deduction.value())
                 + " − " + Num.f(deduction.value()), g.vEdRedKn, "kN", "EN 1992-1-1 6.4.4(2), Exp. (6.48)"));
         Step betaWhole = ControlPerimeter.beta(outline, g.aMm, g.vEdRedKn, g.c.mxKnm(), g.c.myKnm());
         Step betaPart = Punching.betaOnPart(betaWhole, g.uMm, full.value());

@@ -92,7 +92,7 @@ final class SaggingChecks {
         Step ved = b.value("ved", Step.of("VEd", "∫ q dA beyond d from the column face",
                 worst.resultant.force().substituted() + " (" + worst.caseName + ")", worst.resultant.forceKn(), "kN",
                 "EN 1992-1-1 6.2.2"));
-        double width = b.value("b", Step.of("b", "footing width across the section", Num.f(axis.width(ctx.pad)),
+        double width = b.value("b", Step.of("b", axis == Axis.X ? "Ly" : "Lx", Num.f(axis.width(ctx.pad)),
                 axis.width(ctx.pad), "mm", "EN 1992-1-1 6.2.2(1)")).value();
         Step rho = b.trace(Shear.rhoL(b.trace(section.as(axis.bars())).value(), width, d.value()));
         Step k = b.trace(Shear.kSize(d.value()));

@@ -45,21 +45,21 @@ final class DetailingScopes {
                         + " (formwork when the submission does not say)", "formwork"),
                 Variable.number("mm", "pile head cast into the cap", 75));
         Map<String, Variable> bars = new LinkedHashMap<>(cap);
-        bars.put("phi", Variable.number("mm", "bar diameter", 25));
-        bars.put("count", Variable.number("-", "number of bars", 12));
+        bars.put("phi", Variable.number("mm", "bar diameter", 25).written("φ"));
+        bars.put("count", Variable.number("-", "number of bars", 12).written("n"));
         bars.put("layer", Variable.number("-", "layer (1 nearest the soffit)", 1));
         bars.put("bent", Variable.bool("the bars have bent or hooked ends"));
-        bars.put("as_provided", Variable.number("mm2", "area of the bars of this direction", 5890));
-        bars.put("as_required", Variable.number("mm2", "As,req of this direction's tie (0 when not computed)", 4700));
+        bars.put("as_provided", Variable.number("mm2", "area of the bars of this direction", 5890).written("As,prov"));
+        bars.put("as_required", Variable.number("mm2", "As,req of this direction's tie (0 when not computed)", 4700).written("As,req"));
         bars.put("d", Variable.number("mm", "effective depth of these bars", 1100));
-        bars.put("b_t", Variable.number("mm", "cap width across these bars", 2700));
+        bars.put("b_t", Variable.number("mm", "cap width across these bars", 2700).written("bt"));
         bars.put("leg", Variable.number("mm", "vertical leg of bent ends: stated, else h − c_bottom − c_top", 1000));
         bars.put("available_from_pile_centre", Variable.number("mm",
                 "length along the bar from the outermost pile centre, moved outward by the plan tolerance δ"
                         + " (EN 1992-1-1 9.8.1(1)), to the bar end (shorter side)", 600));
         bars.put("has_lap", Variable.bool("the submission declares laps for these bars"));
-        bars.put("lap_percent", Variable.number("-", "share of the bars lapped at one section, % (0 without laps)", 50));
-        bars.put("lap_length", Variable.number("mm", "lap length provided (0 without laps)", 1200));
+        bars.put("lap_percent", Variable.number("-", "share of the bars lapped at one section, % (0 without laps)", 50).written("ρ1"));
+        bars.put("lap_length", Variable.number("mm", "lap length provided (0 without laps)", 1200).written("l0,prov"));
         return Map.of(SECTION, cap, BARS, bars, STARTERS, DetailingVariables.starters(cap));
     }
 

@@ -27,9 +27,12 @@ final class ShearCheck {
     private ShearCheck() {
     }
 
-    /** One side of one case: reduced and unreduced shear, and the steps of its nearest pile. */
-    private record Side(double ved, double unreduced, String caseName, Step av, Step beta, List<Step> steps,
-                        List<Point> piles) {
+    /**
+     * One side of one case: reduced and unreduced shear with their sums written out ({@code 0.39·1850 + ...}),
+     * and the steps of its nearest pile.
+     */
+    private record Side(double ved, String vedTerms, double unreduced, String unreducedTerms, String caseName,
+                        Step av, Step beta, List<Step> steps, List<Point> piles) {
     }
 
     static CheckOutcome run(PileCapContext ctx, Axis axis) {
@@ -81,10 +84,10 @@ final class ShearCheck {
         worst.steps.forEach(b::trace);
         b.value("av", worst.av);
         b.value("beta", worst.beta);
-        Step ved = b.value("ved", Step.of("VEd", "Σ β_i·P_i (piles beyond the face)", worst.caseName,
+        Step ved = b.value("ved", Step.of("VEd", "Σ β_i·P_i (piles beyond the face)", worst.vedTerms,
                 worst.ved, "kN", "EN 1992-1-1 6.2.2(6)"));
         Step unreduced = b.value("ved_unreduced", Step.of("VEd,0", "Σ P_i (piles beyond the face)",
-                worstUnreduced.caseName, worstUnreduced.unreduced, "kN", "EN 1992-1-1 6.2.2(6)"));
+                worstUnreduced.unreducedTerms, worstUnreduced.unreduced, "kN", "EN 1992-1-1 6.2.2(6)"));
         ShearWidth effective = worstResistance.effective;
         double width = b.value("b", effective.width()).value();
         Step nu = b.trace(Shear.nu(ctx.fck.value()));
@@ -179,6 +182,8 @@ final class ShearCheck {
         Step nearestBeta = null;
         List<Step> steps = new ArrayList<>();
         List<Point> beyond = new ArrayList<>();
+        List<String> reducedTerms = new ArrayList<>();
+        List<String> terms = new ArrayList<>();
         for (int i = 0; i < piles.size(); i++) {
             double distance = sign * (axis.along(piles.get(i)) - face);
             if (distance <= 0) {
@@ -193,6 +198,8 @@ final class ShearCheck {
             steps.add(beta);
             ved += beta.value() * p[i];
             unreduced += p[i];
+            reducedTerms.add(Num.f(beta.value()) + "·" + signed(p[i]));
+            terms.add(signed(p[i]));
             if (nearestAv == null || av.value() < nearestAv.value()) {
                 nearestAv = av;
                 nearestBeta = beta;
@@ -201,7 +208,18 @@ final class ShearCheck {
         if (nearestAv == null) {
             return null;
         }
-        return new Side(Math.max(0, ved), Math.max(0, unreduced), u.action().name(), nearestAv, nearestBeta, steps,
-                beyond);
+        return new Side(Math.max(0, ved), sum(reducedTerms, ved), Math.max(0, unreduced), sum(terms, unreduced),
+                u.action().name(), nearestAv, nearestBeta, steps, beyond);
+    }
+
+    /** A pile's reaction as a term of a sum: a pull in brackets. */
+    private static String signed(double kn) {
+        return kn < 0 ? "(" + Num.f(kn) + ")" : Num.f(kn);
+    }
+
+    /** The terms added up, in max(0; ...) when the sum is a pull (taken as no shear). */
+    private static String sum(List<String> terms, double total) {
+        String text = String.join(" + ", terms);
+        return total < 0 ? "max(0; " + text + ")" : text;
     }
 }
