@@ -18,7 +18,6 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 
 /** {@code combine FILE}: prints the combinations generated from each element's characteristic loads. */
@@ -39,24 +38,19 @@ public final class CombineCommand implements Callable<Integer> {
             converter = FormatConverter.class)
     Format format;
 
-    @Option(names = "--ruleset", paramLabel = "ID|PATH",
-            description = "Ruleset whose factors apply, overriding the submission's basis.ruleset.")
-    Optional<String> ruleset;
+    @picocli.CommandLine.Mixin
+    RulesetOptions rulesetOptions;
 
-    @Option(names = "--rulesets-dir", paramLabel = "DIR",
-            description = "The checker's rulesets folder: ids are looked up here before the bundled rulesets.")
-    Optional<Path> rulesetsDir;
-
-    @picocli.CommandLine.Spec
-    picocli.CommandLine.Model.CommandSpec spec;
+    @picocli.CommandLine.Mixin
+    Console console;
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = console.out();
+        PrintWriter err = console.err();
         try {
             Submission s = new SubmissionReader(ElementKinds.binders()).read(file);
-            Ruleset rules = new Rulesets(rulesetsDir, err).of(s, ruleset);
+            Ruleset rules = rulesetOptions.rulesets(err).of(s, rulesetOptions.ruleset);
             for (ElementInput e : s.elements()) {
                 if (e.loads().isEmpty()) {
                     out.println("# " + e.id() + ": no characteristic loads");

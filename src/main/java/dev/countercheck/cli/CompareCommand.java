@@ -34,13 +34,13 @@ public final class CompareCommand implements Callable<Integer> {
             description = "text (default) or json.")
     String format;
 
-    @picocli.CommandLine.Spec
-    picocli.CommandLine.Model.CommandSpec spec;
+    @picocli.CommandLine.Mixin
+    Console console;
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = console.out();
+        PrintWriter err = console.err();
         if (!format.equals("text") && !format.equals("json")) {
             err.println("countercheck compare: --format " + format + " is not one of text, json");
             return ExitCodes.UNUSABLE;

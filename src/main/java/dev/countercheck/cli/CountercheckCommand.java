@@ -5,14 +5,20 @@ import picocli.CommandLine;
 import java.io.PrintWriter;
 import picocli.CommandLine.Command;
 
+import java.util.Arrays;
+import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 
 /** The top-level command: only sub-commands; alone it prints the help and exits as a usage error. */
 @Command(name = "countercheck", mixinStandardHelpOptions = true, versionProvider = Version.class,
-        description = "Independent design review of reinforced-concrete foundations to EN 1992-1-1.",
-        subcommands = {ReviewCommand.class, ValidateCommand.class, RulesCommand.class, ExampleCommand.class, CombineCommand.class,
-                SchemaCommand.class, CompareCommand.class, CommandLine.HelpCommand.class})
+        description = "Independent design review of reinforced-concrete foundations to EN 1992-1-1.")
 public final class CountercheckCommand implements Callable<Integer> {
+
+    /** The sub-commands, in the order the help lists them. */
+    private static final List<Class<?>> SUBCOMMANDS = List.of(ReviewCommand.class, ValidateCommand.class,
+            RulesCommand.class, ExampleCommand.class, CombineCommand.class, SchemaCommand.class, CompareCommand.class,
+            CommandLine.HelpCommand.class);
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -30,7 +36,32 @@ public final class CountercheckCommand implements Callable<Integer> {
      * print is escaped (see {@link ConsoleText}).
      */
     public static CommandLine commandLine() {
+        return commandLine(SUBCOMMANDS);
+    }
+
+    /**
+     * The command line for {@code args}: when they start with the name of a sub-command, only that one is
+     * built (picocli builds each command's model from its annotations, a noticeable part of the start-up);
+     * otherwise (the top command's own options, the {@code help} command, a mistyped name) all of them.
+     */
+    public static CommandLine commandLine(String... args) {
+        return subcommand(args).map(sub -> commandLine(List.<Class<?>>of(sub))).orElseGet(CountercheckCommand::commandLine);
+    }
+
+    /** The sub-command that {@code args} start with, the {@code help} command aside (it needs all the others). */
+    static Optional<Class<?>> subcommand(String... args) {
+        return SUBCOMMANDS.stream().filter(sub -> args.length > 0 && sub != CommandLine.HelpCommand.class
+                && sub.getAnnotation(Command.class).name().equals(args[0])).findFirst();
+    }
+
+    /** Whether {@code command} applies a ruleset to a submission (it has the {@link RulesetOptions}). */
+    static boolean appliesRuleset(Class<?> command) {
+        return Arrays.stream(command.getDeclaredFields()).anyMatch(f -> f.getType() == RulesetOptions.class);
+    }
+
+    private static CommandLine commandLine(List<Class<?>> subcommands) {
         CommandLine cl = new CommandLine(new CountercheckCommand());
+        subcommands.forEach(cl::addSubcommand);
         cl.setExitCodeExceptionMapper(e -> ExitCodes.UNUSABLE);
         cl.setExecutionExceptionHandler((e, commandLine, parseResult) -> internalError(commandLine, e));
         cl.getCommandSpec().exitCodeOnInvalidInput(ExitCodes.UNUSABLE);

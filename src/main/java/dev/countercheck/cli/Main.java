@@ -14,7 +14,11 @@ public final class Main {
     public static void main(String[] args) {
         int code;
         try {
-            code = CountercheckCommand.commandLine().execute(args);
+            // a command that applies a ruleset most often applies the default one: loaded on a second core meanwhile
+            if (CountercheckCommand.subcommand(args).filter(CountercheckCommand::appliesRuleset).isPresent()) {
+                Rulesets.loadAhead();
+            }
+            code = CountercheckCommand.commandLine(args).execute(args);
         } catch (Throwable e) {
             System.err.println("countercheck: " + InternalFailure.line(e, false));
             code = ExitCodes.INTERNAL;

@@ -49,13 +49,8 @@ public final class ReviewCommand implements Callable<Integer> {
             defaultValue = "reports")
     Path outDir;
 
-    @Option(names = "--ruleset", paramLabel = "ID|PATH",
-            description = "Ruleset to apply, overriding the submission's basis.ruleset (default en1992-recommended).")
-    Optional<String> ruleset;
-
-    @Option(names = "--rulesets-dir", paramLabel = "DIR",
-            description = "The checker's rulesets folder: ids are looked up here before the bundled rulesets.")
-    Optional<Path> rulesetsDir;
+    @picocli.CommandLine.Mixin
+    RulesetOptions rulesetOptions;
 
     @Option(names = "--fail-on", paramLabel = "SEVERITY", defaultValue = "critical",
             description = "Exit 1 when a finding at or above this severity exists: critical, major, minor, note"
@@ -75,15 +70,15 @@ public final class ReviewCommand implements Callable<Integer> {
     @picocli.CommandLine.Mixin
     RoundOptions round;
 
-    @picocli.CommandLine.Spec
-    picocli.CommandLine.Model.CommandSpec spec;
+    @picocli.CommandLine.Mixin
+    Console console;
 
     /** Where report files are written; tests put a failing disk here. */
     OutputSet.Sink sink = OutputSet.DISK;
 
     @Override
     public Integer call() {
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter err = console.err();
         Severity threshold;
         String reviewDate;
         List<Path> inputs;
@@ -113,7 +108,7 @@ public final class ReviewCommand implements Callable<Integer> {
             err.println("countercheck review: cannot use --out " + outDir + ": " + IoReasons.of(e));
             return ExitCodes.UNUSABLE;
         }
-        Rulesets rulesets = new Rulesets(rulesetsDir, err);
+        Rulesets rulesets = rulesetOptions.rulesets(err);
         ProjectReviewer reviewer = new ProjectReviewer(Version.tool());
         ReportIndex index = new ReportIndex(Version.tool(), reviewDate);
         int status = ExitCodes.OK;
@@ -135,10 +130,10 @@ public final class ReviewCommand implements Callable<Integer> {
     /** Reviews one submission and writes its reports; the exit status it calls for. */
     private int reviewOne(Path file, Rulesets rulesets, ProjectReviewer reviewer, String reviewDate,
                           ReportTargets targets, Severity threshold, ReportIndex index) {
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter err = console.err();
         try {
             Submission submission = new dev.countercheck.submission.SubmissionReader(ElementKinds.binders()).read(file);
-            Ruleset rules = rulesets.of(submission, ruleset);
+            Ruleset rules = rulesets.of(submission, rulesetOptions.ruleset);
             Review review = reviewer.review(submission, rules, reviewDate);
             ReviewRound context = round.round(file, review, err);
             Path json = targets.report(file, ".json");
@@ -158,7 +153,7 @@ public final class ReviewCommand implements Callable<Integer> {
                 reports.commit();
             }
             index.reviewed(review, json, html, pdfFile);
-            spec.commandLine().getOut().println(round.summary(file, review, context, written));
+            console.out().println(round.summary(file, review, context, written));
             return review.passesGate(threshold) ? ExitCodes.OK : ExitCodes.FINDINGS;
         } catch (SubmissionException e) {
             e.errors().forEach(err::println);
@@ -189,7 +184,7 @@ public final class ReviewCommand implements Callable<Integer> {
     }
 
     private void notWritten(Path file, String why, ReportIndex index) {
-        spec.commandLine().getErr().println(file + ": " + why + "; the previous reports, if any, are left as they were");
+        console.err().println(file + ": " + why + "; the previous reports, if any, are left as they were");
         index.notReviewed(file.toString(), "its reports could not be written");
     }
 
@@ -197,10 +192,10 @@ public final class ReviewCommand implements Callable<Integer> {
         Path indexFile = outDir.resolve(ReportIndex.NAME + ".html");
         try (OutputSet set = OutputSet.in(outDir, sink)) {
             set.add(indexFile.getFileName().toString(), index.html()).commit();
-            spec.commandLine().getOut().println("index of " + submissions + " submissions -> " + indexFile);
+            console.out().println("index of " + submissions + " submissions -> " + indexFile);
             return ExitCodes.OK;
         } catch (IOException e) {
-            spec.commandLine().getErr().println("cannot write " + indexFile + ": " + IoReasons.of(e));
+            console.err().println("cannot write " + indexFile + ": " + IoReasons.of(e));
             return ExitCodes.UNUSABLE;
         }
     }

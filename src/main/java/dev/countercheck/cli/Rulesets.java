@@ -11,6 +11,8 @@ import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
 
 /**
  * Loads rulesets for the commands, once each per run. A submission names a ruleset by id only; the
@@ -22,6 +24,10 @@ final class Rulesets {
 
     static final String DEFAULT = "en1992-recommended";
 
+    /** The bundled default ruleset, when {@link #loadAhead()} started loading it. */
+    private static volatile Optional<FutureTask<Ruleset>> ahead = Optional.empty();
+
+    private final Optional<Path> folder;
     private final RulesetLoader loader;
     private final PrintWriter console;
     private final Map<String, Ruleset> loaded = new HashMap<>();
@@ -31,14 +37,35 @@ final class Rulesets {
      * @param console where a local ruleset that replaces a bundled one is announced
      */
     Rulesets(Optional<Path> folder, PrintWriter console) {
+        this.folder = folder;
         this.loader = new RulesetLoader(folder, ProjectReviewer.RULE_VOCABULARY);
         this.console = console;
+    }
+
+    /**
+     * Starts loading the bundled default ruleset on a background thread, so that reading and validating
+     * it (a good part of a short run's start-up) overlaps the reading of the command line and the
+     * submission on a second core. A command without a rulesets folder takes it when it asks for that
+     * ruleset; when the load failed, or another ruleset is asked for, it is not used (the command loads
+     * what it needs itself, with its own errors), and the work done ahead has only warmed the loader up.
+     */
+    static void loadAhead() {
+        FutureTask<Ruleset> task = new FutureTask<>(() ->
+                new RulesetLoader(Optional.empty(), ProjectReviewer.RULE_VOCABULARY).load(DEFAULT));
+        Thread thread = new Thread(task, "countercheck-ruleset-ahead");
+        thread.setDaemon(true);
+        thread.start();
+        ahead = Optional.of(task);
     }
 
     /** A ruleset named on the command line: an id or a path. */
     Ruleset load(String reference) throws RulesetException {
         Ruleset r = loaded.get(reference);
-        return r != null ? r : announced(reference, loader.load(reference));
+        if (r != null) {
+            return r;
+        }
+        Optional<Ruleset> early = loadedAhead(reference);
+        return announced(reference, early.isPresent() ? early.get() : loader.load(reference));
     }
 
     /**
@@ -54,7 +81,26 @@ final class Rulesets {
         }
         String id = submission.ruleset().get();
         Ruleset r = loaded.get(id);
-        return r != null ? r : announced(id, loader.loadId(id, submission.rulesetAt().get()));
+        if (r != null) {
+            return r;
+        }
+        Optional<Ruleset> early = loadedAhead(id);
+        return announced(id, early.isPresent() ? early.get() : loader.loadId(id, submission.rulesetAt().get()));
+    }
+
+    /** The default ruleset loaded ahead, when it is {@code id}'s, this command has no rulesets folder and it loaded. */
+    private Optional<Ruleset> loadedAhead(String id) {
+        if (!id.equals(DEFAULT) || folder.isPresent() || ahead.isEmpty()) {
+            return Optional.empty();
+        }
+        try {
+            return Optional.of(ahead.get().get());
+        } catch (ExecutionException e) {
+            return Optional.empty();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            return Optional.empty();
+        }
     }
 
     private Ruleset announced(String reference, Ruleset r) {

@@ -8,6 +8,7 @@ import dev.countercheck.submission.Submission;
 import dev.countercheck.submission.SubmissionException;
 import dev.countercheck.submission.SubmissionReader;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
 
 import java.io.PrintWriter;
@@ -17,24 +18,23 @@ import java.util.concurrent.Callable;
 
 /** {@code validate FILE...}: reads and validates submissions, writes nothing. */
 @Command(name = "validate", mixinStandardHelpOptions = true, versionProvider = Version.class,
-        description = "Read and validate submissions, and the ruleset each names, without reviewing them."
+        description = "Read and validate submissions, and the ruleset each would be reviewed with, without reviewing them."
                 + " Exit 0 when all are usable, 2 otherwise, 3 on an internal error.")
 public final class ValidateCommand implements Callable<Integer> {
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "Submission files (YAML or JSON) or folders of them.")
     List<Path> files;
 
-    @picocli.CommandLine.Option(names = "--rulesets-dir", paramLabel = "DIR",
-            description = "The checker's rulesets folder: ids are looked up here before the bundled rulesets.")
-    java.util.Optional<Path> rulesetsDir;
+    @Mixin
+    RulesetOptions rulesetOptions;
 
-    @picocli.CommandLine.Spec
-    picocli.CommandLine.Model.CommandSpec spec;
+    @Mixin
+    Console console;
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = console.out();
+        PrintWriter err = console.err();
         int status = ExitCodes.OK;
         List<Path> inputs;
         try {
@@ -43,11 +43,11 @@ public final class ValidateCommand implements Callable<Integer> {
             err.println("countercheck validate: " + e.getMessage());
             return ExitCodes.UNUSABLE;
         }
-        Rulesets rulesets = new Rulesets(rulesetsDir, err);
+        Rulesets rulesets = rulesetOptions.rulesets(err);
         for (Path file : inputs) {
             try {
                 Submission s = new SubmissionReader(ElementKinds.binders()).read(file);
-                rulesets.of(s, java.util.Optional.empty());
+                rulesets.of(s, rulesetOptions.ruleset);
                 long incomplete = s.elements().stream().filter(e -> e instanceof IncompleteElement).count();
                 out.println(file + ": valid, " + s.elements().size() + " element" + (s.elements().size() == 1 ? "" : "s")
                         + (incomplete > 0 ? " (" + incomplete + " incomplete)" : ""));
@@ -64,7 +64,7 @@ public final class ValidateCommand implements Callable<Integer> {
                 status = ExitCodes.UNUSABLE;
             } catch (RulesetException e) {
                 e.errors().forEach(err::println);
-                err.println(file + ": the ruleset it names cannot be used");
+                err.println(file + ": the ruleset cannot be used");
                 status = ExitCodes.UNUSABLE;
             }
         }

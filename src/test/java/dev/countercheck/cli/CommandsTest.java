@@ -10,10 +10,17 @@ import org.junit.jupiter.api.io.TempDir;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 
+import dev.countercheck.element.ProjectReviewer;
+import dev.countercheck.ruleset.Ruleset;
+import dev.countercheck.ruleset.RulesetLoader;
+
 import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import java.util.stream.Stream;
 
 import static dev.countercheck.cli.SampleSubmissionsTest.run;
@@ -152,6 +159,50 @@ class CommandsTest {
         assertThat(r.exit()).isEqualTo(ExitCodes.UNUSABLE);
         assertThat(r.err()).contains("en1992-mars").contains("cannot be used")
                 .containsPattern("starter\\.yaml:\\d+:\\d+: "); // located at basis.ruleset in the submission
+    }
+
+    @Test
+    void validateTakesTheRulesetTheCommandLineNamesInPlaceOfTheSubmissions(@TempDir Path dir) throws IOException {
+        Path file = dir.resolve("starter.yaml");
+        Files.writeString(file, run("example").out().replace("ruleset: en1992-recommended", "ruleset: en1992-mars"));
+        SampleSubmissionsTest.Run named = run("validate", file.toString(), "--ruleset", "en1992-uk-na");
+        assertThat(named.exit()).as(named.err()).isEqualTo(ExitCodes.OK);
+        SampleSubmissionsTest.Run unknown = run("validate", file.toString(), "--ruleset", "nosuch");
+        assertThat(unknown.exit()).isEqualTo(ExitCodes.UNUSABLE);
+        assertThat(unknown.err()).contains("--ruleset: no ruleset with id 'nosuch'").doesNotContain("en1992-mars");
+    }
+
+    @Test
+    void theCommandLineBuiltForOneSubCommandAnswersAsTheWholeOneDoes() {
+        for (String[] args : List.of(new String[] {"validate", "--help"}, new String[] {"review", "--bogus"},
+                new String[] {"combine"}, new String[] {"--version"}, new String[] {"help", "rules"},
+                new String[] {"revew"})) {
+            StringWriter out = new StringWriter();
+            StringWriter err = new StringWriter();
+            var one = CountercheckCommand.commandLine(args);
+            one.setOut(new PrintWriter(out, true));
+            one.setErr(new PrintWriter(err, true));
+            int exit = one.execute(args);
+            SampleSubmissionsTest.Run all = run(args);
+            assertThat(new SampleSubmissionsTest.Run(exit, out.toString(), err.toString())).as(String.join(" ", args))
+                    .isEqualTo(all);
+        }
+        assertThat(CountercheckCommand.commandLine("validate", "x.yaml").getSubcommands()).containsOnlyKeys("validate");
+        assertThat(CountercheckCommand.commandLine("help", "validate").getSubcommands()).containsKeys("review", "rules");
+    }
+
+    @Test
+    void theDefaultRulesetLoadedAheadIsTheOneLoadedOnTheSpot() throws Exception {
+        Rulesets.loadAhead();
+        StringWriter console = new StringWriter();
+        Ruleset ahead = new Rulesets(Optional.empty(), new PrintWriter(console)).load(Rulesets.DEFAULT);
+        Ruleset direct = new RulesetLoader(Optional.empty(), ProjectReviewer.RULE_VOCABULARY).load(Rulesets.DEFAULT);
+        assertThat(ahead.sha256()).isEqualTo(direct.sha256());
+        assertThat(ahead.files()).isEqualTo(direct.files());
+        assertThat(ahead.checks().keySet()).isEqualTo(direct.checks().keySet());
+        assertThat(console.toString()).isEmpty();
+        assertThat(CountercheckCommand.appliesRuleset(ValidateCommand.class)).isTrue();
+        assertThat(CountercheckCommand.appliesRuleset(CompareCommand.class)).isFalse();
     }
 
     @Test
