@@ -26,7 +26,7 @@ mkdir "%WORK%" >nul 2>&1 || exit /b 0
 rem Reviewed twice, the classes listed in the second run: a review usually replaces the reports of the one
 rem before, which it first reads to recognise them as its own. Its exit status does not matter here.
 "%JAVA%" %OPTS% -jar "%JAR%" review "%WORK%\example.yaml" --out "%WORK%" --date 2026-01-01 >nul 2>&1
-"%JAVA%" %OPTS% "-XX:DumpLoadedClassList=%WORK%\classes.lst" -jar "%JAR%" review "%WORK%\example.yaml" --out "%WORK%" --date 2026-01-01 >nul 2>&1
+"%JAVA%" %OPTS% "-XX:DumpLoadedClassList=%WORK%\classes.lst" -jar "%JAR%" review "%WORK%\example.yaml" --out "%WORK%" --date 2026-01-01 --pdf >nul 2>&1
 if exist "%WORK%\classes.lst" "%JAVA%" %OPTS% -Xshare:dump "-XX:SharedClassListFile=%WORK%\classes.lst" "-XX:SharedArchiveFile=%WORK%\countercheck.jsa" -cp "%JAR%" >nul 2>&1
 if exist "%WORK%\countercheck.jsa" move /y "%WORK%\countercheck.jsa" "%JSA%" >nul 2>&1
 :archived
