@@ -4,6 +4,7 @@ import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import org.yaml.snakeyaml.LoaderOptions;
 import dev.countercheck.cli.CountercheckCommand;
 import picocli.CommandLine;
 
@@ -32,10 +33,17 @@ import java.util.stream.Stream;
  */
 public final class ProjectBenchmark {
 
-    private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory());
+    /** Reads a document as large as the tool's reader accepts (SnakeYAML's default stops at 3 M code points). */
+    private static final ObjectMapper YAML = new ObjectMapper(YAMLFactory.builder().loaderOptions(largeDocuments()).build());
     private static final ObjectMapper JSON = new ObjectMapper();
 
     private ProjectBenchmark() {
+    }
+
+    private static LoaderOptions largeDocuments() {
+        LoaderOptions options = new LoaderOptions();
+        options.setCodePointLimit(Integer.MAX_VALUE);
+        return options;
     }
 
     public static void main(String[] args) throws Exception {
