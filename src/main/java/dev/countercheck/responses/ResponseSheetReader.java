@@ -28,8 +28,13 @@ import java.util.Optional;
  */
 public final class ResponseSheetReader {
 
-    /** A response sheet is a short table; anything larger is refused unread. */
-    private static final long MAX_BYTES = 8L * 1024 * 1024;
+    /**
+     * The largest sheet read; anything larger is refused unread. The sheet the tool writes for a project of
+     * 20,000 elements (the most a submission may hold) with every check failing holds about 100,000 findings,
+     * some 20 MB of CSV, and must still be read back (a review recognises its own unanswered sheet before
+     * replacing it); the same bound as a review result's.
+     */
+    static final long MAX_BYTES = 64L * 1024 * 1024;
 
     private ResponseSheetReader() {
     }

@@ -91,6 +91,25 @@ class ResponseSheetRoundTripTest {
         assertAnswered(ResponseSheetReader.read(sheet), review);
     }
 
+    /**
+     * The unanswered sheet of the largest project a submission may hold (20,000 elements, about five
+     * findings each) is read back: a review recognises it as its own before replacing it. It was once
+     * refused for its size, and a second review of such a project into the same folder stopped.
+     */
+    @Test
+    void theSheetOfTheLargestProjectIsReadBack(@TempDir Path dir) throws Exception {
+        StringBuilder sheet = new StringBuilder(Csv.line(ResponseSheet.COLUMNS));
+        for (int i = 0; i < 100_000; i++) {
+            sheet.append(Csv.line(List.of("E-" + i + "/tie-x/capacity", "E-" + i, "critical",
+                    "Bottom x-bars give 1885 mm2, less than the 2224 mm2 the tie needs, with a message of a usual length.",
+                    "EN 1992-1-1 6.5, 9.8.1(2), (3)", "", "")));
+        }
+        Path file = Files.writeString(dir.resolve("large.responses.csv"), sheet);
+        assertThat(Files.size(file)).isGreaterThan(16L * 1024 * 1024).isLessThan(ResponseSheetReader.MAX_BYTES);
+
+        assertThat(ResponseSheetReader.read(file)).isEmpty();
+    }
+
     @Test
     void theWorkbookDoesNotDependOnTheClock() throws Exception {
         byte[] first = ResponseSheet.xlsx(review());
