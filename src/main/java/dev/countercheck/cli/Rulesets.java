@@ -60,12 +60,7 @@ final class Rulesets {
 
     /** A ruleset named on the command line: an id or a path. */
     Ruleset load(String reference) throws RulesetException {
-        Ruleset r = loaded.get(reference);
-        if (r != null) {
-            return r;
-        }
-        Optional<Ruleset> early = loadedAhead(reference);
-        return announced(reference, early.isPresent() ? early.get() : loader.load(reference));
+        return once(reference, () -> loader.load(reference));
     }
 
     /**
@@ -80,12 +75,23 @@ final class Rulesets {
             return load(DEFAULT);
         }
         String id = submission.ruleset().get();
-        Ruleset r = loaded.get(id);
+        return once(id, () -> loader.loadId(id, submission.rulesetAt().get()));
+    }
+
+    /** How a ruleset is loaded when it is neither loaded already nor loaded ahead. */
+    @FunctionalInterface
+    private interface Load {
+        Ruleset load() throws RulesetException;
+    }
+
+    /** The ruleset {@code reference}: as loaded before in this run, else as loaded ahead, else by {@code load}. */
+    private Ruleset once(String reference, Load load) throws RulesetException {
+        Ruleset r = loaded.get(reference);
         if (r != null) {
             return r;
         }
-        Optional<Ruleset> early = loadedAhead(id);
-        return announced(id, early.isPresent() ? early.get() : loader.loadId(id, submission.rulesetAt().get()));
+        Optional<Ruleset> early = loadedAhead(reference);
+        return announced(reference, early.isPresent() ? early.get() : load.load());
     }
 
     /** The default ruleset loaded ahead, when it is {@code id}'s, this command has no rulesets folder and it loaded. */
