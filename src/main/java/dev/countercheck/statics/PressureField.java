@@ -122,7 +122,7 @@ public final class PressureField {
     }
 
     private double forceOver(ConvexPolygon part) {
-        return part.integrate(this::plane) / 1e6;
+        return part.integratePlane(q0, qx, qy) / 1e6;
     }
 
     private Resultant resultant(ConvexPolygon part, String where, String axis, double at, double s, double ux,

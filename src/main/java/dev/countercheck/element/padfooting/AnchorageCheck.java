@@ -56,7 +56,7 @@ final class AnchorageCheck {
         double half = ctx.columnHalf(axis);
         Side worst = null;
         for (ActionCase a : ctx.cases(ActionCase.Kind.ULS)) {
-            Ground.Contact contact = Ground.solve(ctx.pad, ctx.resultant(a, 0)).orElseThrow();
+            Ground.Contact contact = ctx.contact(ctx.resultant(a, 0)).orElseThrow();
             for (int sign : new int[] {1, -1}) {
                 double line = sign * (axis.length(ctx.pad) / 2 - x);
                 PressureField.Resultant strip = Ground.beyond(contact, axis, line, sign);

@@ -34,7 +34,7 @@ final class BearingCheck {
         Ground.Contact least = null;
         for (ActionCase a : cases) {
             Resultant r = ctx.resultant(a, 1.0);
-            Optional<Ground.Contact> contact = Ground.solve(ctx.pad, r);
+            Optional<Ground.Contact> contact = ctx.contact(r);
             if (contact.isEmpty()) {
                 b.trace(Step.of("e", "√(e,x² + e,y²), resultant on the base", "√(" + PadContext.squared(r.exMm()) + " + "
                         + PadContext.squared(r.eyMm()) + ")", Math.hypot(r.exMm(), r.eyMm()), "mm",
@@ -55,7 +55,7 @@ final class BearingCheck {
         b.trace(Step.of("V", "N + W (characteristic)", worst.load().vTerms(), worst.load().vKn(), "kN",
                 "EN 1990 6.5.3, Exp. (6.14b)"));
         Step qMax = b.value("q_max", worst.solved().qMax());
-        double qMinValue = cases.stream().map(a -> Ground.solve(ctx.pad, ctx.resultant(a, 1.0)).orElseThrow())
+        double qMinValue = cases.stream().map(a -> ctx.contact(ctx.resultant(a, 1.0)).orElseThrow())
                 .mapToDouble(Ground.Contact::qMinKpa).min().orElseThrow();
         b.value("q_min", Step.of("q,min", "least pressure over the sls-characteristic cases", cases.size()
                 + " cases", qMinValue, "kPa", "rigid footing, linear contact pressure without tension (common practice)"));

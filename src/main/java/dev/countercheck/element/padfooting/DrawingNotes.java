@@ -28,7 +28,7 @@ final class DrawingNotes {
             if (ctx.resultant(a, 0).vKn() <= 0) {
                 continue;
             }
-            Optional<Ground.Contact> c = Ground.solve(ctx.pad, ctx.resultant(a, 0));
+            Optional<Ground.Contact> c = ctx.contact(ctx.resultant(a, 0));
             if (c.isPresent() && (worst == null || c.get().qMaxKpa() > worst.qMaxKpa())) {
                 worst = c.get();
             }

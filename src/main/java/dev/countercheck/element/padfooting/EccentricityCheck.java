@@ -56,7 +56,7 @@ final class EccentricityCheck {
                 largest = Math.max(sx, sy);
                 governing = a.name();
             }
-            Optional<Ground.Contact> c = Ground.solve(ctx.pad, r);
+            Optional<Ground.Contact> c = ctx.contact(r);
             if (c.isEmpty()) {
                 beyondEdge = beyondEdge == null ? a.name() : beyondEdge;
                 continue;

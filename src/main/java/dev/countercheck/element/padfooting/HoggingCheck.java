@@ -45,7 +45,7 @@ final class HoggingCheck {
         for (ActionCase a : ctx.cases(ActionCase.Kind.ULS)) {
             Resultant r = ctx.resultant(a, gamma);
             double load = PadContext.weightFactor(a, gamma) * unfactored;
-            Optional<Ground.Contact> contact = Ground.solve(ctx.pad, r);
+            Optional<Ground.Contact> contact = ctx.contact(r);
             if (contact.isEmpty() || contact.get().contactFraction() >= 1) {
                 continue;
             }

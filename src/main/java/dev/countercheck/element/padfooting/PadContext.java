@@ -12,12 +12,18 @@ import dev.countercheck.submission.ActionCase;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.PadFooting;
 
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
  * What every pad-footing check needs, computed once: material strengths, the section, the footing's
- * own weight and that of the soil over it, and the resultant of an action case on the base.
+ * own weight and that of the soil over it, and the resultant of an action case on the base and the ground
+ * pressure under it (each case's, kept for the checks that ask for it again: one element's checks run in turn on
+ * one thread).
  */
 final class PadContext {
 
@@ -66,6 +72,13 @@ final class PadContext {
     final Step fyd;
     final Step footingWeight;
     final Step overburdenWeight;
+    private final Map<ActionCase.Kind, List<ActionCase>> casesByKind = new EnumMap<>(ActionCase.Kind.class);
+    private final Map<Weighted, Resultant> resultants = new HashMap<>();
+    private final Map<Resultant, Optional<Ground.Contact>> contacts = new IdentityHashMap<>();
+
+    /** A case with the factor on the weights, the key of a resultant. */
+    private record Weighted(ActionCase action, double factor) {
+    }
 
     PadContext(PadFooting pad, Ruleset rules) {
         this.pad = pad;
@@ -95,7 +108,7 @@ final class PadContext {
 
     /** The cases of {@code kind}, in submission order. */
     List<ActionCase> cases(ActionCase.Kind kind) {
-        return pad.actions().stream().filter(a -> a.kind() == kind).toList();
+        return casesByKind.computeIfAbsent(kind, k -> pad.actions().stream().filter(a -> a.kind() == k).toList());
     }
 
     /**
@@ -105,9 +118,18 @@ final class PadContext {
      * {@code gammaG} is 0 (the column actions alone).
      */
     Resultant resultant(ActionCase a, double gammaG) {
-        double weights = weightFactor(a, gammaG) * (footingWeight.value() + overburdenWeight.value());
-        return new Resultant(a, BaseActions.of(a.name(), a.nKn(), a.mxKnm(), a.myKnm(), a.hxKn(), a.hyKn(),
-                pad.depthMm(), PlanGeometry.point(pad.column().position()), weights));
+        return resultants.computeIfAbsent(new Weighted(a, weightFactor(a, gammaG)), w -> new Resultant(a,
+                BaseActions.of(a.name(), a.nKn(), a.mxKnm(), a.myKnm(), a.hxKn(), a.hyKn(), pad.depthMm(),
+                        PlanGeometry.point(pad.column().position()),
+                        w.factor() * (footingWeight.value() + overburdenWeight.value()))));
+    }
+
+    /**
+     * The ground pressure under {@code r} (a resultant of this context), or empty when it leaves the footing
+     * ({@link Ground#solve}, solved once per resultant).
+     */
+    Optional<Ground.Contact> contact(Resultant r) {
+        return contacts.computeIfAbsent(r, k -> Ground.solve(pad, k));
     }
 
     /**

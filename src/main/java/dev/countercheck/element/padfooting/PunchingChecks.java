@@ -71,7 +71,7 @@ final class PunchingChecks {
         int count = (int) Math.ceil(2 / step.value() - 1e-9);
         List<ActionCase> cases = ctx.cases(ActionCase.Kind.ULS);
         List<PressureField> fields = cases.stream()
-                .map(c -> Ground.solve(ctx.pad, ctx.resultant(c, 0)).orElseThrow().field()).toList();
+                .map(c -> ctx.contact(ctx.resultant(c, 0)).orElseThrow().field()).toList();
         Perimeter governing = PerimeterSearch.governing(count, new Perimeters(ctx, outline, cases, fields, d.value(),
                 count, stress.value(), vMin.value()));
         if (governing == null) {

@@ -115,7 +115,7 @@ final class SaggingChecks {
     static Optional<String> unbalanced(PadContext ctx) {
         for (ActionCase a : ctx.cases(ActionCase.Kind.ULS)) {
             Resultant r = ctx.resultant(a, 0);
-            if (r.vKn() <= 0 || Ground.solve(ctx.pad, r).isEmpty()) {
+            if (r.vKn() <= 0 || ctx.contact(r).isEmpty()) {
                 return Optional.of("under " + a.name() + " the column actions alone leave the footing (no"
                         + " equilibrium without its own weight): the pressure for the structural checks is undefined");
             }
@@ -130,7 +130,7 @@ final class SaggingChecks {
     private static Part worst(PadContext ctx, Axis axis, double offset, boolean byMoment) {
         Part worst = null;
         for (ActionCase a : ctx.cases(ActionCase.Kind.ULS)) {
-            Ground.Contact c = Ground.solve(ctx.pad, ctx.resultant(a, 0)).orElseThrow();
+            Ground.Contact c = ctx.contact(ctx.resultant(a, 0)).orElseThrow();
             for (int sign : new int[] {1, -1}) {
                 double line = ctx.face(axis, sign) + sign * offset;
                 PressureField.Resultant part = Ground.beyond(c, axis, line, sign);
