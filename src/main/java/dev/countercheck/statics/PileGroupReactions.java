@@ -67,53 +67,82 @@ public final class PileGroupReactions {
      */
     public static Distribution solve(List<PlanPoint> piles, List<Load> loads, double mxKnm, double myKnm,
                               Optional<double[]> line) {
-        int n = piles.size();
-        double xBar = piles.stream().mapToDouble(PlanPoint::xMm).average().orElse(0);
-        double yBar = piles.stream().mapToDouble(PlanPoint::yMm).average().orElse(0);
-        double v = 0;
-        double mx = mxKnm;
-        double my = myKnm;
-        for (Load load : loads) {
-            v += load.forceKn();
-            mx += load.forceKn() * (load.at().yMm() - yBar) / 1000.0;
-            my += load.forceKn() * (load.at().xMm() - xBar) / 1000.0;
-        }
-        double[] p = new double[n];
-        double[] dx = new double[n];
-        double[] dy = new double[n];
-        for (int i = 0; i < n; i++) {
-            dx[i] = piles.get(i).xMm() - xBar;
-            dy[i] = piles.get(i).yMm() - yBar;
-        }
-        Spread g = Spread.of(piles, xBar, yBar);
-        if (n == 1) {
-            p[0] = v;
-            return new Distribution(v, mx, my, p, Math.hypot(mx, my), g.plane(0, 0, dx, dy, true));
-        }
-        if (line.isPresent()) {
-            double ux = line.get()[0];
-            double uy = line.get()[1];
-            double inLine = (my * ux + mx * uy) * 1000.0;
-            double ss = 0;
-            double[] s = new double[n];
+        return group(piles).solve(loads, mxKnm, myKnm, line);
+    }
+
+    /** The piles at {@code piles} about their centroid, prepared once for the loads of several cases. */
+    public static Group group(List<PlanPoint> piles) {
+        return new Group(piles);
+    }
+
+    /**
+     * A pile group's positions, their centroid, offsets and second moments, which do not depend on the loads:
+     * formed once for every case (and, off position, for both factors on the cap's own weight).
+     */
+    public static final class Group {
+
+        private final List<PlanPoint> piles;
+        private final double xBar;
+        private final double yBar;
+        private final double[] dx;
+        private final double[] dy;
+        private final Spread g;
+
+        private Group(List<PlanPoint> piles) {
+            this.piles = List.copyOf(piles);
+            int n = piles.size();
+            xBar = piles.stream().mapToDouble(PlanPoint::xMm).average().orElse(0);
+            yBar = piles.stream().mapToDouble(PlanPoint::yMm).average().orElse(0);
+            dx = new double[n];
+            dy = new double[n];
             for (int i = 0; i < n; i++) {
-                s[i] = (piles.get(i).xMm() - xBar) * ux + (piles.get(i).yMm() - yBar) * uy;
-                ss += s[i] * s[i];
+                dx[i] = piles.get(i).xMm() - xBar;
+                dy[i] = piles.get(i).yMm() - yBar;
             }
+            g = Spread.of(piles, xBar, yBar);
+        }
+
+        /** As {@link PileGroupReactions#solve(List, List, double, double, Optional)} for these piles. */
+        public Distribution solve(List<Load> loads, double mxKnm, double myKnm, Optional<double[]> line) {
+            int n = piles.size();
+            double v = 0;
+            double mx = mxKnm;
+            double my = myKnm;
+            for (Load load : loads) {
+                v += load.forceKn();
+                mx += load.forceKn() * (load.at().yMm() - yBar) / 1000.0;
+                my += load.forceKn() * (load.at().xMm() - xBar) / 1000.0;
+            }
+            double[] p = new double[n];
+            if (n == 1) {
+                p[0] = v;
+                return new Distribution(v, mx, my, p, Math.hypot(mx, my), g.plane(0, 0, dx, dy, true));
+            }
+            if (line.isPresent()) {
+                double ux = line.get()[0];
+                double uy = line.get()[1];
+                double inLine = (my * ux + mx * uy) * 1000.0;
+                double ss = 0;
+                double[] s = new double[n];
+                for (int i = 0; i < n; i++) {
+                    s[i] = dx[i] * ux + dy[i] * uy;
+                    ss += s[i] * s[i];
+                }
+                for (int i = 0; i < n; i++) {
+                    p[i] = v / n + inLine * s[i] / ss;
+                }
+                double slope = inLine / ss * 1000.0;
+                return new Distribution(v, mx, my, p, Math.abs(mx * ux - my * uy),
+                        g.plane(slope * ux, slope * uy, dx, dy, true));
+            }
+            double det = g.sxx * g.syy - g.sxy * g.sxy;
+            double a = (my * 1000.0 * g.syy - mx * 1000.0 * g.sxy) / det;
+            double b = (mx * 1000.0 * g.sxx - my * 1000.0 * g.sxy) / det;
             for (int i = 0; i < n; i++) {
-                p[i] = v / n + inLine * s[i] / ss;
+                p[i] = v / n + a * dx[i] + b * dy[i];
             }
-            double slope = inLine / ss * 1000.0;
-            return new Distribution(v, mx, my, p, Math.abs(mx * ux - my * uy),
-                    g.plane(slope * ux, slope * uy, dx, dy, true));
+            return new Distribution(v, mx, my, p, 0.0, g.plane(a * 1000.0, b * 1000.0, dx, dy, false));
         }
-        double det = g.sxx * g.syy - g.sxy * g.sxy;
-        double a = (my * 1000.0 * g.syy - mx * 1000.0 * g.sxy) / det;
-        double b = (mx * 1000.0 * g.sxx - my * 1000.0 * g.sxy) / det;
-        for (int i = 0; i < n; i++) {
-            p[i] = v / n + a * (piles.get(i).xMm() - xBar) + b * (piles.get(i).yMm() - yBar);
-        }
-        return new Distribution(v, mx, my, p, 0.0, g.plane(a * 1000.0, b * 1000.0, dx, dy, false));
     }
 
     /** The unit direction of a group of two or more piles on one line; empty when they span an area. */

@@ -4,7 +4,10 @@ import dev.countercheck.statics.PileGroupReactions.Distribution;
 import dev.countercheck.statics.PileGroupReactions.Load;
 import org.junit.jupiter.api.Test;
 
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
+import java.util.Random;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
@@ -97,5 +100,89 @@ class PileGroupReactionsTest {
         var p1 = trace.get(5);
         assertThat(p1.substituted()).isEqualTo("4000/4 + 0·(-0.6) + 166.7·(-0.6)");
         assertThat(p1.value()).isCloseTo(900, within(1e-9));
+    }
+
+    /**
+     * A group prepared once and solved for several loads gives, to the bit, the reactions of the formula solved
+     * afresh for each (the oracle below, written out here): random groups in plan and on a line, random loads.
+     * Invented sizes.
+     */
+    @Test
+    void aGroupPreparedOnceSolvesEachLoadAsTheFormulaDoesAfresh() {
+        Random random = new Random(1403);
+        List<String> mismatches = new ArrayList<>();
+        for (int trial = 0; trial < 2000; trial++) {
+            int n = 1 + random.nextInt(9);
+            boolean onLine = random.nextInt(3) == 0;
+            List<PlanPoint> piles = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                double t = random.nextDouble() * 4000 - 2000;
+                piles.add(onLine ? new PlanPoint(t, 0.3 * t + 75) : new PlanPoint(t, random.nextDouble() * 4000 - 2000));
+            }
+            Optional<double[]> line = PileGroupReactions.lineOf(piles);
+            PileGroupReactions.Group group = PileGroupReactions.group(piles);
+            for (int k = 0; k < 2; k++) {
+                List<Load> loads = List.of(column(random.nextDouble() * 5000, random.nextDouble() * 400 - 200, 0),
+                        new Load("W", random.nextDouble() * 300, new PlanPoint(0, 0)));
+                double mx = random.nextDouble() * 800 - 400;
+                double my = random.nextDouble() * 800 - 400;
+                Distribution fast = group.solve(loads, mx, my, line);
+                double[] oracle = afresh(piles, loads, mx, my, line);
+                for (int i = 0; i < n; i++) {
+                    if (Double.doubleToRawLongBits(fast.reactionsKn()[i]) != Double.doubleToRawLongBits(oracle[i])) {
+                        mismatches.add("trial " + trial + " pile " + i + ": " + fast.reactionsKn()[i] + " vs " + oracle[i]);
+                    }
+                }
+            }
+        }
+        assertThat(mismatches).isEmpty();
+    }
+
+    /** P_i = V/n + a·dx_i + b·dy_i (on a line: the moment in the line over Σs²), every sum formed afresh. */
+    private static double[] afresh(List<PlanPoint> piles, List<Load> loads, double mxKnm, double myKnm,
+                                   Optional<double[]> line) {
+        int n = piles.size();
+        double xBar = piles.stream().mapToDouble(PlanPoint::xMm).average().orElse(0);
+        double yBar = piles.stream().mapToDouble(PlanPoint::yMm).average().orElse(0);
+        double v = 0;
+        double mx = mxKnm;
+        double my = myKnm;
+        for (Load load : loads) {
+            v += load.forceKn();
+            mx += load.forceKn() * (load.at().yMm() - yBar) / 1000.0;
+            my += load.forceKn() * (load.at().xMm() - xBar) / 1000.0;
+        }
+        double[] p = new double[n];
+        if (n == 1) {
+            p[0] = v;
+            return p;
+        }
+        if (line.isPresent()) {
+            double ss = 0;
+            double[] s = new double[n];
+            for (int i = 0; i < n; i++) {
+                s[i] = (piles.get(i).xMm() - xBar) * line.get()[0] + (piles.get(i).yMm() - yBar) * line.get()[1];
+                ss += s[i] * s[i];
+            }
+            for (int i = 0; i < n; i++) {
+                p[i] = v / n + (my * line.get()[0] + mx * line.get()[1]) * 1000.0 * s[i] / ss;
+            }
+            return p;
+        }
+        double sxx = 0;
+        double syy = 0;
+        double sxy = 0;
+        for (PlanPoint pile : piles) {
+            sxx += (pile.xMm() - xBar) * (pile.xMm() - xBar);
+            syy += (pile.yMm() - yBar) * (pile.yMm() - yBar);
+            sxy += (pile.xMm() - xBar) * (pile.yMm() - yBar);
+        }
+        double det = sxx * syy - sxy * sxy;
+        double a = (my * 1000.0 * syy - mx * 1000.0 * sxy) / det;
+        double b = (mx * 1000.0 * sxx - my * 1000.0 * sxy) / det;
+        for (int i = 0; i < n; i++) {
+            p[i] = v / n + a * (piles.get(i).xMm() - xBar) + b * (piles.get(i).yMm() - yBar);
+        }
+        return p;
     }
 }

@@ -1,11 +1,14 @@
 package dev.countercheck.element.pilecap;
 
+import dev.countercheck.element.PlanGeometry;
 import dev.countercheck.element.pilecap.PileCapContext.UlsCase;
 import dev.countercheck.eurocode.Num;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckBuilder;
 import dev.countercheck.review.CheckOutcome;
 import dev.countercheck.review.FindingKind;
+import dev.countercheck.statics.PileGroupReactions;
+import dev.countercheck.statics.PlanPoint;
 import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
@@ -41,17 +44,24 @@ final class DeviationCheck {
         double least = Double.POSITIVE_INFINITY;
         Where leastAt = null;
         double nominalMax = Double.NEGATIVE_INFINITY;
+        double[] offX = new double[8];
+        double[] offY = new double[8];
+        for (int dir = 0; dir < 8; dir++) {
+            double angle = Math.toRadians(45.0 * dir);
+            offX[dir] = delta.value() * Math.cos(angle);
+            offY[dir] = delta.value() * Math.sin(angle);
+        }
+        List<PlanPoint> designed = PlanGeometry.points(nominal);
         for (UlsCase u : ctx.uls) {
             nominalMax = Math.max(nominalMax, u.withSelfWeight().max());
             for (int moved = 0; moved < nominal.size(); moved++) {
                 for (int dir = 0; dir < 8; dir++) {
-                    double angle = Math.toRadians(45.0 * dir);
-                    List<Point> shifted = new ArrayList<>(nominal);
+                    List<PlanPoint> shifted = new ArrayList<>(designed);
                     Point p = nominal.get(moved);
-                    shifted.set(moved, new Point(p.xMm() + delta.value() * Math.cos(angle),
-                            p.yMm() + delta.value() * Math.sin(angle)));
-                    double[] r = ctx.reactions(shifted, u.action(), ctx.gammaSup(u.action())).reactionsKn();
-                    double[] rInf = ctx.reactions(shifted, u.action(), ctx.gammaInf(u.action())).reactionsKn();
+                    shifted.set(moved, new PlanPoint(p.xMm() + offX[dir], p.yMm() + offY[dir]));
+                    PileGroupReactions.Group group = PileGroupReactions.group(shifted);
+                    double[] r = ctx.reactions(group, u.action(), ctx.gammaSup(u.action())).reactionsKn();
+                    double[] rInf = ctx.reactions(group, u.action(), ctx.gammaInf(u.action())).reactionsKn();
                     for (int i = 0; i < r.length; i++) {
                         if (r[i] > worst) {
                             worst = r[i];

@@ -14,7 +14,6 @@ import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.submission.ActionCase;
 import dev.countercheck.submission.Column;
 import dev.countercheck.submission.PileCap;
-import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -51,11 +50,15 @@ final class PileCapContext {
     final Step fyd;
     /** The line the group lies on as designed (empty for a group in plan), found once for every solve. */
     private final Optional<double[]> designLine;
+    /** The piles at their positions as designed, prepared once for every case. */
+    private final PileGroupReactions.Group designGroup;
 
     PileCapContext(PileCap cap, Ruleset rules) {
         this.cap = cap;
         this.rules = rules;
-        this.designLine = PileGroupReactions.lineOf(PlanGeometry.points(cap.piles().positions()));
+        List<PlanPoint> designed = PlanGeometry.points(cap.piles().positions());
+        this.designLine = PileGroupReactions.lineOf(designed);
+        this.designGroup = PileGroupReactions.group(designed);
         this.section = Section.of(cap.reinforcement(), cap.depthMm());
         double fckMpa = cap.materials().fckMpa();
         this.fck = Step.of("fck", "characteristic cylinder strength",
@@ -75,8 +78,8 @@ final class PileCapContext {
         List<UlsCase> cases = new ArrayList<>();
         for (ActionCase a : cap.actions()) {
             if (a.kind() == ActionCase.Kind.ULS) {
-                cases.add(new UlsCase(a, reactions(cap.piles().positions(), a, gammaSup(a)), reactions(a, false),
-                        reactions(cap.piles().positions(), a, gammaInf(a))));
+                cases.add(new UlsCase(a, reactions(designGroup, a, gammaSup(a)), reactions(a, false),
+                        reactions(designGroup, a, gammaInf(a))));
             }
         }
         this.uls = List.copyOf(cases);
@@ -117,30 +120,22 @@ final class PileCapContext {
     }
 
     Distribution reactions(ActionCase a, boolean withSelfWeight) {
-        return reactions(cap.piles().positions(), a, withSelfWeight);
+        return reactions(designGroup, a, withSelfWeight ? gammaGSup() : 0.0);
     }
 
     /**
-     * Reactions of piles at {@code piles} (which may be moved off position) under action case {@code a};
+     * Reactions of the piles of {@code group} (which may be moved off position) under action case {@code a} with
+     * the cap's own weight factored by {@code gammaG} (0: without it; ignored when the actions already include it);
      * a group that lies on one line as designed is analysed on that line.
      */
-    Distribution reactions(List<Point> piles, ActionCase a, boolean withSelfWeight) {
-        return reactions(piles, a, withSelfWeight ? gammaGSup() : 0.0);
-    }
-
-    /**
-     * Reactions of piles at {@code piles} under action case {@code a} with the cap's own weight factored
-     * by {@code gammaG} (0: without it; ignored when the actions already include it).
-     */
-    Distribution reactions(List<Point> piles, ActionCase a, double gammaG) {
+    Distribution reactions(PileGroupReactions.Group group, ActionCase a, double gammaG) {
         List<Load> loads = new ArrayList<>();
         loads.add(new Load("N", a.nKn(), PlanGeometry.point(cap.column().position())));
         if (gammaG > 0 && addsSelfWeight()) {
             loads.add(new Load("γG·Wcap", factoredSelfWeightKn(gammaG), new PlanPoint(0, 0)));
         }
         double h = cap.depthMm() / 1000.0;
-        return PileGroupReactions.solve(PlanGeometry.points(piles), loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h,
-                designLine);
+        return group.solve(loads, a.mxKnm() + a.hyKn() * h, a.myKnm() + a.hxKn() * h, designLine);
     }
 
     /**
