@@ -3,7 +3,9 @@ package dev.countercheck.statics;
 import dev.countercheck.eurocode.Punching;
 import dev.countercheck.eurocode.Step;
 
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * A control perimeter at distance a from the column face, with rounded corners (EN 1992-1-1
@@ -165,8 +167,9 @@ public final class ControlPerimeter {
      * turns with the cap; the region inside the perimeter is convex, so each strip meets it once. A head
      * clear of the perimeter (its centre farther than a + D/2 from the column) has none of its area
      * inside, and a head clear within it (nearer than a − D/2) all of it: the strips are summed only for a
-     * head the perimeter crosses. What does not depend on a (the strips' chords, their distances from the
-     * column, the head's area by strips) is computed once per head.
+     * head the perimeter crosses. What does not depend on a is computed once per head; what depends only on
+     * the head's x (the chords of the strips across x, their distances from the column, the head's area by
+     * strips), once per x, and so for y: the heads of a row or a column of piles share it.
      */
     public static final class Heads {
 
@@ -176,6 +179,9 @@ public final class ControlPerimeter {
         private final double[] distances;
         /** Each head's strips across x and across y, made when a perimeter first crosses the head. */
         private final Strips[][] strips;
+        /** The strips across x of the heads at one x (by its bits), and across y of those at one y. */
+        private final Map<Long, Across> acrossX = new HashMap<>();
+        private final Map<Long, Across> acrossY = new HashMap<>();
 
         private Heads(ColumnOutline c, List<PlanPoint> centres, double diameterMm) {
             this.column = c;
@@ -199,45 +205,41 @@ public final class ControlPerimeter {
             }
             if (strips[i] == null) {
                 PlanPoint p = centres.get(i);
-                strips[i] = new Strips[] {new Strips(column, p, diameterMm),
-                    new Strips(column.turned(), new PlanPoint(p.yMm(), p.xMm()), diameterMm)};
+                ColumnOutline turned = column.turned();
+                Across x = acrossX.computeIfAbsent(Double.doubleToLongBits(p.xMm()),
+                        k -> new Across(column, p.xMm(), diameterMm));
+                Across y = acrossY.computeIfAbsent(Double.doubleToLongBits(p.yMm()),
+                        k -> new Across(turned, p.yMm(), diameterMm));
+                strips[i] = new Strips[] {new Strips(column, x, p.yMm()), new Strips(turned, y, p.xMm())};
             }
             return (strips[i][0].shareInside(aMm) + strips[i][1].shareInside(aMm)) / 2;
         }
     }
 
     /**
-     * The strips of one head across x (a head across y is the same with x and y swapped, the column
-     * turned): each strip's lower and upper edge on the head, its distance from the column along x
-     * (beyond the column's side, or from a circular column's centre), and the head's area by strips.
+     * What the strips across x of a head share with every head at the same x (across y: the same with x and y
+     * swapped, the column turned): each strip's half chord, its distance from the column along x (beyond the
+     * column's side, or from a circular column's centre), the strip nearest the column and the head's area by
+     * strips.
      */
-    private static final class Strips {
+    private static final class Across {
 
-        private final boolean circular;
-        private final double columnY;
-        private final double columnHalfY;
-        private final double columnRadius;
-        private final double[] bottoms = new double[STRIPS];
-        private final double[] tops = new double[STRIPS];
+        private final double[] chords = new double[STRIPS];
         private final double[] beyond = new double[STRIPS];
         /** The strip nearest the column: {@code beyond} falls to it and rises after it. */
         private final int nearest;
         private final double whole;
 
-        Strips(ColumnOutline c, PlanPoint centre, double diameterMm) {
-            circular = c.circular();
-            columnY = c.centre().yMm();
-            columnHalfY = c.cyMm() / 2;
-            columnRadius = c.cxMm() / 2;
+        Across(ColumnOutline c, double centreX, double diameterMm) {
+            boolean circular = c.circular();
             double r = diameterMm / 2;
             double width = diameterMm / STRIPS;
             double sum = 0;
             for (int i = 0; i < STRIPS; i++) {
-                double x = centre.xMm() - r + (i + 0.5) * width;
-                double chord = Math.sqrt(Math.max(0, r * r - sq(x - centre.xMm())));
+                double x = centreX - r + (i + 0.5) * width;
+                double chord = Math.sqrt(Math.max(0, r * r - sq(x - centreX)));
                 sum += 2 * chord;
-                bottoms[i] = centre.yMm() - chord;
-                tops[i] = centre.yMm() + chord;
+                chords[i] = chord;
                 double dx = Math.abs(x - c.centre().xMm());
                 beyond[i] = circular ? dx : Math.max(0, dx - c.cxMm() / 2);
             }
@@ -249,6 +251,36 @@ public final class ControlPerimeter {
                 }
             }
             nearest = m;
+        }
+    }
+
+    /**
+     * The strips of one head across x (a head across y is the same with x and y swapped, the column
+     * turned): what it shares with the heads at its x, and its centre's y (a strip's lower and upper edge
+     * on the head lie its half chord below and above it).
+     */
+    private static final class Strips {
+
+        private final boolean circular;
+        private final double columnY;
+        private final double columnHalfY;
+        private final double columnRadius;
+        private final double centreY;
+        private final double[] chords;
+        private final double[] beyond;
+        private final int nearest;
+        private final double whole;
+
+        Strips(ColumnOutline c, Across across, double centreY) {
+            circular = c.circular();
+            columnY = c.centre().yMm();
+            columnHalfY = c.cyMm() / 2;
+            columnRadius = c.cxMm() / 2;
+            this.centreY = centreY;
+            chords = across.chords;
+            beyond = across.beyond;
+            nearest = across.nearest;
+            whole = across.whole;
         }
 
         /**
@@ -268,8 +300,8 @@ public final class ControlPerimeter {
             for (int i = first; i <= last; i++) {
                 double half = halfHeightInside(aMm, radius, beyond[i]);
                 if (half >= 0) {
-                    double lo = Math.max(bottoms[i], columnY - half);
-                    double hi = Math.min(tops[i], columnY + half);
+                    double lo = Math.max(centreY - chords[i], columnY - half);
+                    double hi = Math.min(centreY + chords[i], columnY + half);
                     inside += Math.max(0, hi - lo);
                 }
             }

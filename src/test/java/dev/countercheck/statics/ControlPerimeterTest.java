@@ -2,6 +2,7 @@ package dev.countercheck.statics;
 
 import org.junit.jupiter.api.Test;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 
@@ -86,6 +87,47 @@ class ControlPerimeterTest {
             }
             assertThat(ControlPerimeter.headShareInside(c, a, head, diameter)).as("trial %d", trial).isEqualTo(oracle);
         }
+    }
+
+    /**
+     * Heads in rows and columns share what depends only on their x (or y): each head's share is still, to the last
+     * bit, the sum over its own strips (the oracle below). Random grids about random columns, invented sizes.
+     */
+    @Test
+    void headsInARowShareTheirStripsAndKeepTheirOwnShares() {
+        Random random = new Random(1404);
+        List<String> mismatches = new ArrayList<>();
+        for (int trial = 0; trial < 60; trial++) {
+            PlanPoint centre = new PlanPoint(random.nextInt(201) - 100, random.nextInt(201) - 100);
+            ColumnOutline c = random.nextBoolean()
+                    ? ColumnOutline.rectangular(200 + random.nextInt(600), 200 + random.nextInt(600), centre)
+                    : ColumnOutline.circular(200 + random.nextInt(600), centre);
+            double spacing = 900 + random.nextInt(900);
+            double diameter = 300 + random.nextInt(500);
+            List<PlanPoint> heads = new ArrayList<>();
+            for (int i = -1; i <= 1; i++) {
+                for (int j = -1; j <= 1; j++) {
+                    heads.add(new PlanPoint(i * spacing + 0.1 * trial, j * spacing - 0.3 * trial));
+                }
+            }
+            ControlPerimeter.Heads group = ControlPerimeter.heads(c, heads, diameter);
+            for (int k = 0; k < 12; k++) {
+                double a = 1 + random.nextDouble() * 2500;
+                for (int i = 0; i < heads.size(); i++) {
+                    PlanPoint h = heads.get(i);
+                    double clear = 1e-9 * (a + diameter);
+                    double distance = ControlPerimeter.distanceFromColumn(c, h);
+                    double oracle = distance > a + diameter / 2 + clear ? 0 : distance < a - diameter / 2 - clear ? 1
+                            : (everyStrip(c, a, h, diameter)
+                                    + everyStrip(c.turned(), a, new PlanPoint(h.yMm(), h.xMm()), diameter)) / 2;
+                    double share = group.shareInside(i, a);
+                    if (Double.doubleToRawLongBits(share) != Double.doubleToRawLongBits(oracle)) {
+                        mismatches.add("trial " + trial + " head " + i + " a " + a + ": " + share + " vs " + oracle);
+                    }
+                }
+            }
+        }
+        assertThat(mismatches).isEmpty();
     }
 
     /** The share inside by 400 strips across x, each summed in order. */
