@@ -120,17 +120,26 @@ public final class Shear {
      * @return av, mm
      */
     public static Step avFloored(double avMm, double dMm) {
+        double av = avFlooredValue(avMm, dMm);
+        String substituted = "max(" + Num.f(avMm) + "; 0.5·" + Num.f(dMm) + ")";
+        if (avMm < 0.5 * dMm) {
+            return Step.withRemark("av", "max(av; 0.5·d)", substituted, av, "mm", C_6_2_2_6,
+                    "av = " + Num.f(avMm) + " mm < 0.5·d: raised to 0.5·d = " + Num.f(av) + " mm");
+        }
+        return Step.of("av", "max(av; 0.5·d)", substituted, av, "mm", C_6_2_2_6);
+    }
+
+    /**
+     * The value of {@link #avFloored} alone (no trace text: the piles of every side and case, of which one
+     * governs), with the same range checks, mm.
+     */
+    public static double avFlooredValue(double avMm, double dMm) {
         Bounds.positive("d", dMm, "mm", C_6_2_2_6);
         if (Double.isNaN(avMm) || Double.isInfinite(avMm)) {
             throw new OutOfRangeException("av", avMm, "mm", "av finite", C_6_2_2_6);
         }
         double floor = 0.5 * dMm;
-        String substituted = "max(" + Num.f(avMm) + "; 0.5·" + Num.f(dMm) + ")";
-        if (avMm < floor) {
-            return Step.withRemark("av", "max(av; 0.5·d)", substituted, floor, "mm", C_6_2_2_6,
-                    "av = " + Num.f(avMm) + " mm < 0.5·d: raised to 0.5·d = " + Num.f(floor) + " mm");
-        }
-        return Step.of("av", "max(av; 0.5·d)", substituted, avMm, "mm", C_6_2_2_6);
+        return avMm < floor ? floor : avMm;
     }
 
     /**
@@ -142,13 +151,19 @@ public final class Shear {
      * @return β, -, 0.25 ≤ β ≤ 1
      */
     public static Step betaShortSpan(double avMm, double dMm) {
-        Bounds.positive("d", dMm, "mm", C_6_2_2_6);
-        Bounds.atLeast("av", avMm, "mm", 0.5 * dMm, C_6_2_2_6);
+        double beta = betaShortSpanValue(avMm, dMm);
         if (avMm <= 2 * dMm) {
-            return Step.withRemark("β", "av/(2·d)", Num.f(avMm) + "/(2·" + Num.f(dMm) + ")", avMm / (2 * dMm), "-",
+            return Step.withRemark("β", "av/(2·d)", Num.f(avMm) + "/(2·" + Num.f(dMm) + ")", beta, "-",
                     C_6_2_2_6, "av ≤ 2·d: β = av/(2·d)");
         }
-        return Step.withRemark("β", "1.0", "1.0", 1.0, "-", C_6_2_2_6, "av > 2·d: no reduction, β = 1.0");
+        return Step.withRemark("β", "1.0", "1.0", beta, "-", C_6_2_2_6, "av > 2·d: no reduction, β = 1.0");
+    }
+
+    /** The value of {@link #betaShortSpan} alone (no trace text), with the same range checks, -. */
+    public static double betaShortSpanValue(double avMm, double dMm) {
+        Bounds.positive("d", dMm, "mm", C_6_2_2_6);
+        Bounds.atLeast("av", avMm, "mm", 0.5 * dMm, C_6_2_2_6);
+        return avMm <= 2 * dMm ? avMm / (2 * dMm) : 1.0;
     }
 
     /**

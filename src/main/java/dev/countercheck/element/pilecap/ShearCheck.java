@@ -14,6 +14,7 @@ import dev.countercheck.review.FindingKind;
 import dev.countercheck.submission.Point;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -28,11 +29,66 @@ final class ShearCheck {
     }
 
     /**
-     * One side of one case: reduced and unreduced shear with their sums written out ({@code 0.39·1850 + ...}),
-     * and the steps of its nearest pile.
+     * One side of one case, by value: the piles beyond the face (their index and distance from it), each pile's β,
+     * the reduced and unreduced sums and the nearest pile's av. Its trace (av and β of each pile, the sums written
+     * out: {@code 0.39·1850 + ...}) is written for the side that governs alone.
      */
-    private record Side(double ved, String vedTerms, double unreduced, String unreducedTerms, String caseName,
-                        Step av, Step beta, List<Step> steps, List<Point> piles) {
+    private record Side(UlsCase u, int[] beyond, double[] distances, double[] betas, double vedSum,
+                        double unreducedSum, double nearestAv, List<Point> piles) {
+
+        double ved() {
+            return Math.max(0, vedSum);
+        }
+
+        double unreduced() {
+            return Math.max(0, unreducedSum);
+        }
+
+        String caseName() {
+            return u.action().name();
+        }
+
+        /** The reduced sum written out. */
+        String vedTerms() {
+            double[] p = u.withSelfWeight().reactionsKn();
+            List<String> terms = new ArrayList<>();
+            for (int k = 0; k < beyond.length; k++) {
+                terms.add(Num.f(betas[k]) + "·" + signed(p[beyond[k]]));
+            }
+            return sum(terms, vedSum);
+        }
+
+        /** The unreduced sum written out. */
+        String unreducedTerms() {
+            double[] p = u.withSelfWeight().reactionsKn();
+            List<String> terms = new ArrayList<>();
+            for (int k = 0; k < beyond.length; k++) {
+                terms.add(signed(p[beyond[k]]));
+            }
+            return sum(terms, unreducedSum);
+        }
+    }
+
+    /** The trace of the side that governs: av and β of each pile beyond the face, and those of the nearest. */
+    private record SideTrace(List<Step> steps, Step av, Step beta) {
+        static SideTrace of(PileCapContext ctx, Side side, double dMm) {
+            List<Step> steps = new ArrayList<>();
+            Step nearestAv = null;
+            Step nearestBeta = null;
+            for (int k = 0; k < side.beyond.length; k++) {
+                Step raw = shearSpan(ctx, side.beyond[k] + 1, side.distances[k]);
+                Step av = Shear.avFloored(raw.value(), dMm);
+                Step beta = Shear.betaShortSpan(av.value(), dMm);
+                steps.add(raw);
+                steps.add(av);
+                steps.add(beta);
+                if (nearestAv == null || av.value() < nearestAv.value()) {
+                    nearestAv = av;
+                    nearestBeta = beta;
+                }
+            }
+            return new SideTrace(steps, nearestAv, nearestBeta);
+        }
     }
 
     static CheckOutcome run(PileCapContext ctx, Axis axis) {
@@ -72,7 +128,7 @@ final class ShearCheck {
                     worst = side;
                     worstResistance = r;
                 }
-                if (worstUnreduced == null || side.unreduced > worstUnreduced.unreduced) {
+                if (worstUnreduced == null || side.unreduced() > worstUnreduced.unreduced()) {
                     worstUnreduced = side;
                 }
             }
@@ -80,14 +136,15 @@ final class ShearCheck {
         if (worst == null) {
             return b.notApplicable("no pile centre lies beyond the column face along " + axis.label()).build();
         }
-        b.governing(worst.caseName);
-        worst.steps.forEach(b::trace);
-        b.value("av", worst.av);
-        b.value("beta", worst.beta);
-        Step ved = b.value("ved", Step.of("VEd", "Σ β_i·P_i (piles beyond the face)", worst.vedTerms,
-                worst.ved, "kN", "EN 1992-1-1 6.2.2(6)"));
+        b.governing(worst.caseName());
+        SideTrace trace = SideTrace.of(ctx, worst, d.value());
+        trace.steps().forEach(b::trace);
+        b.value("av", trace.av());
+        b.value("beta", trace.beta());
+        Step ved = b.value("ved", Step.of("VEd", "Σ β_i·P_i (piles beyond the face)", worst.vedTerms(),
+                worst.ved(), "kN", "EN 1992-1-1 6.2.2(6)"));
         Step unreduced = b.value("ved_unreduced", Step.of("VEd,0", "Σ P_i (piles beyond the face)",
-                worstUnreduced.unreducedTerms, worstUnreduced.unreduced, "kN", "EN 1992-1-1 6.2.2(6)"));
+                worstUnreduced.unreducedTerms(), worstUnreduced.unreduced(), "kN", "EN 1992-1-1 6.2.2(6)"));
         ShearWidth effective = worstResistance.effective;
         double width = b.value("b", effective.width()).value();
         Step nu = b.trace(Shear.nu(ctx.fck.value()));
@@ -102,7 +159,7 @@ final class ShearCheck {
         b.trace(vMin);
         Step vrdc = b.value("vrdc", worstResistance.vrdc);
         b.require(ved.value(), vrdc.value(), FindingKind.CAPACITY, "capacity", "VEd = " + Num.f(ved.value()) + " kN exceeds VRd,c = "
-                + Num.f(vrdc.value()) + " kN on the section across " + axis.label() + " (" + worst.caseName + ").");
+                + Num.f(vrdc.value()) + " kN on the section across " + axis.label() + " (" + worst.caseName() + ").");
         b.require(unreduced.value(), vMax.value(), FindingKind.CAPACITY, "strut-crushing", "Unreduced VEd = " + Num.f(unreduced.value())
                 + " kN exceeds 0.5·b·d·ν·fcd = " + Num.f(vMax.value()) + " kN (EN 1992-1-1 6.2.2(6)).");
         return b.build();
@@ -136,10 +193,14 @@ final class ShearCheck {
     private static Step shearSpan(PileCapContext ctx, int pile, double faceToCentreMm) {
         double phi = ctx.cap.piles().diameterMm();
         double inside = ctx.rules.number("shear_section_inside_pile");
-        double offset = (0.5 - inside) * phi;
         return Step.of("av,raw,P" + pile, "(face to pile centre) − (0.5 − i)·φ",
-                Num.f(faceToCentreMm) + " − (0.5 − " + Num.f(inside) + ")·" + Num.f(phi), faceToCentreMm - offset,
-                "mm", ctx.clauseOf("shear_section_inside_pile"));
+                Num.f(faceToCentreMm) + " − (0.5 − " + Num.f(inside) + ")·" + Num.f(phi),
+                shearSpanValue(faceToCentreMm, inside, phi), "mm", ctx.clauseOf("shear_section_inside_pile"));
+    }
+
+    /** The value of {@link #shearSpan}: {@code inside} is the ruleset's share i, {@code phi} the pile diameter. */
+    private static double shearSpanValue(double faceToCentreMm, double inside, double phi) {
+        return faceToCentreMm - (0.5 - inside) * phi;
     }
 
     /** The resistance VRd,c of one side's section: its effective width, ρl, the stress and the force. */
@@ -159,57 +220,54 @@ final class ShearCheck {
      * depends on the cap and not on the order the sides are visited in.
      */
     private static boolean governs(Side side, Resistance r, Side worst, Resistance worstR) {
-        double u = side.ved / r.vrdc.value();
-        double w = worst.ved / worstR.vrdc.value();
+        double u = side.ved() / r.vrdc.value();
+        double w = worst.ved() / worstR.vrdc.value();
         if (Math.abs(u - w) > 1e-9 * Math.max(1, Math.abs(w))) {
             return u > w;
         }
-        if (Math.abs(side.ved - worst.ved) > 1e-9 * Math.max(1, Math.abs(worst.ved))) {
-            return side.ved > worst.ved;
+        if (Math.abs(side.ved() - worst.ved()) > 1e-9 * Math.max(1, Math.abs(worst.ved()))) {
+            return side.ved() > worst.ved();
         }
-        return side.av.value() < worst.av.value() - 1e-9;
+        return side.nearestAv < worst.nearestAv - 1e-9;
     }
 
     /** The side {@code sign} (+1 beyond the +face, −1 beyond the −face) of case {@code u}, or null when empty. */
     private static Side side(PileCapContext ctx, Axis axis, int sign, double dMm, UlsCase u) {
         double face = axis.along(ctx.cap.column().position()) + sign * ctx.columnHalf(axis);
         double phi = ctx.cap.piles().diameterMm();
+        double inside = ctx.rules.number("shear_section_inside_pile");
         List<Point> piles = ctx.cap.piles().positions();
         double[] p = u.withSelfWeight().reactionsKn();
+        int[] beyond = new int[piles.size()];
+        double[] distances = new double[piles.size()];
+        double[] betas = new double[piles.size()];
+        int count = 0;
         double ved = 0;
         double unreduced = 0;
-        Step nearestAv = null;
-        Step nearestBeta = null;
-        List<Step> steps = new ArrayList<>();
-        List<Point> beyond = new ArrayList<>();
-        List<String> reducedTerms = new ArrayList<>();
-        List<String> terms = new ArrayList<>();
+        double nearestAv = Double.NaN;
+        List<Point> loading = new ArrayList<>();
         for (int i = 0; i < piles.size(); i++) {
             double distance = sign * (axis.along(piles.get(i)) - face);
             if (distance <= 0) {
                 continue;
             }
-            Step raw = shearSpan(ctx, i + 1, distance);
-            Step av = Shear.avFloored(raw.value(), dMm);
-            Step beta = Shear.betaShortSpan(av.value(), dMm);
-            beyond.add(piles.get(i));
-            steps.add(raw);
-            steps.add(av);
-            steps.add(beta);
-            ved += beta.value() * p[i];
+            double av = Shear.avFlooredValue(shearSpanValue(distance, inside, phi), dMm);
+            double beta = Shear.betaShortSpanValue(av, dMm);
+            loading.add(piles.get(i));
+            beyond[count] = i;
+            distances[count] = distance;
+            betas[count++] = beta;
+            ved += beta * p[i];
             unreduced += p[i];
-            reducedTerms.add(Num.f(beta.value()) + "·" + signed(p[i]));
-            terms.add(signed(p[i]));
-            if (nearestAv == null || av.value() < nearestAv.value()) {
+            if (count == 1 || av < nearestAv) {
                 nearestAv = av;
-                nearestBeta = beta;
             }
         }
-        if (nearestAv == null) {
+        if (count == 0) {
             return null;
         }
-        return new Side(Math.max(0, ved), sum(reducedTerms, ved), Math.max(0, unreduced), sum(terms, unreduced),
-                u.action().name(), nearestAv, nearestBeta, steps, beyond);
+        return new Side(u, Arrays.copyOf(beyond, count), Arrays.copyOf(distances, count),
+                Arrays.copyOf(betas, count), ved, unreduced, nearestAv, loading);
     }
 
     /** A pile's reaction as a term of a sum: a pull in brackets. */
