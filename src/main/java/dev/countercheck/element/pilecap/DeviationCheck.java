@@ -51,15 +51,22 @@ final class DeviationCheck {
             offX[dir] = delta.value() * Math.cos(angle);
             offY[dir] = delta.value() * Math.sin(angle);
         }
+        // Each layout with one pile off position is prepared once for every case.
         List<PlanPoint> designed = PlanGeometry.points(nominal);
+        PileGroupReactions.Group[][] groups = new PileGroupReactions.Group[nominal.size()][8];
+        for (int moved = 0; moved < nominal.size(); moved++) {
+            for (int dir = 0; dir < 8; dir++) {
+                List<PlanPoint> shifted = new ArrayList<>(designed);
+                Point p = nominal.get(moved);
+                shifted.set(moved, new PlanPoint(p.xMm() + offX[dir], p.yMm() + offY[dir]));
+                groups[moved][dir] = PileGroupReactions.group(shifted);
+            }
+        }
         for (UlsCase u : ctx.uls) {
             nominalMax = Math.max(nominalMax, u.withSelfWeight().max());
             for (int moved = 0; moved < nominal.size(); moved++) {
                 for (int dir = 0; dir < 8; dir++) {
-                    List<PlanPoint> shifted = new ArrayList<>(designed);
-                    Point p = nominal.get(moved);
-                    shifted.set(moved, new PlanPoint(p.xMm() + offX[dir], p.yMm() + offY[dir]));
-                    PileGroupReactions.Group group = PileGroupReactions.group(shifted);
+                    PileGroupReactions.Group group = groups[moved][dir];
                     double[] r = ctx.reactions(group, u.action(), ctx.gammaSup(u.action())).reactionsKn();
                     double[] rInf = ctx.reactions(group, u.action(), ctx.gammaInf(u.action())).reactionsKn();
                     for (int i = 0; i < r.length; i++) {
