@@ -258,8 +258,18 @@ public final class ControlPerimeter {
      * The strips of one head across x (a head across y is the same with x and y swapped, the column
      * turned): what it shares with the heads at its x, and its centre's y (a strip's lower and upper edge
      * on the head lie its half chord below and above it).
+     *
+     * <p>A strip the region holds whole adds its whole length; which strips it holds is known without the
+     * square root. At a strip {@code beyond} from the column the region's half height is
+     * {@code lift + √(s² − beyond²)} (s = a and lift = cy/2; a circular column: s = D/2 + a, lift = 0), and the
+     * square root rises with its argument v. Where v reaches {@code wholeFrom} (the least half height that holds the
+     * strip, with a margin of 10⁻⁹ of the sizes involved, far above the rounding of the few operations between),
+     * the strip's edges are inside by more than their rounding, so that min and max return them and the strip adds,
+     * to the bit, what the sum with the root would: its length.
      */
     private static final class Strips {
+
+        private static final double MARGIN = 1e-9;
 
         private final boolean circular;
         private final double columnY;
@@ -270,6 +280,10 @@ public final class ControlPerimeter {
         private final double[] beyond;
         private final int nearest;
         private final double whole;
+        /** The argument of the square root from which strip i lies whole inside the region. */
+        private final double[] wholeFrom = new double[STRIPS];
+        /** The length of strip i on the head (its upper edge less its lower). */
+        private final double[] lengths = new double[STRIPS];
 
         Strips(ColumnOutline c, Across across, double centreY) {
             circular = c.circular();
@@ -281,6 +295,21 @@ public final class ControlPerimeter {
             beyond = across.beyond;
             nearest = across.nearest;
             whole = across.whole;
+            double lift = lift();
+            for (int i = 0; i < STRIPS; i++) {
+                double top = centreY + chords[i];
+                double bottom = centreY - chords[i];
+                lengths[i] = top - bottom;
+                double need = Math.max(top - columnY, columnY - bottom);
+                double scale = 1 + Math.abs(columnY) + Math.abs(top) + Math.abs(bottom) + lift;
+                double root = Math.max(0, need * (1 + MARGIN) + MARGIN * scale - lift);
+                wholeFrom[i] = root * root * (1 + MARGIN);
+            }
+        }
+
+        /** What the region's half height adds to the square root: cy/2, or 0 about a circular column. */
+        private double lift() {
+            return circular ? 0 : columnHalfY;
         }
 
         /**
@@ -297,13 +326,17 @@ public final class ControlPerimeter {
             }
             int first = firstWithin(reach);
             int last = lastWithin(reach);
+            double lift = lift();
             for (int i = first; i <= last; i++) {
-                double half = halfHeightInside(aMm, radius, beyond[i]);
-                if (half >= 0) {
-                    double lo = Math.max(centreY - chords[i], columnY - half);
-                    double hi = Math.min(centreY + chords[i], columnY + half);
-                    inside += Math.max(0, hi - lo);
+                double v = reach * reach - beyond[i] * beyond[i];
+                if (v >= wholeFrom[i]) {
+                    inside += lengths[i];
+                    continue;
                 }
+                double half = lift + Math.sqrt(v);
+                double lo = Math.max(centreY - chords[i], columnY - half);
+                double hi = Math.min(centreY + chords[i], columnY + half);
+                inside += Math.max(0, hi - lo);
             }
             return whole == 0 ? 0 : inside / whole;
         }
@@ -336,17 +369,6 @@ public final class ControlPerimeter {
                 }
             }
             return lo;
-        }
-
-        /**
-         * Half the height of the region within distance a of the column at a strip {@code beyond} from it
-         * (a circular column: from its centre, within {@code radius} = D/2 + a), mm; −1 outside it.
-         */
-        private double halfHeightInside(double aMm, double radius, double beyond) {
-            if (circular) {
-                return beyond > radius ? -1 : Math.sqrt(radius * radius - beyond * beyond);
-            }
-            return beyond > aMm ? -1 : columnHalfY + Math.sqrt(aMm * aMm - beyond * beyond);
         }
     }
 
