@@ -147,16 +147,17 @@ class PileGroupReactionsTest {
         double v = 0;
         double mx = mxKnm;
         double my = myKnm;
-        for (Load load : loads) {
-            v += load.forceKn();
-            mx += load.forceKn() * (load.at().yMm() - yBar) / 1000.0;
-            my += load.forceKn() * (load.at().xMm() - xBar) / 1000.0;
+        for (int k = 0; k < loads.size(); k++) {
+            double force = loads.get(k).forceKn();
+            PlanPoint at = loads.get(k).at();
+            v += force;
+            mx += force * (at.yMm() - yBar) / 1000.0;
+            my += force * (at.xMm() - xBar) / 1000.0;
+        }
+        if (n == 1) {
+            return new double[] {v};
         }
         double[] p = new double[n];
-        if (n == 1) {
-            p[0] = v;
-            return p;
-        }
         if (line.isPresent()) {
             double ss = 0;
             double[] s = new double[n];
