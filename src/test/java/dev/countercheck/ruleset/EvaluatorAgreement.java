@@ -1,0 +1,113 @@
+package dev.countercheck.ruleset;
+
+import com.ezylang.evalex.data.EvaluationValue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Runs every expression of a ruleset's checks on one scope's values with both evaluators, EvalEx's decimals
+ * (DECIMAL64) and the compiled doubles ({@link CompiledExpression}), and collects where they disagree: numbers
+ * further apart than 1e-12 relative, booleans unequal, an expression not compiled, or a compiled result where
+ * EvalEx gives an error. Each derived quantity takes EvalEx's value, so that every expression sees the same
+ * inputs in both. A compiled evaluation that hands over to EvalEx ({@link CompiledExpression.Unsupported}) is
+ * counted, not a disagreement: EvalEx then answers.
+ */
+public final class EvaluatorAgreement {
+
+    static final double TOLERANCE = 1e-12;
+
+    private final List<String> disagreements = new ArrayList<>();
+    private int numbers;
+    private int booleans;
+    private int handedOver;
+    private int errors;
+
+    /** Every check of {@code rules} for {@code elementType} whose scope is {@code scope}, on one subject's values. */
+    public void compare(Ruleset rules, String elementType, String scope, Map<String, Variable> declared,
+                        String subject, Map<String, Object> variables) {
+        for (Rule rule : rules.rules().getOrDefault(elementType, Map.of()).values()) {
+            if (rule.def().scope().equals(scope) && rule.subject().equals(subject)) {
+                compare(rules.expressions(), rule.def(), declared, subject, variables);
+            }
+        }
+    }
+
+    private void compare(RuleExpressions ex, CheckDef def, Map<String, Variable> declared, String subject,
+                         Map<String, Object> variables) {
+        RuleLayout layout = ex.layout(def, declared);
+        RuleLayout.Frame frame = layout.frame(variables, subject);
+        def.appliesWhen().ifPresent(w -> compare(ex, layout, frame, def, w, false));
+        for (CheckDef.DerivedDef d : def.derived()) {
+            Double v = compare(ex, layout, frame, def, d.formula(), true);
+            if (v == null) {
+                return;
+            }
+            frame.put(d.name(), v);
+        }
+        for (CheckDef.RequirementDef r : def.requirements()) {
+            compare(ex, layout, frame, def, r.that(), false);
+            r.utilisation().ifPresent(u -> compare(ex, layout, frame, def, u, true));
+        }
+        def.cautions().forEach(c -> compare(ex, layout, frame, def, c.when(), false));
+    }
+
+    /** EvalEx's number (when {@code number}), else null. */
+    private Double compare(RuleExpressions ex, RuleLayout layout, RuleLayout.Frame frame, CheckDef def,
+                           String expression, boolean number) {
+        CompiledExpression c = layout.compiled(expression);
+        String where = def.id() + ": " + expression + " with " + frame.asMap();
+        if (c == null) {
+            disagreements.add("not compiled: " + where);
+            return null;
+        }
+        EvaluationValue decimal;
+        try {
+            decimal = ex.evaluate(expression, frame.asMap());
+        } catch (Exception e) {
+            errors++;
+            try {
+                Object compiled = number ? (Object) c.number(frame.slots()) : (Object) c.bool(frame.slots());
+                disagreements.add("EvalEx fails (" + e.getMessage() + ") but compiled gives " + compiled + ": " + where);
+            } catch (CompiledExpression.Unsupported handed) {
+                handedOver++;
+            }
+            return null;
+        }
+        try {
+            if (number) {
+                numbers++;
+                double exact = decimal.getNumberValue().doubleValue();
+                double compiled = c.number(frame.slots());
+                if (Math.abs(compiled - exact) > TOLERANCE * Math.max(Math.abs(exact), Double.MIN_NORMAL)) {
+                    disagreements.add("number " + compiled + " against EvalEx " + exact + ": " + where);
+                }
+                return exact;
+            }
+            booleans++;
+            if (c.bool(frame.slots()) != decimal.getBooleanValue()) {
+                disagreements.add("boolean " + !decimal.getBooleanValue() + " against EvalEx "
+                        + decimal.getBooleanValue() + ": " + where);
+            }
+        } catch (CompiledExpression.Unsupported handed) {
+            handedOver++;
+            return number ? decimal.getNumberValue().doubleValue() : null;
+        }
+        return null;
+    }
+
+    public List<String> disagreements() {
+        return disagreements;
+    }
+
+    /** How many numbers and booleans were compared, handed over to EvalEx, and failed in EvalEx. */
+    public String counts() {
+        return numbers + " numbers, " + booleans + " booleans compared; " + handedOver + " handed over to EvalEx; "
+                + errors + " EvalEx errors";
+    }
+
+    public int compared() {
+        return numbers + booleans;
+    }
+}
