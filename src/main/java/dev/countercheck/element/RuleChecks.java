@@ -163,10 +163,13 @@ public final class RuleChecks {
 
     /** The step, remarked when its formula uses a parameter or table the ruleset marks as recalled from memory. */
     private static Step marked(Step step, String formula, Ruleset rules) {
-        List<String> recalled = IDENTIFIERS.computeIfAbsent(formula, RuleChecks::identifiers).stream()
-                .filter(rules::isRecalled).toList();
-        return recalled.isEmpty() ? step
-                : step.remarked(String.join(", ", recalled) + " " + ValueSource.MARK);
+        String recalled = null;
+        for (String name : IDENTIFIERS.computeIfAbsent(formula, RuleChecks::identifiers)) {
+            if (rules.isRecalled(name)) {
+                recalled = recalled == null ? name : recalled + ", " + name;
+            }
+        }
+        return recalled == null ? step : step.remarked(recalled + " " + ValueSource.MARK);
     }
 
     /** Every name a formula writes (variables, parameters, tables), once each, in order. */

@@ -13,6 +13,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
+import java.util.TreeMap;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -36,8 +37,8 @@ class RuleEvaluatorsOnRandomScopesTest {
         RulesetLoader loader = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY);
         for (String id : List.of("en1992-recommended", "en1992-uk-na", "house-example")) {
             Ruleset rules = loader.load(id);
-            ProjectReviewer.RULE_VOCABULARY.elementTypes().forEach((type, vocabulary) -> compare(agreement, rules,
-                    type, vocabulary, random));
+            new TreeMap<>(ProjectReviewer.RULE_VOCABULARY.elementTypes()).forEach((type, vocabulary) ->
+                    compare(agreement, rules, type, vocabulary, random));
         }
         System.out.println("random scopes: " + agreement.counts());
         assertThat(agreement.compared()).isGreaterThan(10_000);
@@ -46,7 +47,7 @@ class RuleEvaluatorsOnRandomScopesTest {
 
     private static void compare(EvaluatorAgreement agreement, Ruleset rules, String type, ElementRules vocabulary,
                                 Random random) {
-        vocabulary.scopes().forEach((scope, declared) -> {
+        new TreeMap<>(vocabulary.scopes()).forEach((scope, declared) -> {
             for (String subject : vocabulary.subjectsOf(scope)) {
                 for (int i = 0; i < SCOPES; i++) {
                     agreement.compare(rules, type, scope, declared, subject, invented(declared, random));
@@ -57,7 +58,7 @@ class RuleEvaluatorsOnRandomScopesTest {
 
     private static Map<String, Object> invented(Map<String, Variable> declared, Random random) {
         Map<String, Object> values = new HashMap<>();
-        declared.forEach((name, v) -> values.put(name, switch (v.type()) {
+        new TreeMap<>(declared).forEach((name, v) -> values.put(name, switch (v.type()) {
             case NUMBER -> number(((Number) v.example()).doubleValue(), random);
             case BOOLEAN -> random.nextBoolean();
             case TEXT -> name.startsWith("cast_against") ? CAST.get(random.nextInt(CAST.size())) : v.example();

@@ -17,6 +17,7 @@ import java.nio.file.Path;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.TreeMap;
 import java.util.stream.Stream;
 
 /**
@@ -59,7 +60,7 @@ public final class SampleScopes {
                         continue;
                     }
                     Map<Axis, Double> asRequired = asRequired(review, e.id(), asRequiredCheck);
-                    scopes.forEach((scope, declared) -> {
+                    new TreeMap<>(scopes).forEach((scope, declared) -> {
                         for (String subject : DetailingVariables.subjects().get(scope)) {
                             DetailingVariables.Values v;
                             try {

@@ -1,6 +1,7 @@
 package dev.countercheck.element.pilecap;
 
 import dev.countercheck.element.Axis;
+import dev.countercheck.element.DetailingVariables;
 import dev.countercheck.element.PlanGeometry;
 import dev.countercheck.element.Section;
 import dev.countercheck.statics.PileGroupReactions;
@@ -51,6 +52,9 @@ final class PileCapContext {
     final Step fyd;
     /** The line the group lies on as designed (empty for a group in plan), found once for every solve. */
     private final Optional<double[]> designLine;
+
+    /** The detailing rules' section variables, formed once for every scope of the run. */
+    final DetailingVariables.Once detailingSection = new DetailingVariables.Once();
 
     PileCapContext(PileCap cap, Ruleset rules) {
         this.cap = cap;
