@@ -80,6 +80,11 @@ public final class RuleExpressions {
         }
     }
 
+    /** EvalEx's configuration: its decimals, the library's functions and the tables. */
+    ExpressionConfiguration configuration() {
+        return configuration;
+    }
+
     /** {@code expression} compiled with its names in the slots {@code slotOf} gives; null when not compiled. */
     CompiledExpression compile(String expression, ToIntFunction<String> slotOf) {
         try {

@@ -43,6 +43,7 @@ class RuleEvaluatorsOnRandomScopesTest {
         System.out.println("random scopes: " + agreement.counts());
         assertThat(agreement.compared()).isGreaterThan(10_000);
         assertThat(agreement.disagreements()).isEmpty();
+        assertThat(agreement.nearTies()).isEmpty();
     }
 
     private static void compare(EvaluatorAgreement agreement, Ruleset rules, String type, ElementRules vocabulary,

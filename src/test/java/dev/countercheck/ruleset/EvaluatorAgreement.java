@@ -1,6 +1,16 @@
 package dev.countercheck.ruleset;
 
+import com.ezylang.evalex.Expression;
 import com.ezylang.evalex.data.EvaluationValue;
+import com.ezylang.evalex.operators.booleans.InfixEqualsOperator;
+import com.ezylang.evalex.operators.booleans.InfixGreaterEqualsOperator;
+import com.ezylang.evalex.operators.booleans.InfixGreaterOperator;
+import com.ezylang.evalex.operators.booleans.InfixLessEqualsOperator;
+import com.ezylang.evalex.operators.booleans.InfixLessOperator;
+import com.ezylang.evalex.operators.booleans.InfixNotEqualsOperator;
+import com.ezylang.evalex.parser.ASTNode;
+
+import java.math.BigDecimal;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -23,6 +33,8 @@ public final class EvaluatorAgreement {
     private int booleans;
     private int handedOver;
     private int errors;
+    private int exactTies;
+    private final List<String> nearTies = new ArrayList<>();
 
     /** Every check of {@code rules} for {@code elementType} whose scope is {@code scope}, on one subject's values. */
     public void compare(Ruleset rules, String elementType, String scope, Map<String, Variable> declared,
@@ -86,6 +98,7 @@ public final class EvaluatorAgreement {
                 return exact;
             }
             booleans++;
+            countTies(ex, expression, frame.asMap());
             if (c.bool(frame.slots()) != decimal.getBooleanValue()) {
                 disagreements.add("boolean " + !decimal.getBooleanValue() + " against EvalEx "
                         + decimal.getBooleanValue() + ": " + where);
@@ -97,6 +110,46 @@ public final class EvaluatorAgreement {
         return null;
     }
 
+    /**
+     * Counts the comparisons of {@code expression} whose two sides are equal in EvalEx's decimals (an exact tie,
+     * which a double meets as well where both sides are exact) or within 1e-12 relative without being equal (a
+     * near tie, where the last digit of either arithmetic could decide).
+     */
+    private void countTies(RuleExpressions ex, String text, Map<String, Object> values) {
+        try {
+            Expression e = new Expression(text, ex.configuration());
+            for (String name : e.getUsedVariables()) {
+                values.keySet().stream().filter(k -> k.equalsIgnoreCase(name)).findFirst().ifPresent(k -> e.with(name,
+                        values.get(k) instanceof Double d ? BigDecimal.valueOf(d) : values.get(k)));
+            }
+            for (ASTNode node : e.getAllASTNodes()) {
+                Object op = node.getToken().getOperatorDefinition();
+                if (op instanceof InfixGreaterOperator || op instanceof InfixGreaterEqualsOperator
+                        || op instanceof InfixLessOperator || op instanceof InfixLessEqualsOperator
+                        || op instanceof InfixEqualsOperator || op instanceof InfixNotEqualsOperator) {
+                    EvaluationValue a = e.evaluateSubtree(node.getParameters().get(0));
+                    EvaluationValue b = e.evaluateSubtree(node.getParameters().get(1));
+                    if (a.isNumberValue() && b.isNumberValue()) {
+                        BigDecimal x = a.getNumberValue();
+                        BigDecimal y = b.getNumberValue();
+                        if (x.compareTo(y) == 0) {
+                            exactTies++;
+                        } else if (x.subtract(y).abs().doubleValue() <= TOLERANCE * x.abs().max(y.abs()).doubleValue()) {
+                            nearTies.add(text + " with " + x + " and " + y);
+                        }
+                    }
+                }
+            }
+        } catch (Exception e) {
+            // a side that EvalEx cannot evaluate alone (a branch IF would not take) has no tie to count
+        }
+    }
+
+    /** The comparisons whose sides differed by no more than 1e-12 relative without being equal. */
+    public List<String> nearTies() {
+        return nearTies;
+    }
+
     public List<String> disagreements() {
         return disagreements;
     }
@@ -104,7 +157,7 @@ public final class EvaluatorAgreement {
     /** How many numbers and booleans were compared, handed over to EvalEx, and failed in EvalEx. */
     public String counts() {
         return numbers + " numbers, " + booleans + " booleans compared; " + handedOver + " handed over to EvalEx; "
-                + errors + " EvalEx errors";
+                + errors + " EvalEx errors; comparisons on a tie: " + exactTies + " exact, " + nearTies.size() + " near";
     }
 
     public int compared() {
