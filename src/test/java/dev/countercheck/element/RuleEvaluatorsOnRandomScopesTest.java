@@ -21,7 +21,8 @@ import static org.assertj.core.api.Assertions.assertThat;
  * Every rule expression of every bundled ruleset, on invented scopes of every element type (each number its
  * example scaled by a random factor, half of them rounded to whole numbers so that comparisons meet ties; random
  * texts, booleans and exposure classes; fixed seed), gives the same with the compiled doubles as with EvalEx's
- * decimals (numbers to 1e-12 relative, booleans equal).
+ * decimals (numbers to 1e-12 relative, booleans equal). No comparison may sit within 1e-12 of its tie without being
+ * on it: there the last digit of either arithmetic could decide, and the agreement of the booleans would be luck.
  */
 class RuleEvaluatorsOnRandomScopesTest {
 
