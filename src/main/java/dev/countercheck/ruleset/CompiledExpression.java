@@ -37,15 +37,15 @@ import java.util.function.ToIntFunction;
  * slots resolved once: the arithmetic operators, comparisons, {@code &&}, {@code ||}, {@code !}, IF, MAX, MIN,
  * ABS, SQRT, the ruleset's tables and text equality. Whatever it does not cover is not compiled, and whatever
  * it cannot give as the decimal evaluator would (division by zero, a root of a negative number, a value of
- * another type than the operation takes, a table that has no value, a result that is not finite) throws
- * {@link Unsupported}: the caller then evaluates with EvalEx, which gives its result or its error as before.
+ * another type than the operation takes, a table that has no value, a result that is not finite) it does not
+ * answer (NaN, null): the caller then evaluates with EvalEx, which gives its result or its error as before.
  * Numbers agree with EvalEx's decimal arithmetic (DECIMAL64) to about 1e-15 relative ({@code
  * RuleExpressionsAgreementTest}).
  */
 final class CompiledExpression {
 
-    /** The compiled form cannot answer this evaluation: evaluate with EvalEx. */
-    static final class Unsupported extends RuntimeException {
+    /** The compiled form cannot answer this evaluation: EvalEx must. */
+    private static final class Unsupported extends RuntimeException {
         static final Unsupported INSTANCE = new Unsupported();
 
         private Unsupported() {
@@ -89,17 +89,23 @@ final class CompiledExpression {
         return root == null ? null : new CompiledExpression(root);
     }
 
-    /** The number the expression gives (never -0: decimals have no signed zero). */
+    /** The number the expression gives (never -0: decimals have no signed zero); NaN when EvalEx must answer. */
     double number(Object[] slots) {
-        double v = root.num(slots);
-        if (!Double.isFinite(v)) {
-            throw Unsupported.INSTANCE;
+        try {
+            double v = root.num(slots);
+            return Double.isFinite(v) ? v + 0.0 : Double.NaN;
+        } catch (Unsupported e) {
+            return Double.NaN;
         }
-        return v + 0.0;
     }
 
-    boolean bool(Object[] slots) {
-        return root.bool(slots);
+    /** The condition's value; null when EvalEx must answer. */
+    Boolean bool(Object[] slots) {
+        try {
+            return root.bool(slots);
+        } catch (Unsupported e) {
+            return null;
+        }
     }
 
     private static Node compile(ASTNode node, ToIntFunction<String> slotOf, ExpressionConfiguration configuration) {

@@ -134,27 +134,15 @@ public final class RuleLayout {
         /** A number result, or an exception naming the expression when it is not one. */
         public double number(String expression) throws BaseException {
             CompiledExpression c = compiled(expression);
-            if (c != null) {
-                try {
-                    return c.number(values);
-                } catch (CompiledExpression.Unsupported e) {
-                    // EvalEx gives the result, or the error, below
-                }
-            }
-            return expressions.number(expression, asMap());
+            double v = c == null ? Double.NaN : c.number(values);
+            return Double.isNaN(v) ? expressions.number(expression, asMap()) : v;
         }
 
         /** A boolean result, or an exception naming the expression when it is not one. */
         public boolean bool(String expression) throws BaseException {
             CompiledExpression c = compiled(expression);
-            if (c != null) {
-                try {
-                    return c.bool(values);
-                } catch (CompiledExpression.Unsupported e) {
-                    // EvalEx gives the result, or the error, below
-                }
-            }
-            return expressions.bool(expression, asMap());
+            Boolean b = c == null ? null : c.bool(values);
+            return b != null ? b : expressions.bool(expression, asMap());
         }
 
         private CompiledExpression compiled(String expression) {

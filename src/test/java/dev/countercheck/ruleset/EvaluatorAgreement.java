@@ -21,8 +21,8 @@ import java.util.Map;
  * (DECIMAL64) and the compiled doubles ({@link CompiledExpression}), and collects where they disagree: numbers
  * further apart than 1e-12 relative, booleans unequal, an expression not compiled, or a compiled result where
  * EvalEx gives an error. Each derived quantity takes EvalEx's value, so that every expression sees the same
- * inputs in both. A compiled evaluation that hands over to EvalEx ({@link CompiledExpression.Unsupported}) is
- * counted, not a disagreement: EvalEx then answers.
+ * inputs in both. A compiled evaluation that hands over to EvalEx (NaN, null) is counted, not a disagreement:
+ * EvalEx then answers.
  */
 public final class EvaluatorAgreement {
 
@@ -75,37 +75,32 @@ public final class EvaluatorAgreement {
             return null;
         }
         EvaluationValue decimal;
+        Object compiled = number ? (Object) c.number(frame.slots()) : c.bool(frame.slots());
+        boolean answered = compiled != null && !(compiled instanceof Double d && d.isNaN());
+        if (!answered) {
+            handedOver++;
+        }
         try {
             decimal = ex.evaluate(expression, frame.asMap());
         } catch (Exception e) {
             errors++;
-            try {
-                Object compiled = number ? (Object) c.number(frame.slots()) : (Object) c.bool(frame.slots());
+            if (answered) {
                 disagreements.add("EvalEx fails (" + e.getMessage() + ") but compiled gives " + compiled + ": " + where);
-            } catch (CompiledExpression.Unsupported handed) {
-                handedOver++;
             }
             return null;
         }
-        try {
-            if (number) {
-                numbers++;
-                double exact = decimal.getNumberValue().doubleValue();
-                double compiled = c.number(frame.slots());
-                if (Math.abs(compiled - exact) > TOLERANCE * Math.max(Math.abs(exact), Double.MIN_NORMAL)) {
-                    disagreements.add("number " + compiled + " against EvalEx " + exact + ": " + where);
-                }
-                return exact;
+        if (number) {
+            numbers++;
+            double exact = decimal.getNumberValue().doubleValue();
+            if (answered && Math.abs((Double) compiled - exact) > TOLERANCE * Math.max(Math.abs(exact), Double.MIN_NORMAL)) {
+                disagreements.add("number " + compiled + " against EvalEx " + exact + ": " + where);
             }
-            booleans++;
-            countTies(ex, expression, frame.asMap());
-            if (c.bool(frame.slots()) != decimal.getBooleanValue()) {
-                disagreements.add("boolean " + !decimal.getBooleanValue() + " against EvalEx "
-                        + decimal.getBooleanValue() + ": " + where);
-            }
-        } catch (CompiledExpression.Unsupported handed) {
-            handedOver++;
-            return number ? decimal.getNumberValue().doubleValue() : null;
+            return exact;
+        }
+        booleans++;
+        countTies(ex, expression, frame.asMap());
+        if (answered && !compiled.equals(decimal.getBooleanValue())) {
+            disagreements.add("boolean " + compiled + " against EvalEx " + decimal.getBooleanValue() + ": " + where);
         }
         return null;
     }
