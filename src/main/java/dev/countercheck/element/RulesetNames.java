@@ -22,16 +22,16 @@ import java.util.WeakHashMap;
  */
 final class RulesetNames {
 
+    /** What the names mean and their symbols, for each ruleset loaded (keyed by its evaluator, one per ruleset). */
+    private static final Map<RuleExpressions, Map<String, String>> NAMES = Collections.synchronizedMap(new WeakHashMap<>());
+    private static final Map<RuleExpressions, Map<String, String>> SYMBOLS = Collections.synchronizedMap(new WeakHashMap<>());
+
     private RulesetNames() {
     }
 
     static Map<String, String> of(Ruleset rules) {
         return NAMES.computeIfAbsent(rules.expressions(), k -> described(rules));
     }
-
-    /** What the names mean and their symbols, for each ruleset loaded (keyed by its evaluator, one per ruleset). */
-    private static final Map<RuleExpressions, Map<String, String>> NAMES = Collections.synchronizedMap(new WeakHashMap<>());
-    private static final Map<RuleExpressions, Map<String, String>> SYMBOLS = Collections.synchronizedMap(new WeakHashMap<>());
 
     private static Map<String, String> described(Ruleset rules) {
         Map<String, String> names = new TreeMap<>(ScopeNames.DESCRIBED);

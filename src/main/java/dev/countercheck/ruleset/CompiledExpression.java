@@ -29,7 +29,6 @@ import com.ezylang.evalex.parser.Token;
 
 import java.math.BigDecimal;
 import java.util.List;
-import java.util.Objects;
 import java.util.function.ToIntFunction;
 
 /**
@@ -377,10 +376,10 @@ final class CompiledExpression {
     }
 
     private static Node numeric(Numeric n) {
-        return Objects.requireNonNull(n);
+        return n;
     }
 
     private static Node logical(Logical n) {
-        return Objects.requireNonNull(n);
+        return n;
     }
 }
