@@ -29,7 +29,7 @@ class RuleEvaluatorsOnRandomScopesTest {
     private static final List<String> CAST = List.of("soil", "blinding", "formwork");
     private static final List<String> EXPOSURE = List.of("X0", "XC1", "XC2", "XC3", "XC4", "XD1", "XD2", "XD3", "XS1",
             "XS2", "XS3", "XF1", "XA2");
-    private static final int SCOPES = 150;
+    private static final int SCOPES = 25;
 
     @Test
     void compiledAndDecimalEvaluationAgreeOnRandomScopes() throws Exception {
@@ -42,7 +42,7 @@ class RuleEvaluatorsOnRandomScopesTest {
                     compare(agreement, rules, type, vocabulary, random));
         }
         System.out.println("random scopes: " + agreement.counts());
-        assertThat(agreement.compared()).isGreaterThan(10_000);
+        assertThat(agreement.compared()).isGreaterThan(5_000);
         assertThat(agreement.disagreements()).isEmpty();
         assertThat(agreement.nearTies()).isEmpty();
     }
