@@ -7,10 +7,12 @@ import dev.countercheck.submission.RectangularPlan;
 import dev.countercheck.submission.Reinforcement;
 import dev.countercheck.submission.Reinforcement.BarSet;
 
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Supplier;
 import java.util.function.ToDoubleFunction;
 
 /**
@@ -45,6 +47,19 @@ public final class DetailingVariables {
                                double fck, double fctm, double fctd, double fyd, String castAgainst,
                                String castAgainstSides, double embedmentMm, double coverDeviationMm,
                                boolean hasQuasiPermanentCase, ToDoubleFunction<Axis> sigmaQp) {
+    }
+
+    /** The section's values of one run of an element's checks, formed the first time a scope needs them. */
+    public static final class Once {
+        private Map<String, Object> values;
+
+        /** The values {@code form} gives the first time; the same values after. */
+        public Map<String, Object> get(Supplier<Map<String, Object>> form) {
+            if (values == null) {
+                values = Collections.unmodifiableMap(form.get());
+            }
+            return values;
+        }
     }
 
     private DetailingVariables() {
@@ -122,7 +137,7 @@ public final class DetailingVariables {
         v.put("fctd", f.fctd());
         v.put("fyd", f.fyd());
         v.put("dg", f.materials().aggregateMm());
-        v.put("structural_class", Double.parseDouble(f.materials().structuralClass().replaceAll("[^0-9]", "")));
+        v.put("structural_class", digits(f.materials().structuralClass()));
         v.put("exposure", f.materials().exposure());
         v.put("cast_against", f.castAgainst());
         v.put("cast_against_sides", f.castAgainstSides());
@@ -168,6 +183,13 @@ public final class DetailingVariables {
         int n = sets.stream().mapToInt(BarSet::count).sum();
         double phi = sets.stream().mapToDouble(BarSet::diameterMm).max().orElse(0);
         return n < 2 ? 0 : (width - 2 * sideCover - phi) / (n - 1);
+    }
+
+    /** The number the digits of {@code text} write ({@code S4} → 4). */
+    private static double digits(String text) {
+        StringBuilder digits = new StringBuilder(2);
+        text.chars().filter(c -> c >= '0' && c <= '9').forEach(c -> digits.append((char) c));
+        return Double.parseDouble(digits.toString());
     }
 
     private static double layerDiameter(Reinforcement r, int layer) {

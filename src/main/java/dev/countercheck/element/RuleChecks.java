@@ -11,7 +11,7 @@ import dev.countercheck.ruleset.CheckDef;
 import dev.countercheck.ruleset.CheckDef.DerivedDef;
 import dev.countercheck.ruleset.CheckDef.RequirementDef;
 import dev.countercheck.ruleset.Rule;
-import dev.countercheck.ruleset.RuleExpressions;
+import dev.countercheck.ruleset.RuleLayout;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.ruleset.ValueSource;
 import dev.countercheck.ruleset.Variable;
@@ -25,6 +25,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.BiFunction;
+import java.util.function.Function;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -111,25 +112,22 @@ public final class RuleChecks {
      * @param scope     the variables of the rule's scope, with units and descriptions
      * @param variables the scope's variables for this subject
      */
-    public static CheckOutcome run(CheckCatalogue catalogue, Rule rule, Ruleset rules,
-                                   Map<String, Variable> scope, Map<String, Object> variables) {
+    private static CheckOutcome run(CheckCatalogue catalogue, Rule rule, Ruleset rules,
+                                    Map<String, Variable> scope, Map<String, Object> variables) {
         CheckDef def = rule.def();
         String subject = rule.subject();
         CheckBuilder b = new CheckBuilder(catalogue.check(def.idFor(subject)));
-        Map<String, Object> values = new HashMap<>(variables);
-        values.put("dir", subject);
-        RuleExpressions ex = rules.expressions();
-        values.putAll(ex.parameterValues());
+        RuleLayout.Frame values = rules.expressions().layout(def, scope).frame(variables, subject);
         try {
-            if (def.appliesWhen().isPresent() && !ex.bool(def.appliesWhen().get(), values)) {
-                return b.notApplicable(fill(def.notApplicable(), values)).build();
+            if (def.appliesWhen().isPresent() && !values.bool(def.appliesWhen().get())) {
+                return b.notApplicable(fill(def.notApplicable(), values::get)).build();
             }
             Map<String, Step> steps = new HashMap<>();
             for (DerivedDef d : def.derived()) {
-                double v = ex.number(d.formula(), values);
+                double v = values.number(d.formula());
                 values.put(d.name(), v);
-                steps.put(d.name(), b.trace(marked(Step.of(d.symbol(), d.formula(), substitute(d.formula(), values), v,
-                        d.unit(), d.clause() + " (" + def.origin() + ")"), d.formula(), rules)));
+                steps.put(d.name(), b.trace(marked(Step.of(d.symbol(), d.formula(), substitute(d.formula(), values::get),
+                        v, d.unit(), d.clause() + " (" + def.origin() + ")"), d.formula(), rules)));
             }
             for (String name : def.values()) {
                 Step step = steps.get(name);
@@ -142,18 +140,18 @@ public final class RuleChecks {
             }
             for (RequirementDef r : def.requirements()) {
                 if (r.utilisation().isPresent()) {
-                    b.utilisation(ex.number(r.utilisation().get(), values));
+                    b.utilisation(values.number(r.utilisation().get()));
                 }
-                if (ex.bool(r.that(), values)) {
+                if (values.bool(r.that())) {
                     b.pass();
                 } else {
                     b.failRequirement(Severity.fromLabel(r.severity()), r.finding(),
-                            fill(r.message(), values) + " (" + r.clause() + ")");
+                            fill(r.message(), values::get) + " (" + r.clause() + ")");
                 }
             }
             for (CheckDef.CautionDef c : def.cautions()) {
-                if (ex.bool(c.when(), values)) {
-                    b.caution(fill(c.text(), values));
+                if (values.bool(c.when())) {
+                    b.caution(fill(c.text(), values::get));
                 }
             }
         } catch (BaseException | RuntimeException e) {
@@ -165,10 +163,13 @@ public final class RuleChecks {
 
     /** The step, remarked when its formula uses a parameter or table the ruleset marks as recalled from memory. */
     private static Step marked(Step step, String formula, Ruleset rules) {
-        List<String> recalled = IDENTIFIERS.computeIfAbsent(formula, RuleChecks::identifiers).stream()
-                .filter(rules::isRecalled).toList();
-        return recalled.isEmpty() ? step
-                : step.remarked(String.join(", ", recalled) + " " + ValueSource.MARK);
+        String recalled = null;
+        for (String name : IDENTIFIERS.computeIfAbsent(formula, RuleChecks::identifiers)) {
+            if (rules.isRecalled(name)) {
+                recalled = recalled == null ? name : recalled + ", " + name;
+            }
+        }
+        return recalled == null ? step : step.remarked(recalled + " " + ValueSource.MARK);
     }
 
     /** Every name a formula writes (variables, parameters, tables), once each, in order. */
@@ -184,21 +185,21 @@ public final class RuleChecks {
     }
 
     /** The formula with each known value put in for its name (names of no value stay as written). */
-    static String substitute(String formula, Map<String, Object> values) {
+    static String substitute(String formula, Function<String, Object> values) {
         String[] parts = FORMULAS.computeIfAbsent(formula, f -> split(f, NAME));
         StringBuilder out = new StringBuilder(formula.length() + 16);
         for (int i = 0; i < parts.length; i++) {
-            out.append(i % 2 == 0 ? parts[i] : show(values.get(parts[i]), parts[i], true));
+            out.append(i % 2 == 0 ? parts[i] : show(values.apply(parts[i]), parts[i], true));
         }
         return out.toString();
     }
 
     /** A message with each {name} replaced by its value. */
-    static String fill(String template, Map<String, Object> values) {
+    static String fill(String template, Function<String, Object> values) {
         String[] parts = MESSAGES.computeIfAbsent(template, t -> split(t, PLACEHOLDER));
         StringBuilder out = new StringBuilder(template.length() + 16);
         for (int i = 0; i < parts.length; i++) {
-            out.append(i % 2 == 0 ? parts[i] : show(values.get(parts[i]), "{" + parts[i] + "}", false));
+            out.append(i % 2 == 0 ? parts[i] : show(values.apply(parts[i]), "{" + parts[i] + "}", false));
         }
         return out.toString();
     }

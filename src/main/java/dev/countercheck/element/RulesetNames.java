@@ -2,27 +2,38 @@ package dev.countercheck.element;
 
 import dev.countercheck.ruleset.CheckDef;
 import dev.countercheck.ruleset.Parameter;
+import dev.countercheck.ruleset.RuleExpressions;
 import dev.countercheck.ruleset.Ruleset;
 import dev.countercheck.ruleset.TableDef;
 import dev.countercheck.ruleset.Variable;
 
+import java.util.Collections;
 import java.util.LinkedHashSet;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.WeakHashMap;
 
 /**
  * What each name a rule's formula may write means, taken from where the name is declared: a parameter's or a
  * table's note, a scope variable's description (every kind's scopes, in the order of the kinds and the scopes'
  * names; a name that two scopes describe differently, such as {@code phi}, has both), a derived quantity's symbol. The report
- * defines the names of a rule-derived step with it; built once per review (the scopes' part once).
+ * defines the names of a rule-derived step with it; built once per ruleset loaded (the scopes' part once).
  */
 final class RulesetNames {
+
+    /** What the names mean and their symbols, for each ruleset loaded (keyed by its evaluator, one per ruleset). */
+    private static final Map<RuleExpressions, Map<String, String>> NAMES = Collections.synchronizedMap(new WeakHashMap<>());
+    private static final Map<RuleExpressions, Map<String, String>> SYMBOLS = Collections.synchronizedMap(new WeakHashMap<>());
 
     private RulesetNames() {
     }
 
     static Map<String, String> of(Ruleset rules) {
+        return NAMES.computeIfAbsent(rules.expressions(), k -> described(rules));
+    }
+
+    private static Map<String, String> described(Ruleset rules) {
         Map<String, String> names = new TreeMap<>(ScopeNames.DESCRIBED);
         for (Parameter p : rules.parameters().values()) {
             names.put(p.name(), p.note() + " (" + p.symbol() + ", ruleset parameter)");
@@ -42,6 +53,10 @@ final class RulesetNames {
      * phrase, not a symbol ({@code vmin coefficient}): the name is written as it is.
      */
     static Map<String, String> symbols(Ruleset rules) {
+        return SYMBOLS.computeIfAbsent(rules.expressions(), k -> declaredSymbols(rules));
+    }
+
+    private static Map<String, String> declaredSymbols(Ruleset rules) {
         Map<String, String> symbols = new TreeMap<>();
         for (ElementKind<?> kind : ElementKinds.ALL) {
             for (Map<String, Variable> scope : new TreeMap<>(kind.ruleVocabulary().scopes()).values()) {

@@ -53,20 +53,35 @@ public final class Num {
             m /= 10;
             s--;
         }
-        StringBuilder out = new StringBuilder(24);
-        if (m < 0) {
-            out.append('-');
+        boolean negative = m < 0;
+        long digitsLeft = Math.abs(m);
+        int digits = 1;
+        for (long rest = digitsLeft; rest >= 10; rest /= 10) {
+            digits++;
         }
-        String digits = Long.toString(Math.abs(m));
-        if (s <= 0) {
-            out.append(digits);
-            out.append("0".repeat(-s));
-        } else if (digits.length() > s) {
-            out.append(digits, 0, digits.length() - s).append('.').append(digits, digits.length() - s, digits.length());
-        } else {
-            out.append("0.").append("0".repeat(s - digits.length())).append(digits);
+        int length = (negative ? 1 : 0) + (s <= 0 ? digits - s : digits > s ? digits + 1 : s + 2);
+        char[] out = new char[length];
+        int at = length;
+        if (s < 0) {
+            for (int i = 0; i < -s; i++) {
+                out[--at] = '0';
+            }
         }
-        return out.toString();
+        for (int i = 0; i < Math.max(digits, s); i++) {
+            if (s > 0 && i == s) {
+                out[--at] = '.';
+            }
+            out[--at] = (char) ('0' + digitsLeft % 10);
+            digitsLeft /= 10;
+        }
+        if (s > 0 && digits <= s) {
+            out[--at] = '.';
+            out[--at] = '0';
+        }
+        if (negative) {
+            out[--at] = '-';
+        }
+        return new String(out);
     }
 
     /** {@link #f} by exact decimal arithmetic on the binary value. */

@@ -16,23 +16,27 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.ToIntFunction;
 
 /**
- * The expressions of a ruleset, evaluated by EvalEx 3: arithmetic, comparisons, logic and the
+ * The expressions of a ruleset, read and validated by EvalEx 3: arithmetic, comparisons, logic and the
  * library's standard functions (MAX, MIN, SQRT, IF, ABS ...), plus one function per table of the
  * ruleset. No access to Java objects: values in are numbers, text, booleans and lists of text.
  *
- * <p>Each expression is parsed once, the first time it is used, and evaluated with only the values
- * of the names it uses (names are case-insensitive, as EvalEx reads them). Each thread keeps one
- * copy of each expression (they share the syntax tree) and binds its names anew for every
- * evaluation; the parameters are converted to decimals once, when the ruleset is loaded.
+ * <p>Each expression is parsed once, the first time it is used. A check's runs go through its {@link
+ * RuleLayout}: its expressions compiled to double arithmetic over slots ({@link CompiledExpression}), EvalEx
+ * behind them for anything the compiled form does not answer. EvalEx evaluates with only the values of the
+ * names an expression uses (names are case-insensitive, as EvalEx reads them); each thread keeps one copy of
+ * each expression (they share the syntax tree) and binds its names anew for every evaluation.
  */
 public final class RuleExpressions {
 
     private final ExpressionConfiguration configuration;
     private final Set<String> tables;
-    private final Map<String, Object> parameterValues;
+    private final Map<String, Double> parameterValues;
     private final Map<String, Parsed> parsed = new ConcurrentHashMap<>();
+    /** The layout of each check for each scope, by their identity: built once, used for every element. */
+    private final Map<LayoutKey, RuleLayout> layouts = new ConcurrentHashMap<>();
     /** This thread's copy of each expression, bound anew for each evaluation. */
     private final ThreadLocal<Map<String, Expression>> copies = ThreadLocal.withInitial(HashMap::new);
 
@@ -49,17 +53,46 @@ public final class RuleExpressions {
                 .withAdditionalFunctions(array);
         this.tables = new TreeSet<>(String.CASE_INSENSITIVE_ORDER);
         this.tables.addAll(tables.keySet());
-        Map<String, Object> values = new HashMap<>();
-        parameters.forEach((name, p) -> values.put(name, BigDecimal.valueOf(p.value())));
+        Map<String, Double> values = new HashMap<>();
+        parameters.forEach((name, p) -> values.put(name, p.value()));
         this.parameterValues = Map.copyOf(values);
     }
 
     /**
-     * The value of every parameter by name, as the expressions take it (a decimal, whose
-     * {@code doubleValue()} is the parameter's value): put them among the values of an evaluation.
+     * The names and compiled expressions of {@code check} run with the variables of {@code scope}, made the
+     * first time they are asked for.
      */
-    public Map<String, Object> parameterValues() {
-        return parameterValues;
+    public RuleLayout layout(CheckDef check, Map<String, Variable> scope) {
+        return layouts.computeIfAbsent(new LayoutKey(check, scope),
+                k -> new RuleLayout(this, check, scope.keySet(), parameterValues));
+    }
+
+    /** A check and a scope, compared by identity (hashing the records' contents costs more than the lookup saves). */
+    private record LayoutKey(CheckDef check, Map<String, Variable> scope) {
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof LayoutKey k && k.check == check && k.scope == scope;
+        }
+
+        @Override
+        public int hashCode() {
+            return 31 * System.identityHashCode(check) + System.identityHashCode(scope);
+        }
+    }
+
+    /** EvalEx's configuration: its decimals, the library's functions and the tables. */
+    ExpressionConfiguration configuration() {
+        return configuration;
+    }
+
+    /** {@code expression} compiled with its names in the slots {@code slotOf} gives; null when not compiled. */
+    CompiledExpression compile(String expression, ToIntFunction<String> slotOf) {
+        try {
+            return CompiledExpression.of(parse(expression).expression().getAbstractSyntaxTree(), slotOf,
+                    configuration);
+        } catch (ParseException e) {
+            return null;
+        }
     }
 
     /** The variable names an expression uses (table function names excluded); throws on a syntax error. */
@@ -141,7 +174,7 @@ public final class RuleExpressions {
     }
 
     /** A number result, or an exception naming the expression when it is not one. */
-    public double number(String expression, Map<String, Object> values) throws BaseException {
+    double number(String expression, Map<String, Object> values) throws BaseException {
         EvaluationValue v = evaluate(expression, values);
         if (!v.isNumberValue()) {
             throw new IllegalArgumentException("'" + expression + "' does not give a number");
@@ -150,7 +183,7 @@ public final class RuleExpressions {
     }
 
     /** A boolean result, or an exception naming the expression when it is not one. */
-    public boolean bool(String expression, Map<String, Object> values) throws BaseException {
+    boolean bool(String expression, Map<String, Object> values) throws BaseException {
         EvaluationValue v = evaluate(expression, values);
         if (!v.isBooleanValue()) {
             throw new IllegalArgumentException("'" + expression + "' is not a condition (true or false)");

@@ -56,7 +56,7 @@ final class PadScopes {
             return Values.missing("no reinforcement given");
         }
         Reinforcement r = ctx.pad.reinforcement().get();
-        Map<String, Object> v = sectionValues(ctx, r, asRequired);
+        Map<String, Object> v = new LinkedHashMap<>(ctx.detailingSection.get(() -> sectionValues(ctx, r, asRequired)));
         if (BARS.equals(scope)) {
             Axis axis = "x".equals(subject) ? Axis.X : Axis.Y;
             List<BarSet> sets = DetailingVariables.bars(ctx.section.get(), axis);

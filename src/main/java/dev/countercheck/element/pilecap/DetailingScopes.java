@@ -72,7 +72,7 @@ final class DetailingScopes {
             return Values.missing("no reinforcement given");
         }
         Reinforcement r = cap.reinforcement().get();
-        Map<String, Object> v = capValues(ctx, r, asRequired);
+        Map<String, Object> v = new LinkedHashMap<>(ctx.detailingSection.get(() -> capValues(ctx, r, asRequired)));
         if (BARS.equals(scope)) {
             Axis axis = "x".equals(subject) ? Axis.X : Axis.Y;
             List<BarSet> sets = DetailingVariables.bars(ctx.section.get(), axis);

@@ -1,0 +1,168 @@
+package dev.countercheck.ruleset;
+
+import com.ezylang.evalex.BaseException;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The names one check's expressions see, each given a slot once: the ruleset's parameters, {@code dir}, the
+ * variables of the check's scope and its derived quantities; and its expressions compiled against those slots
+ * ({@link CompiledExpression}), each with EvalEx behind it for what the compiled form does not answer. A run of
+ * the check on one subject holds its values in a {@link Frame}. Built once per check and scope ({@link
+ * RuleExpressions#layout}).
+ *
+ * <p>The values stand as they would in one map filled in this order, each name replacing an earlier of the same
+ * spelling: the scope's variables, {@code dir}, the parameters, then each derived quantity as it is computed.
+ */
+public final class RuleLayout {
+
+    private static final String DIR = "dir";
+
+    private final RuleExpressions expressions;
+    private final Map<String, Integer> slots = new HashMap<>();
+    private final List<String> names = new ArrayList<>();
+    /** The slots with the parameters' values filled in. */
+    private final Object[] parameters;
+    private final boolean[] isParameter;
+    private final Map<String, CompiledExpression> compiled = new HashMap<>();
+
+    RuleLayout(RuleExpressions expressions, CheckDef check, Iterable<String> variables,
+               Map<String, Double> parameterValues) {
+        this.expressions = expressions;
+        parameterValues.keySet().forEach(this::slot);
+        slot(DIR);
+        variables.forEach(this::slot);
+        check.derived().forEach(d -> slot(d.name()));
+        this.parameters = new Object[names.size()];
+        this.isParameter = new boolean[names.size()];
+        parameterValues.forEach((name, value) -> {
+            parameters[slots.get(name)] = value;
+            isParameter[slots.get(name)] = true;
+        });
+        List<String> texts = new ArrayList<>();
+        check.appliesWhen().ifPresent(texts::add);
+        check.derived().forEach(d -> texts.add(d.formula()));
+        check.requirements().forEach(r -> {
+            texts.add(r.that());
+            r.utilisation().ifPresent(texts::add);
+        });
+        check.cautions().forEach(c -> texts.add(c.when()));
+        for (String text : texts) {
+            CompiledExpression c = expressions.compile(text, this::slotOf);
+            if (c != null) {
+                compiled.put(text, c);
+            }
+        }
+    }
+
+    private void slot(String name) {
+        if (!slots.containsKey(name)) {
+            slots.put(name, names.size());
+            names.add(name);
+        }
+    }
+
+    /**
+     * The slot an expression's name reads, as EvalEx finds it among the values: the name as written, else the
+     * one name that differs from it only in case; -1 when there is none or several (the evaluator then
+     * resolves it). A slot without a value at the evaluation leaves it to the evaluator too.
+     */
+    private int slotOf(String name) {
+        Integer exact = slots.get(name);
+        if (exact != null) {
+            return exact;
+        }
+        int found = -1;
+        for (int i = 0; i < names.size(); i++) {
+            if (names.get(i).equalsIgnoreCase(name)) {
+                if (found >= 0) {
+                    return -1;
+                }
+                found = i;
+            }
+        }
+        return found;
+    }
+
+    /** The compiled form of one of the check's expressions; null when it is left to EvalEx. */
+    CompiledExpression compiled(String expression) {
+        return compiled.get(expression);
+    }
+
+    /** A run of the check on one subject: {@code variables} are its scope's values for it. */
+    public Frame frame(Map<String, Object> variables, String subject) {
+        return new Frame(variables, subject);
+    }
+
+    /** The values of one run of the check. */
+    public final class Frame {
+
+        private final Object[] values = parameters.clone();
+        /** Variables outside the layout (a scope that gives more than it declares); the evaluator takes these. */
+        private Map<String, Object> extra;
+
+        private Frame(Map<String, Object> variables, String subject) {
+            variables.forEach((name, value) -> {
+                Integer slot = slots.get(name);
+                if (slot == null) {
+                    extra = extra == null ? new HashMap<>() : extra;
+                    extra.put(name, value);
+                } else if (!isParameter[slot]) {
+                    values[slot] = value;
+                }
+            });
+            int dir = slots.get(DIR);
+            if (!isParameter[dir]) {
+                values[dir] = subject;
+            }
+        }
+
+        /** Sets a derived quantity, computed. */
+        public void put(String derived, double value) {
+            values[slots.get(derived)] = value;
+        }
+
+        /** The value of {@code name} as spelled, null when it has none. */
+        public Object get(String name) {
+            Integer slot = slots.get(name);
+            return slot != null ? values[slot] : extra == null ? null : extra.get(name);
+        }
+
+        /** A number result, or an exception naming the expression when it is not one. */
+        public double number(String expression) throws BaseException {
+            CompiledExpression c = compiled(expression);
+            double v = c == null ? Double.NaN : c.number(values);
+            return Double.isNaN(v) ? expressions.number(expression, asMap()) : v;
+        }
+
+        /** A boolean result, or an exception naming the expression when it is not one. */
+        public boolean bool(String expression) throws BaseException {
+            CompiledExpression c = compiled(expression);
+            Boolean b = c == null ? null : c.bool(values);
+            return b != null ? b : expressions.bool(expression, asMap());
+        }
+
+        private CompiledExpression compiled(String expression) {
+            return extra == null ? compiled.get(expression) : null;
+        }
+
+        /** The values by slot, as the compiled expressions read them. */
+        Object[] slots() {
+            return values;
+        }
+
+        /** Every value by name, for EvalEx. */
+        Map<String, Object> asMap() {
+            Map<String, Object> map = extra == null ? new HashMap<>() : new HashMap<>(extra);
+            for (int i = 0; i < values.length; i++) {
+                if (values[i] != null) {
+                    map.put(names.get(i), values[i]);
+                }
+            }
+            return map;
+        }
+    }
+}
