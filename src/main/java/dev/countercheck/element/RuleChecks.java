@@ -128,8 +128,8 @@ public final class RuleChecks {
             for (DerivedDef d : def.derived()) {
                 double v = ex.number(d.formula(), values);
                 values.put(d.name(), v);
-                steps.put(d.name(), b.trace(marked(Step.of(d.symbol(), d.formula(), substitute(d.formula(), values), v,
-                        d.unit(), d.clause() + " (" + def.origin() + ")"), d.formula(), rules)));
+                steps.put(d.name(), b.trace(marked(Step.ofRule(d.symbol(), d.formula(), substitute(d.formula(), values),
+                        v, d.unit(), d.clause() + " (" + def.origin() + ")"), d.formula(), rules)));
             }
             for (String name : def.values()) {
                 Step step = steps.get(name);

@@ -34,6 +34,8 @@ final class RuleNotation {
     private static final int POWER = 7;
     private static final int ATOM = 8;
 
+    private static final Memo<Optional<Node>> FORMULAS = new Memo<>(RuleNotation::parse, 4096);
+
     private final Map<String, String> symbols;
 
     /** @param symbols the symbol of each name that has one */
@@ -43,14 +45,32 @@ final class RuleNotation {
 
     /** The expression in the report's notation, or empty when it is not written in the rules' syntax. */
     Optional<String> render(String expression) {
-        return parse(expression).map(node -> node.text(this));
+        return parse(expression).map(this::text);
+    }
+
+    /** A parsed expression in the report's notation. */
+    String text(Node expression) {
+        return expression.text(this);
     }
 
     /** The names an expression writes (variables, parameters, tables), each once, in order; none when it is not one. */
     static List<String> names(String expression) {
+        return parse(expression).map(RuleNotation::names).orElse(List.of());
+    }
+
+    /** The names a parsed expression writes, each once, in order. */
+    static List<String> names(Node expression) {
         List<String> names = new ArrayList<>();
-        parse(expression).ifPresent(node -> node.collect(names));
+        expression.collect(names);
         return names;
+    }
+
+    /**
+     * {@link #parse} of a rule's formula, kept: the trees are immutable and every element's step of the same rule
+     * has the same formula (the substituted text, which differs, is parsed each time).
+     */
+    static Optional<Node> parsedFormula(String formula) {
+        return FORMULAS.get(formula);
     }
 
     /** The symbol the report writes for {@code name}, or the name itself when it has none. */
@@ -78,7 +98,7 @@ final class RuleNotation {
         Matcher m = TOKEN.matcher(expression);
         int at = 0;
         while (at < expression.length()) {
-            if (!m.find(at) || m.start() != at) {
+            if (!m.region(at, expression.length()).lookingAt()) {
                 return expression.substring(at).isBlank() ? tokens : null;
             }
             tokens.add(m.group().strip());
@@ -116,7 +136,16 @@ final class RuleNotation {
 
         public String text(RuleNotation notation) {
             String symbol = notation.symbol(name);
-            return symbol.matches(".*[/·+−].*") ? "(" + symbol + ")" : symbol;
+            return isExpression(symbol) ? "(" + symbol + ")" : symbol;
+        }
+
+        private static boolean isExpression(String symbol) {
+            for (int i = 0; i < symbol.length(); i++) {
+                if ("/·+−".indexOf(symbol.charAt(i)) >= 0) {
+                    return true;
+                }
+            }
+            return false;
         }
 
         @Override
