@@ -44,6 +44,7 @@ public final class HtmlReportWriter {
         freemarker.setWrapUncheckedExceptions(true);
         freemarker.setFallbackOnNullLoopVariable(false);
         freemarker.setNewBuiltinClassResolver(TemplateClassResolver.ALLOWS_NOTHING_RESOLVER);
+        freemarker.setObjectWrapper(new ReportObjectWrapper(Configuration.VERSION_2_3_34));
         return freemarker;
     }
 

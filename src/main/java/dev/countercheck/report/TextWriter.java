@@ -9,10 +9,7 @@ import java.io.Writer;
  */
 final class TextWriter extends Writer {
 
-    /** A one-element report's HTML is about 150 kB: start large enough that it is rarely copied. */
-    private static final int INITIAL = 1 << 16;
-
-    private final StringBuilder text = new StringBuilder(INITIAL);
+    private final StringBuilder text = new StringBuilder(1 << 14);
 
     @Override
     public void write(int c) {
