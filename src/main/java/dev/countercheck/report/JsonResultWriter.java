@@ -148,23 +148,11 @@ public final class JsonResultWriter {
         g.writeStringField("type", element.type());
         g.writeStringField("description", element.description());
         g.writeStringField("verdict", element.verdict().label());
-        g.writeArrayFieldStart("checks");
-        for (CheckResult check : element.checks()) {
-            check(g, check);
-        }
-        g.writeEndArray();
-        g.writeArrayFieldStart("findings");
-        for (Finding finding : element.findings()) {
-            finding(g, finding);
-        }
-        g.writeEndArray();
+        array(g, "checks", element.checks(), JsonResultWriter::check);
+        array(g, "findings", element.findings(), JsonResultWriter::finding);
         strings(g, "cautions", element.cautions());
         if (!element.combinations().isEmpty()) {
-            g.writeArrayFieldStart("combinations");
-            for (GeneratedCase c : element.combinations()) {
-                combination(g, c);
-            }
-            g.writeEndArray();
+            array(g, "combinations", element.combinations(), JsonResultWriter::combination);
         }
         g.writeEndObject();
     }
@@ -204,16 +192,8 @@ public final class JsonResultWriter {
             g.writeEndObject();
         }
         g.writeEndObject();
-        g.writeArrayFieldStart("claims");
-        for (ClaimComparison claim : check.claims()) {
-            claim(g, claim);
-        }
-        g.writeEndArray();
-        g.writeArrayFieldStart("trace");
-        for (Step step : check.trace()) {
-            step(g, step);
-        }
-        g.writeEndArray();
+        array(g, "claims", check.claims(), JsonResultWriter::claim);
+        array(g, "trace", check.trace(), JsonResultWriter::step);
         g.writeEndObject();
     }
 
@@ -262,11 +242,22 @@ public final class JsonResultWriter {
     }
 
     private static void strings(JsonGenerator g, String name, List<String> texts) throws IOException {
+        array(g, name, texts, JsonGenerator::writeString);
+    }
+
+    /** The array {@code name} of {@code items}, each written by {@code item}. */
+    private static <T> void array(JsonGenerator g, String name, List<T> items, Item<T> item) throws IOException {
         g.writeArrayFieldStart(name);
-        for (String text : texts) {
-            g.writeString(text);
+        for (T t : items) {
+            item.write(g, t);
         }
         g.writeEndArray();
+    }
+
+    /** Writes one item of an array. */
+    @FunctionalInterface
+    private interface Item<T> {
+        void write(JsonGenerator g, T item) throws IOException;
     }
 
     /** Every verdict and severity appears, in the order of the enums, with 0 where the map has none. */
