@@ -21,7 +21,8 @@ import java.util.function.Supplier;
 /**
  * The CPU time of this thread per operation (review of one 4-pile and one 9-pile cap and one pad footing, JSON and HTML
  * of one element), warm: unlike JMH's wall-clock average it stays meaningful while other processes
- * compete for the cores. Median and spread over {@code -Dbatches=N} batches (default 7).
+ * compete for the cores. Median and spread over {@code -Dbatches=N} batches (default 7). Arguments, when given,
+ * pick the operations whose name contains one of them ({@code cpu HTML JSON}).
  */
 public final class ElementCpuTime {
 
@@ -30,7 +31,10 @@ public final class ElementCpuTime {
     private ElementCpuTime() {
     }
 
+    private static List<String> picked = List.of();
+
     public static void main(String[] args) throws Exception {
+        picked = List.of(args);
         int batches = Integer.getInteger("batches", 7);
         Path dir = Files.createTempDirectory("countercheck-bench");
         ProjectReviewer reviewer = new ProjectReviewer(new Review.ToolInfo("countercheck", "bench"));
@@ -54,6 +58,10 @@ public final class ElementCpuTime {
     }
 
     private static void report(String what, int batches, Supplier<Object> op) {
+        if (!picked.isEmpty() && picked.stream().noneMatch(what::contains)) {
+            return;
+        }
+        warm(op);
         int perBatch = calibrate(op);
         for (int i = 0; i < 3; i++) {
             batch(op, perBatch);
@@ -65,6 +73,19 @@ public final class ElementCpuTime {
         List<Double> sorted = micros.stream().sorted().toList();
         System.out.printf("%-24s median %8.1f µs CPU per op (min %.1f, max %.1f; %d batches of %d)%n", what,
                 sorted.get(sorted.size() / 2), sorted.get(0), sorted.get(sorted.size() - 1), batches, perBatch);
+    }
+
+    /**
+     * Runs the operation for about two seconds of CPU, so that its first, cold runs (class loading, template
+     * compilation, the interpreter) neither count in the calibration nor leave it at a batch of one or two.
+     */
+    private static void warm(Supplier<Object> op) {
+        long t0 = THREADS.getCurrentThreadCpuTime();
+        int runs = 0;
+        while (runs < 20 || THREADS.getCurrentThreadCpuTime() - t0 < 2_000_000_000L) {
+            batch(op, 1);
+            runs++;
+        }
     }
 
     /** Operations to fill about half a second of CPU once warm. */

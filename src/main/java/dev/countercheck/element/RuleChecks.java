@@ -126,7 +126,7 @@ public final class RuleChecks {
             for (DerivedDef d : def.derived()) {
                 double v = values.number(d.formula());
                 values.put(d.name(), v);
-                steps.put(d.name(), b.trace(marked(Step.of(d.symbol(), d.formula(), substitute(d.formula(), values::get),
+                steps.put(d.name(), b.trace(marked(Step.ofRule(d.symbol(), d.formula(), substitute(d.formula(), values::get),
                         v, d.unit(), d.clause() + " (" + def.origin() + ")"), d.formula(), rules)));
             }
             for (String name : def.values()) {

@@ -19,9 +19,12 @@ import java.util.Optional;
  * @param clause      where the formula comes from, e.g. {@code "EN 1992-1-1 6.2.2(1), Exp. (6.2a)"},
  *                    or {@code "common practice"}
  * @param remark      a cap, floor or branch applied, when there was one
+ * @param fromRule    whether a ruleset's rule derived it: its formula and substituted text are then written in
+ *                    the rules' expression syntax, not the standard's notation (the report rewrites them; the
+ *                    JSON result does not carry the mark)
  */
 public record Step(String symbol, String formula, String substituted, double value, String unit,
-                   String clause, Optional<String> remark) {
+                   String clause, Optional<String> remark, boolean fromRule) {
 
     public Step {
         if (Double.isNaN(value) || Double.isInfinite(value)) {
@@ -29,10 +32,22 @@ public record Step(String symbol, String formula, String substituted, double val
         }
     }
 
+    /** A step the code built, not a rule. */
+    public Step(String symbol, String formula, String substituted, double value, String unit, String clause,
+                Optional<String> remark) {
+        this(symbol, formula, substituted, value, unit, clause, remark, false);
+    }
+
     /** A step with no remark. */
     public static Step of(String symbol, String formula, String substituted, double value, String unit,
                           String clause) {
         return new Step(symbol, formula, substituted, value, unit, clause, Optional.empty());
+    }
+
+    /** A step a ruleset's rule derived, its formula and substituted text in the rules' syntax; no remark. */
+    public static Step ofRule(String symbol, String formula, String substituted, double value, String unit,
+                              String clause) {
+        return new Step(symbol, formula, substituted, value, unit, clause, Optional.empty(), true);
     }
 
     /** A step whose value was capped, floored, or chose a branch; {@code remark} says which. */
@@ -44,6 +59,6 @@ public record Step(String symbol, String formula, String substituted, double val
     /** The same step with a remark added (or appended to the existing one). */
     public Step remarked(String more) {
         String text = remark.map(r -> r + "; " + more).orElse(more);
-        return new Step(symbol, formula, substituted, value, unit, clause, Optional.of(text));
+        return new Step(symbol, formula, substituted, value, unit, clause, Optional.of(text), fromRule);
     }
 }

@@ -22,25 +22,22 @@ import java.util.regex.Pattern;
  */
 final class Derivation {
 
-    private static final Pattern PARAMETER = Pattern.compile("ruleset parameter \\S+");
+    private static final String PARAMETER_PREFIX = "ruleset parameter ";
+    private static final Pattern PARAMETER = Pattern.compile(PARAMETER_PREFIX + "\\S+");
     private static final Pattern PARAMETER_VALUE = Pattern.compile("(\\S+) (\\(.+\\))");
 
     private final Glossary glossary;
     private final Map<String, String> rulesetNames;
     private final RuleNotation notation;
-    private final List<String> rulesetFiles;
 
     /**
      * @param rulesetNames what each name a rule's formula may write means
      * @param ruleSymbols  the symbol of each such name that has one
-     * @param rulesetFiles the ruleset's files: a step whose clause ends with one in brackets came from a rule
      */
-    Derivation(Glossary glossary, Map<String, String> rulesetNames, Map<String, String> ruleSymbols,
-               List<String> rulesetFiles) {
+    Derivation(Glossary glossary, Map<String, String> rulesetNames, Map<String, String> ruleSymbols) {
         this.glossary = glossary;
         this.rulesetNames = rulesetNames;
         this.notation = new RuleNotation(ruleSymbols);
-        this.rulesetFiles = rulesetFiles;
     }
 
     /** The steps of check {@code checkId}'s trace, numbered from 1, anchored {@code <anchor>-s<n>}. */
@@ -50,28 +47,30 @@ final class Derivation {
         for (int i = 0; i < trace.size(); i++) {
             Step step = trace.get(i);
             String name = FormulaSymbols.base(step.symbol());
-            boolean fromRule = rulesetFiles.stream().anyMatch(f -> step.clause().endsWith(" (" + f + ")"));
-            String symbol = fromRule || name.contains("_") ? notation.symbol(name) : name;
+            boolean fromRule = step.fromRule();
+            String symbol = fromRule || name.indexOf('_') >= 0 ? notation.symbol(name) : name;
             Optional<String> quantity = meaning(symbol, checkId).or(() -> Optional.ofNullable(rulesetNames.get(name)));
             boolean definesSymbol = quantity.isPresent() && !quantity.get().equals(defined.get(symbol));
             quantity.ifPresent(q -> defined.put(symbol, q));
             List<String> uses = new ArrayList<>();
             uses.add(symbol);
             List<Definition> where = new ArrayList<>();
-            Optional<String> ruleFormula = fromRule ? notation.render(step.formula()) : Optional.empty();
-            if (ruleFormula.isPresent()) {
-                defineRuleNames(step.formula(), symbol, defined, uses, where);
+            Optional<RuleNotation.Node> rule = fromRule ? RuleNotation.parsedFormula(step.formula()) : Optional.empty();
+            if (rule.isPresent()) {
+                defineRuleNames(RuleNotation.names(rule.get()), symbol, defined, uses, where);
             } else {
                 defineSymbols(step.formula(), symbol, checkId, defined, uses, where);
             }
-            String formula = ruleFormula.orElse(step.formula());
-            String substituted = ruleFormula.isPresent()
+            String formula = rule.map(notation::text).orElse(step.formula());
+            String substituted = rule.isPresent()
                     ? notation.render(step.substituted()).orElse(step.substituted()) : step.substituted();
             String value = ReportNumbers.display(step.value(), step.unit());
-            Matcher parameter = PARAMETER_VALUE.matcher(substituted);
-            if (PARAMETER.matcher(formula).matches() && parameter.matches()) {
-                formula = formula + " " + parameter.group(2);
-                substituted = parameter.group(1);
+            if (formula.startsWith(PARAMETER_PREFIX) && PARAMETER.matcher(formula).matches()) {
+                Matcher parameter = PARAMETER_VALUE.matcher(substituted);
+                if (parameter.matches()) {
+                    formula = formula + " " + parameter.group(2);
+                    substituted = parameter.group(1);
+                }
             }
             if (substituted.equals(formula) || substituted.equals(value) || substituted.equals(Num.f(step.value()))) {
                 substituted = "";
@@ -87,7 +86,7 @@ final class Derivation {
     /** The symbols of a formula the code wrote, each defined by the glossary (or the ruleset) at its first use. */
     private void defineSymbols(String formula, String symbol, String checkId, Map<String, String> defined,
                                List<String> uses, List<Definition> where) {
-        for (String name : FormulaSymbols.in(formula, glossary)) {
+        for (String name : glossary.symbolsIn(formula)) {
             if (name.equals(symbol)) {
                 continue;
             }
@@ -101,12 +100,12 @@ final class Derivation {
     }
 
     /**
-     * The names of a rule's formula, each written as its symbol and defined by the ruleset's declaration at its
+     * The names of a rule's formula ({@code names}), each written as its symbol and defined by the ruleset's declaration at its
      * first use, unless an earlier step defined that symbol already (a derived quantity by its own step).
      */
-    private void defineRuleNames(String formula, String symbol, Map<String, String> defined, List<String> uses,
+    private void defineRuleNames(List<String> names, String symbol, Map<String, String> defined, List<String> uses,
                                  List<Definition> where) {
-        for (String name : RuleNotation.names(formula)) {
+        for (String name : names) {
             String shown = notation.symbol(name);
             if (shown.equals(symbol) || uses.contains(shown)) {
                 continue;

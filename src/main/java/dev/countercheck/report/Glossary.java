@@ -29,6 +29,9 @@ final class Glossary {
 
     static final String RESOURCE = "/report/symbols.yaml";
 
+    /** How many answers of each kind are kept: the checks and symbols of a review need a few hundred. */
+    private static final int MEMO_LIMIT = 8192;
+
     private static final class Bundled {
         static final Glossary INSTANCE = read(RESOURCE);
     }
@@ -36,6 +39,10 @@ final class Glossary {
     private final Map<String, List<Meaning>> exact;
     private final Map<Pattern, List<Meaning>> numbered;
     private final Set<String> words;
+    /** {@link #meaning} by symbol and check id, joined by a line break (neither holds one). */
+    private final Memo<Optional<String>> meanings = new Memo<>(this::lookUp, MEMO_LIMIT);
+    private final Memo<List<String>> formulaSymbols =
+            new Memo<>(formula -> List.copyOf(FormulaSymbols.in(formula, this)), MEMO_LIMIT);
 
     private record Meaning(Pattern checks, String text) {
     }
@@ -53,6 +60,18 @@ final class Glossary {
 
     /** What {@code symbol} means in check {@code checkId}, when the glossary defines it. */
     Optional<String> meaning(String symbol, String checkId) {
+        return meanings.get(symbol + "\n" + checkId);
+    }
+
+    /** The symbols of {@code formula} ({@link FormulaSymbols#in}, with this glossary's words left out). */
+    List<String> symbolsIn(String formula) {
+        return formulaSymbols.get(formula);
+    }
+
+    private Optional<String> lookUp(String symbolAndCheck) {
+        int split = symbolAndCheck.lastIndexOf('\n');
+        String symbol = symbolAndCheck.substring(0, split);
+        String checkId = symbolAndCheck.substring(split + 1);
         List<Meaning> meanings = exact.get(symbol);
         if (meanings == null) {
             meanings = numbered.entrySet().stream().filter(e -> e.getKey().matcher(symbol).matches())

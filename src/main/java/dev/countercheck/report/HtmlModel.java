@@ -297,8 +297,10 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
      */
     static HtmlModel of(Review review, ReviewRound round, Paging paging) {
         List<ElementReview> reviewed = review.elements();
+        Review.RulesetInfo ruleset = review.ruleset();
+        Derivation derivation = new Derivation(Glossary.bundled(), ruleset.names(), ruleset.symbols());
         List<ElementView> elements = new ElementViews(reviewed.size(), i -> element(reviewed.get(i), i + 1, round,
-                review.ruleset()));
+                derivation));
         List<FindingRow> register = IntStream.range(0, reviewed.size())
                 .mapToObj(i -> findingRows(reviewed.get(i), "e" + (i + 1), round))
                 .flatMap(List::stream)
@@ -396,10 +398,8 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
     }
 
     private static ElementView element(ElementReview element, int position, ReviewRound round,
-                                       Review.RulesetInfo ruleset) {
+                                       Derivation derivation) {
         String anchor = "e" + position;
-        Derivation derivation = new Derivation(Glossary.bundled(), ruleset.names(), ruleset.symbols(),
-                ruleset.files());
         List<CheckView> checks = IntStream.range(0, element.checks().size())
                 .mapToObj(i -> check(element, element.checks().get(i), checkAnchor(anchor, i), derivation))
                 .toList();

@@ -10,7 +10,6 @@ import freemarker.template.TemplateException;
 import freemarker.template.TemplateExceptionHandler;
 
 import java.io.IOException;
-import java.io.StringWriter;
 import java.io.Writer;
 import java.util.ArrayList;
 import java.util.List;
@@ -45,6 +44,7 @@ public final class HtmlReportWriter {
         freemarker.setWrapUncheckedExceptions(true);
         freemarker.setFallbackOnNullLoopVariable(false);
         freemarker.setNewBuiltinClassResolver(TemplateClassResolver.ALLOWS_NOTHING_RESOLVER);
+        freemarker.setObjectWrapper(new ReportObjectWrapper(Configuration.VERSION_2_3_34));
         return freemarker;
     }
 
@@ -82,11 +82,11 @@ public final class HtmlReportWriter {
 
     /** The page of template {@code name} for {@code model}. */
     String render(String name, Object model) {
-        StringWriter out = new StringWriter();
+        TextWriter out = new TextWriter();
         try {
             render(name, model, out);
         } catch (IOException e) {
-            throw new IllegalStateException("a StringWriter does not fail", e);
+            throw new IllegalStateException("text in memory does not fail", e);
         }
         return out.toString();
     }

@@ -9,7 +9,6 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectWriter;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.json.JsonMapper;
-import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.CheckResult;
@@ -24,7 +23,6 @@ import dev.countercheck.review.Verdict;
 import dev.countercheck.round.ReviewRound;
 
 import java.io.IOException;
-import java.io.StringWriter;
 import java.io.Writer;
 import java.util.List;
 import java.util.Map;
@@ -37,7 +35,8 @@ import java.util.Optional;
  * ({@code review_date}, {@code assumptions}, the submission's {@code prepared_by} and
  * {@code date}, the ruleset's {@code files}) sit where they read naturally. Absent optional
  * fields are left out, never written as {@code null}. Numbers are rounded as
- * {@link ReportNumbers} says. Two-space indent, {@code "\n"} line ends, a trailing newline:
+ * {@link ReportNumbers} says. Streamed into the generator as it goes, element by element, with no tree
+ * built on the way (the header and the round's parts excepted, which are small). Two-space indent, {@code "\n"} line ends, a trailing newline:
  * the same review always gives the same bytes.
  */
 public final class JsonResultWriter {
@@ -63,11 +62,11 @@ public final class JsonResultWriter {
      * with the previous revision where the round has them ({@link RoundJson}).
      */
     public String write(Review review, ReviewRound round) {
-        StringWriter out = new StringWriter();
+        TextWriter out = new TextWriter();
         try {
             write(review, round, out);
         } catch (IOException e) {
-            // A StringWriter does not fail; a tree of strings and numbers always serialises.
+            // Text in memory does not fail; strings and numbers always serialise.
             throw new IllegalStateException("could not serialise the review result", e);
         }
         return out.toString();
@@ -89,7 +88,7 @@ public final class JsonResultWriter {
             g.writeStringField("verdict", review.verdict().label());
             g.writeArrayFieldStart("elements");
             for (ElementReview element : review.elements()) {
-                MAPPER.writeTree(g, element(element));
+                element(g, element);
             }
             g.writeEndArray();
             field(g, "summary", summary(review.summary()));
@@ -139,98 +138,126 @@ public final class JsonResultWriter {
         node.put("id", ruleset.id());
         node.put("title", ruleset.title());
         node.put("sha256", ruleset.sha256());
-        strings(node.putArray("files"), ruleset.files());
+        ruleset.files().forEach(node.putArray("files")::add);
         return node;
     }
 
-    private static ObjectNode element(ElementReview element) {
-        ObjectNode node = MAPPER.createObjectNode();
-        node.put("id", element.id());
-        node.put("type", element.type());
-        node.put("description", element.description());
-        node.put("verdict", element.verdict().label());
-        ArrayNode checks = node.putArray("checks");
-        element.checks().forEach(c -> checks.add(check(c)));
-        ArrayNode findings = node.putArray("findings");
-        element.findings().forEach(f -> findings.add(finding(f)));
-        strings(node.putArray("cautions"), element.cautions());
+    private static void element(JsonGenerator g, ElementReview element) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("id", element.id());
+        g.writeStringField("type", element.type());
+        g.writeStringField("description", element.description());
+        g.writeStringField("verdict", element.verdict().label());
+        array(g, "checks", element.checks(), JsonResultWriter::check);
+        array(g, "findings", element.findings(), JsonResultWriter::finding);
+        strings(g, "cautions", element.cautions());
         if (!element.combinations().isEmpty()) {
-            ArrayNode generated = node.putArray("combinations");
-            element.combinations().forEach(c -> generated.add(combination(c)));
+            array(g, "combinations", element.combinations(), JsonResultWriter::combination);
         }
-        return node;
+        g.writeEndObject();
     }
 
-    private static ObjectNode combination(GeneratedCase c) {
-        ObjectNode node = MAPPER.createObjectNode();
-        node.put("name", c.name());
-        node.put("kind", c.kind());
-        node.put("N", ReportNumbers.quantity(c.nKn()));
-        node.put("Mx", ReportNumbers.quantity(c.mxKnm()));
-        node.put("My", ReportNumbers.quantity(c.myKnm()));
-        node.put("Hx", ReportNumbers.quantity(c.hxKn()));
-        node.put("Hy", ReportNumbers.quantity(c.hyKn()));
-        node.put("gamma_self_weight", ReportNumbers.ratio(c.selfWeightFactor()));
-        node.set("trace", step(c.trace()));
-        strings(node.putArray("governs"), c.governs());
-        return node;
+    private static void combination(JsonGenerator g, GeneratedCase c) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("name", c.name());
+        g.writeStringField("kind", c.kind());
+        number(g, "N", ReportNumbers.quantityText(c.nKn()));
+        number(g, "Mx", ReportNumbers.quantityText(c.mxKnm()));
+        number(g, "My", ReportNumbers.quantityText(c.myKnm()));
+        number(g, "Hx", ReportNumbers.quantityText(c.hxKn()));
+        number(g, "Hy", ReportNumbers.quantityText(c.hyKn()));
+        number(g, "gamma_self_weight", ReportNumbers.ratioText(c.selfWeightFactor()));
+        g.writeFieldName("trace");
+        step(g, c.trace());
+        strings(g, "governs", c.governs());
+        g.writeEndObject();
     }
 
-    private static ObjectNode check(CheckResult check) {
-        ObjectNode node = MAPPER.createObjectNode();
-        node.put("id", check.id());
-        node.put("title", check.title());
-        node.put("basis", check.basis());
-        node.put("status", check.status().label());
-        check.utilisation().ifPresent(u -> node.put("utilisation", ReportNumbers.ratio(u)));
-        putIfPresent(node, "governing_case", check.governingCase());
-        putIfPresent(node, "reason", check.reason());
-        ObjectNode values = node.putObject("values");
-        check.values().forEach((name, value) -> values.set(name, value(value)));
-        ArrayNode claims = node.putArray("claims");
-        check.claims().forEach(c -> claims.add(claim(c)));
-        ArrayNode trace = node.putArray("trace");
-        check.trace().forEach(s -> trace.add(step(s)));
-        return node;
+    private static void check(JsonGenerator g, CheckResult check) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("id", check.id());
+        g.writeStringField("title", check.title());
+        g.writeStringField("basis", check.basis());
+        g.writeStringField("status", check.status().label());
+        if (check.utilisation().isPresent()) {
+            number(g, "utilisation", ReportNumbers.ratioText(check.utilisation().getAsDouble()));
+        }
+        stringIfPresent(g, "governing_case", check.governingCase());
+        stringIfPresent(g, "reason", check.reason());
+        g.writeObjectFieldStart("values");
+        for (Map.Entry<String, Value> value : check.values().entrySet()) {
+            g.writeObjectFieldStart(value.getKey());
+            number(g, "value", ReportNumbers.quantityText(value.getValue().value()));
+            g.writeStringField("unit", value.getValue().unit());
+            g.writeEndObject();
+        }
+        g.writeEndObject();
+        array(g, "claims", check.claims(), JsonResultWriter::claim);
+        array(g, "trace", check.trace(), JsonResultWriter::step);
+        g.writeEndObject();
     }
 
-    private static ObjectNode value(Value value) {
-        ObjectNode node = MAPPER.createObjectNode();
-        node.put("value", ReportNumbers.quantity(value.value()));
-        node.put("unit", value.unit());
-        return node;
+    private static void claim(JsonGenerator g, ClaimComparison claim) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("quantity", claim.quantity());
+        number(g, "claimed", ReportNumbers.claimedText(claim.claimed()));
+        number(g, "computed", ReportNumbers.quantityText(claim.computed()));
+        number(g, "difference", ReportNumbers.ratioText(claim.difference()));
+        g.writeStringField("verdict", claim.verdict().label());
+        g.writeEndObject();
     }
 
-    private static ObjectNode claim(ClaimComparison claim) {
-        ObjectNode node = MAPPER.createObjectNode();
-        node.put("quantity", claim.quantity());
-        node.put("claimed", ReportNumbers.claimed(claim.claimed()));
-        node.put("computed", ReportNumbers.quantity(claim.computed()));
-        node.put("difference", ReportNumbers.ratio(claim.difference()));
-        node.put("verdict", claim.verdict().label());
-        return node;
+    private static void step(JsonGenerator g, Step step) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("symbol", step.symbol());
+        g.writeStringField("formula", step.formula());
+        g.writeStringField("substituted", step.substituted());
+        number(g, "value", ReportNumbers.quantityText(step.value()));
+        g.writeStringField("unit", step.unit());
+        g.writeStringField("clause", step.clause());
+        stringIfPresent(g, "remark", step.remark());
+        g.writeEndObject();
     }
 
-    private static ObjectNode step(Step step) {
-        ObjectNode node = MAPPER.createObjectNode();
-        node.put("symbol", step.symbol());
-        node.put("formula", step.formula());
-        node.put("substituted", step.substituted());
-        node.put("value", ReportNumbers.quantity(step.value()));
-        node.put("unit", step.unit());
-        node.put("clause", step.clause());
-        putIfPresent(node, "remark", step.remark());
-        return node;
+    private static void finding(JsonGenerator g, Finding finding) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("id", finding.id());
+        g.writeStringField("severity", finding.severity().label());
+        g.writeStringField("check", finding.check());
+        g.writeStringField("message", finding.message());
+        g.writeStringField("basis", finding.basis());
+        g.writeEndObject();
     }
 
-    private static ObjectNode finding(Finding finding) {
-        ObjectNode node = MAPPER.createObjectNode();
-        node.put("id", finding.id());
-        node.put("severity", finding.severity().label());
-        node.put("check", finding.check());
-        node.put("message", finding.message());
-        node.put("basis", finding.basis());
-        return node;
+    /** A number already written as its plain decimal text ({@link ReportNumbers}), unquoted. */
+    private static void number(JsonGenerator g, String name, String plain) throws IOException {
+        g.writeFieldName(name);
+        g.writeNumber(plain);
+    }
+
+    private static void stringIfPresent(JsonGenerator g, String name, Optional<String> text) throws IOException {
+        if (text.isPresent()) {
+            g.writeStringField(name, text.get());
+        }
+    }
+
+    private static void strings(JsonGenerator g, String name, List<String> texts) throws IOException {
+        array(g, name, texts, JsonGenerator::writeString);
+    }
+
+    /** The array {@code name} of {@code items}, each written by {@code item}. */
+    private static <T> void array(JsonGenerator g, String name, List<T> items, Item<T> item) throws IOException {
+        g.writeArrayFieldStart(name);
+        for (T t : items) {
+            item.write(g, t);
+        }
+        g.writeEndArray();
+    }
+
+    /** Writes one item of an array. */
+    @FunctionalInterface
+    private interface Item<T> {
+        void write(JsonGenerator g, T item) throws IOException;
     }
 
     /** Every verdict and severity appears, in the order of the enums, with 0 where the map has none. */
@@ -253,10 +280,6 @@ public final class JsonResultWriter {
 
     private static void putIfPresent(ObjectNode node, String key, Optional<String> text) {
         text.ifPresent(t -> node.put(key, t));
-    }
-
-    private static void strings(ArrayNode array, List<String> texts) {
-        texts.forEach(array::add);
     }
 
     /** Two-space indent, {@code "key": value}, {@code []} and {@code {}} when empty, {@code "\n"} on every platform. */

@@ -45,9 +45,9 @@ final class ReportNumbers {
         return BigDecimal.valueOf(value).stripTrailingZeros();
     }
 
-    /** Text of {@link #quantity}. */
+    /** Text of {@link #quantity}: the trace's own text, which is already plain ({@link Num#f}). */
     static String quantityText(double value) {
-        return quantity(value).toPlainString();
+        return Num.f(value);
     }
 
     /** Text of {@link #ratio}. */
@@ -77,16 +77,18 @@ final class ReportNumbers {
      * significant figures ({@code 0.003125 → "0.003125"}).
      */
     static String display(double value, String unit) {
-        BigDecimal rounded = quantity(value);
+        String figures = Num.f(value);
         int decimals = switch (unit) {
             case "mm2" -> 0;
             case "mm", "kN", "kNm", "deg" -> 1;
             default -> Integer.MAX_VALUE;
         };
-        if (rounded.scale() > decimals) {
-            rounded = new BigDecimal(value).setScale(decimals, RoundingMode.HALF_EVEN);
+        int point = figures.indexOf('.');
+        if (point < 0 || figures.length() - point - 1 <= decimals) {
+            // Four figures within the unit's decimals: Num.f's text is already plain, without trailing zeros.
+            return figures;
         }
-        rounded = rounded.stripTrailingZeros();
+        BigDecimal rounded = new BigDecimal(value).setScale(decimals, RoundingMode.HALF_EVEN).stripTrailingZeros();
         return rounded.signum() == 0 ? "0" : rounded.toPlainString();
     }
 

@@ -4,8 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * A ruleset's expression written in the notation of the other derivation steps, for the report only (the JSON keeps
@@ -19,9 +17,6 @@ import java.util.regex.Pattern;
  */
 final class RuleNotation {
 
-    private static final Pattern TOKEN = Pattern.compile(
-            "\\s*(?:(?<number>\\d+(?:\\.\\d+)?(?:[eE][+-]?\\d+)?)|(?<name>[A-Za-z_][A-Za-z0-9_]*)"
-                    + "|(?<text>\"[^\"]*\")|(?<list>\\[[^\\[\\]\"]*])|(?<op>\\|\\||&&|<=|>=|==|!=|[-+*/^<>(),!]))");
 
     /** The precedence of each kind of node, loosest first. */
     private static final int CONDITIONAL = 0;
@@ -34,6 +29,10 @@ final class RuleNotation {
     private static final int POWER = 7;
     private static final int ATOM = 8;
 
+    private static final List<String> TWO_CHARACTER_OPERATORS = List.of("||", "&&", "<=", ">=", "==", "!=");
+    private static final List<String> COMPARISONS = List.of("<=", ">=", "==", "!=", "<", ">");
+    private static final Memo<Optional<Node>> FORMULAS = new Memo<>(RuleNotation::parse, 4096);
+
     private final Map<String, String> symbols;
 
     /** @param symbols the symbol of each name that has one */
@@ -43,14 +42,32 @@ final class RuleNotation {
 
     /** The expression in the report's notation, or empty when it is not written in the rules' syntax. */
     Optional<String> render(String expression) {
-        return parse(expression).map(node -> node.text(this));
+        return parse(expression).map(this::text);
+    }
+
+    /** A parsed expression in the report's notation. */
+    String text(Node expression) {
+        return expression.text(this);
     }
 
     /** The names an expression writes (variables, parameters, tables), each once, in order; none when it is not one. */
     static List<String> names(String expression) {
+        return parse(expression).map(RuleNotation::names).orElse(List.of());
+    }
+
+    /** The names a parsed expression writes, each once, in order. */
+    static List<String> names(Node expression) {
         List<String> names = new ArrayList<>();
-        parse(expression).ifPresent(node -> node.collect(names));
+        expression.collect(names);
         return names;
+    }
+
+    /**
+     * {@link #parse} of a rule's formula, kept: the trees are immutable and every element's step of the same rule
+     * has the same formula (the substituted text, which differs, is parsed each time).
+     */
+    static Optional<Node> parsedFormula(String formula) {
+        return FORMULAS.get(formula);
     }
 
     /** The symbol the report writes for {@code name}, or the name itself when it has none. */
@@ -72,19 +89,97 @@ final class RuleNotation {
         }
     }
 
-    /** The tokens of the expression, or null when something in it is not a token of the rules' syntax. */
-    private static List<String> tokens(String expression) {
+    /**
+     * The tokens of the expression, or null when something in it is not a token of the rules' syntax: numbers
+     * ({@code 12}, {@code 0.5}, {@code 2e-3}), names, quoted texts, lists ({@code [XC2, XD1]}) and the operators
+     * {@code || && <= >= == != - + * / ^ < > ( ) , !}, with spaces between them.
+     */
+    static List<String> tokens(String expression) {
         List<String> tokens = new ArrayList<>();
-        Matcher m = TOKEN.matcher(expression);
+        int length = expression.length();
         int at = 0;
-        while (at < expression.length()) {
-            if (!m.find(at) || m.start() != at) {
+        while (at < length) {
+            int start = at;
+            while (start < length && isSpace(expression.charAt(start))) {
+                start++;
+            }
+            int end = start < length ? tokenEnd(expression, start) : -1;
+            if (end < 0) {
                 return expression.substring(at).isBlank() ? tokens : null;
             }
-            tokens.add(m.group().strip());
-            at = m.end();
+            tokens.add(expression.substring(start, end));
+            at = end;
         }
         return tokens;
+    }
+
+    /** Where the token starting at {@code start} ends, or -1 when none starts there. */
+    private static int tokenEnd(String s, int start) {
+        char c = s.charAt(start);
+        if (isDigit(c)) {
+            int end = digits(s, start);
+            if (end + 1 < s.length() && s.charAt(end) == '.' && isDigit(s.charAt(end + 1))) {
+                end = digits(s, end + 1);
+            }
+            if (end < s.length() && (s.charAt(end) == 'e' || s.charAt(end) == 'E')) {
+                int exponent = end + 1;
+                if (exponent < s.length() && (s.charAt(exponent) == '+' || s.charAt(exponent) == '-')) {
+                    exponent++;
+                }
+                if (exponent < s.length() && isDigit(s.charAt(exponent))) {
+                    end = digits(s, exponent);
+                }
+            }
+            return end;
+        }
+        if (isLetter(c) || c == '_') {
+            int end = start + 1;
+            while (end < s.length() && (isLetter(s.charAt(end)) || isDigit(s.charAt(end)) || s.charAt(end) == '_')) {
+                end++;
+            }
+            return end;
+        }
+        if (c == '"') {
+            int close = s.indexOf('"', start + 1);
+            return close < 0 ? -1 : close + 1;
+        }
+        if (c == '[') {
+            for (int i = start + 1; i < s.length(); i++) {
+                char d = s.charAt(i);
+                if (d == ']') {
+                    return i + 1;
+                }
+                if (d == '[' || d == '"') {
+                    return -1;
+                }
+            }
+            return -1;
+        }
+        if (start + 1 < s.length() && TWO_CHARACTER_OPERATORS.contains(s.substring(start, start + 2))) {
+            return start + 2;
+        }
+        return "-+*/^<>(),!".indexOf(c) >= 0 ? start + 1 : -1;
+    }
+
+    private static int digits(String s, int from) {
+        int end = from;
+        while (end < s.length() && isDigit(s.charAt(end))) {
+            end++;
+        }
+        return end;
+    }
+
+    private static boolean isDigit(char c) {
+        return c >= '0' && c <= '9';
+    }
+
+    private static boolean isLetter(char c) {
+        return c >= 'a' && c <= 'z' || c >= 'A' && c <= 'Z';
+    }
+
+    /** The white space between tokens: space, tab, the line breaks, form feed, vertical tab. */
+    private static boolean isSpace(char c) {
+        return c == ' ' || c == '\t' || c == '\n' || c == '\013' || c == '\f' || c == '\r';
     }
 
     /** A node of the expression's tree. */
@@ -116,7 +211,16 @@ final class RuleNotation {
 
         public String text(RuleNotation notation) {
             String symbol = notation.symbol(name);
-            return symbol.matches(".*[/·+−].*") ? "(" + symbol + ")" : symbol;
+            return isExpression(symbol) ? "(" + symbol + ")" : symbol;
+        }
+
+        private static boolean isExpression(String symbol) {
+            for (int i = 0; i < symbol.length(); i++) {
+                if ("/·+−".indexOf(symbol.charAt(i)) >= 0) {
+                    return true;
+                }
+            }
+            return false;
         }
 
         @Override
@@ -277,7 +381,7 @@ final class RuleNotation {
 
         private Node comparison() {
             Node node = sum();
-            for (String op : List.of("<=", ">=", "==", "!=", "<", ">")) {
+            for (String op : COMPARISONS) {
                 if (accept(op)) {
                     return new Binary(op, node, sum());
                 }

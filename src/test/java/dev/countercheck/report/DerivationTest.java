@@ -128,7 +128,7 @@ class DerivationTest {
 
     @Test
     void aSymbolTheGlossaryLacksIsLeftUndefinedSoTheStructureTestFails() {
-        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of(), List.of()).of("shear-x", List.of(
+        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of()).of("shear-x", List.of(
                 Step.of("VRd,c", "max(vRd,c; vmin)·bw·d", "…", 250, "kN", "EN 1992-1-1 6.2.2(1)"),
                 Step.of("Qzz", "VRd,c·ωq", "…", 1, "-", "invented")), "e1-c1");
         assertThat(steps.get(0).definesSymbol()).isTrue();
@@ -145,9 +145,9 @@ class DerivationTest {
         assertThat(g.meaning("a", "pile-reactions")).get().asString().contains("reaction plane");
         assertThat(g.meaning("a", "punching-perimeter")).get().asString().contains("control perimeter");
         assertThat(g.meaning("P7", "pile-reactions")).get().asString().contains("reaction of that pile");
-        List<StepView> steps = new Derivation(g, Map.of("cover_side", "nominal cover at the sides"), Map.of(),
-                List.of("r.yaml")).of("cover",
-                List.of(Step.of("cnom,prov,side", "cover_side", "40", 40, "mm", "EN 1992-1-1 4.4.1 (r.yaml)")), "e1-c1");
+        List<StepView> steps = new Derivation(g, Map.of("cover_side", "nominal cover at the sides"), Map.of())
+                .of("cover", List.of(Step.ofRule("cnom,prov,side", "cover_side", "40", 40, "mm",
+                        "EN 1992-1-1 4.4.1 (r.yaml)")), "e1-c1");
         assertThat(steps.get(0).where()).containsExactly(
                 new HtmlModel.Definition("cover_side", "nominal cover at the sides"));
     }
@@ -156,11 +156,11 @@ class DerivationTest {
     void aRuleStepIsWrittenInSymbolsAndDefinesEachNameByItsSymbolOnce() {
         Map<String, String> meanings = Map.of("phi", "bar diameter", "eta2", "the rule's name for η2");
         Map<String, String> symbols = Map.of("phi", "φ", "eta2", "η2");
-        List<StepView> steps = new Derivation(Glossary.bundled(), meanings, symbols, List.of("rulesets/r.yaml")).of(
+        List<StepView> steps = new Derivation(Glossary.bundled(), meanings, symbols).of(
                 "anchorage-x", List.of(
-                        Step.of("η2", "IF(phi <= 32, 1, (132 - phi) / 100)", "IF(12 <= 32, 1, (132 - 12) / 100)", 1,
+                        Step.ofRule("η2", "IF(phi <= 32, 1, (132 - phi) / 100)", "IF(12 <= 32, 1, (132 - 12) / 100)", 1,
                                 "-", "EN 1992-1-1 8.4.2(2) (rulesets/r.yaml)"),
-                        Step.of("fbd", "2.25 * eta2 * phi", "2.25 * 1 * 12", 27, "MPa",
+                        Step.ofRule("fbd", "2.25 * eta2 * phi", "2.25 * 1 * 12", 27, "MPa",
                                 "invented (rulesets/r.yaml)")), "e1-c1");
         assertThat(steps.get(0).formula()).isEqualTo("1 if φ ≤ 32, else (132 − φ)/100");
         assertThat(steps.get(0).substituted()).isEqualTo("1 if 12 ≤ 32, else (132 − 12)/100");
@@ -172,16 +172,40 @@ class DerivationTest {
 
     @Test
     void aStepTheCodeBuiltKeepsItsOwnNotationEvenWhereItReadsAsARuleExpression() {
-        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of("fck", "FCK"),
-                List.of("rulesets/r.yaml")).of("shear-x", List.of(
+        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of("fck", "FCK")).of("shear-x", List.of(
                 Step.of("V", "N + Wf + Ws (characteristic)", "1 + 2 + 3", 6, "kN", "EN 1990 6.5.3")), "e1-c1");
         assertThat(steps.get(0).formula()).isEqualTo("N + Wf + Ws (characteristic)");
         assertThat(steps.get(0).substituted()).isEqualTo("1 + 2 + 3");
     }
 
     @Test
+    void aStepIsARuleStepByItsMarkNotByItsClauseText() {
+        Derivation derivation = new Derivation(Glossary.bundled(), Map.of("phi", "bar diameter"), Map.of("phi", "φ"));
+        String formula = "MAX(phi, 2 * phi)";
+        String clauseOfARule = "EN 1992-1-1 8.2(2) (rulesets/r.yaml)";
+        List<StepView> steps = derivation.of("spacing-x", List.of(
+                Step.of("s", formula, "MAX(12, 2 * 12)", 24, "mm", clauseOfARule),
+                Step.ofRule("s", formula, "MAX(12, 2 * 12)", 24, "mm", "EN 1992-1-1 8.2(2)")), "e1-c1");
+        assertThat(steps.get(0).formula()).as("the code's step whose clause reads like a rule's keeps its text")
+                .isEqualTo(formula);
+        assertThat(steps.get(0).substituted()).isEqualTo("MAX(12, 2 * 12)");
+        assertThat(steps.get(1).formula()).as("the rule's step whose clause names no file is rewritten")
+                .isEqualTo("max(φ; 2·φ)");
+        assertThat(steps.get(1).substituted()).isEqualTo("max(12; 2·12)");
+    }
+
+    @Test
+    void theRuleMarkTravelsWithARemark() {
+        Step rule = Step.ofRule("s", "2 * phi", "2 * 12", 24, "mm", "EN 1992-1-1 8.2(2)").remarked("recalled");
+        assertThat(rule.fromRule()).isTrue();
+        assertThat(Step.of("s", "2·φ", "2·12", 24, "mm", "EN 1992-1-1 8.2(2)").remarked("x").fromRule()).isFalse();
+        Step code = new Step("s", "2 * phi", "2 * 12", 24, "mm", "EN 1992-1-1 8.2(2)", rule.remark());
+        assertThat(code.fromRule()).isFalse();
+    }
+
+    @Test
     void aValueStatedOnceIsNotRepeatedAndARulesetParameterNamesItsFileBeforeTheValue() {
-        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of(), List.of()).of("x", List.of(
+        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of()).of("x", List.of(
                 Step.of("b", "footing width across the section", "2200", 2200, "mm", "EN 1992-1-1 6.2.2(1)"),
                 Step.of("γG", "ruleset parameter gamma_g", "1.35 (rulesets/r.yaml)", 1.35, "-", "EN 1990")), "e1-c1");
         assertThat(steps.get(0).substituted()).isEmpty();

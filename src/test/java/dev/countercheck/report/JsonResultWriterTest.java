@@ -2,6 +2,7 @@ package dev.countercheck.report;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.countercheck.eurocode.Step;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
 import dev.countercheck.review.Review;
@@ -9,6 +10,7 @@ import dev.countercheck.review.Severity;
 import dev.countercheck.review.Verdict;
 import org.junit.jupiter.api.Test;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -97,6 +99,16 @@ class JsonResultWriterTest {
         assertThat(shearY.get("values").isObject()).isTrue();
         assertThat(shearY.get("values")).isEmpty();
         assertThat(shearY.get("trace")).isEmpty();
+    }
+
+    @Test
+    void aRuleStepIsWrittenLikeAnyOtherStepWithoutItsMark() {
+        Review sample = SampleReviews.review(Path.of("sample-submissions/mill-road-depot.yaml"));
+        assertThat(sample.elements().stream().flatMap(e -> e.checks().stream()).flatMap(c -> c.trace().stream())
+                .anyMatch(Step::fromRule)).as("the sample's detailing rules give marked steps").isTrue();
+        List<String> stepKeys = List.of("symbol", "formula", "substituted", "value", "unit", "clause", "remark");
+        parse(new JsonResultWriter().write(sample)).findValues("trace").forEach(trace ->
+                trace.forEach(step -> assertThat(stepKeys).containsAll(keys(step))));
     }
 
     @Test
