@@ -4,6 +4,7 @@ import com.openhtmltopdf.outputdevice.helper.ExternalResourceControlPriority;
 import com.openhtmltopdf.pdfboxout.PdfBoxRenderer;
 import com.openhtmltopdf.pdfboxout.PdfRendererBuilder;
 import com.openhtmltopdf.pdfboxout.PdfRendererBuilder.PdfAConformance;
+import com.openhtmltopdf.simple.extend.XhtmlNamespaceHandler;
 import com.openhtmltopdf.svgsupport.BatikSVGDrawer;
 import com.openhtmltopdf.svgsupport.BatikSVGDrawer.SvgExternalResourceMode;
 import com.openhtmltopdf.svgsupport.BatikSVGDrawer.SvgScriptMode;
@@ -108,13 +109,15 @@ public final class PdfReportWriter {
         addBookmarks(html);
         PdfStyles styles = PdfStyles.of(html);
         styles.cutPageStyles(html);
+        XhtmlNamespaceHandler handler = styles.namespaceHandler();
+        styles.unwrapPlainSpans(html);
         org.w3c.dom.Document dom = new W3CDom().fromJsoup(html);
         try (PDDocument document = new PDDocument(IOUtils.createTempFileOnlyStreamCache());
              PdfFonts fonts = PdfFonts.open(document)) {
             BatikSVGDrawer drawings = new BatikSVGDrawer(SvgScriptMode.SECURE, SvgExternalResourceMode.SECURE);
             PdfRendererBuilder builder = new PdfRendererBuilder()
                     .withW3cDocument(dom, null)
-                    .useNamespaceHandler(styles.namespaceHandler())
+                    .useNamespaceHandler(handler)
                     .usePDDocument(document)
                     .usePdfAConformance(PdfAConformance.PDFA_3_U)
                     .useColorProfile(PdfArchive.srgbProfile())

@@ -18,6 +18,8 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import java.util.function.BiPredicate;
+import java.util.function.Predicate;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -43,12 +45,18 @@ final class PdfStyles {
     /** A compound selector as this class reads it: tag or {@code *}, then ids, classes and attributes. */
     private static final Pattern COMPOUND = Pattern.compile("([A-Za-z][\\w-]*|\\*)?((?:[#.][A-Za-z_-][\\w-]*|\\[[A-Za-z_-][\\w-]*])*)");
     private static final Pattern PART = Pattern.compile("([#.\\[])([A-Za-z_-][\\w-]*)");
+    /** The root element, in an HTML page always {@code html}. */
+    private static final Pattern ROOT = Pattern.compile("(?<![\\w-]):root\\b");
+    /** What makes a selector depend on the order of siblings: a sibling combinator or a structural pseudo-class. */
+    private static final Pattern SIBLING_SENSITIVE = Pattern.compile("[+~]|:(first|last|nth|only)-|:empty");
 
     private final Set<String> tags = new HashSet<>();
     private final Set<String> ids = new HashSet<>();
     private final Set<String> classes = new HashSet<>();
     private final Set<String> tagClasses = new HashSet<>();
     private final Set<String> attributes = new HashSet<>();
+    /** Every selector kept by {@link #cut}, in the order cut. */
+    private final List<String> kept = new ArrayList<>();
 
     private PdfStyles(Document page) {
         for (Element element : page.getAllElements()) {
@@ -82,7 +90,7 @@ final class PdfStyles {
 
     /** The renderer's handling of XHTML with its default stylesheet cut to the rules that can apply to the page. */
     XhtmlNamespaceHandler namespaceHandler() {
-        return new CutDefaults();
+        return new CutDefaults(this);
     }
 
     /** {@code css} without the rules and selectors that can match no element of the page; at-rules other than {@code @media} kept whole. */
@@ -115,14 +123,15 @@ final class PdfStyles {
             } else if (prelude.startsWith("@")) {
                 out.append(css, at, close + 1).append('\n');
             } else {
-                List<String> kept = new ArrayList<>();
+                List<String> selectors = new ArrayList<>();
                 for (String selector : split(prelude)) {
                     if (mayMatch(selector)) {
-                        kept.add(selector);
+                        selectors.add(selector);
                     }
                 }
-                if (!kept.isEmpty()) {
-                    out.append(String.join(", ", kept)).append(" {").append(body).append("}\n");
+                if (!selectors.isEmpty()) {
+                    out.append(String.join(", ", selectors)).append(" {").append(body).append("}\n");
+                    kept.addAll(selectors);
                 }
             }
             at = close + 1;
@@ -134,38 +143,124 @@ final class PdfStyles {
      * a selector this reading does not follow (escapes, attribute values it cannot place) is kept.
      */
     boolean mayMatch(String selector) {
-        String plain = PSEUDO.matcher(selector).replaceAll("");
-        plain = ATTRIBUTE.matcher(plain).replaceAll("[$1]");
-        if (plain.indexOf('\\') >= 0 || plain.indexOf('"') >= 0 || plain.indexOf('\'') >= 0 || plain.indexOf(':') >= 0
-                || plain.indexOf('(') >= 0 || plain.indexOf('|') >= 0) {
-            return true;
-        }
-        for (String compound : COMBINATOR.split(plain.trim())) {
-            if (compound.isEmpty()) {
-                continue;
-            }
-            Matcher m = COMPOUND.matcher(compound);
-            if (!m.matches()) {
-                return true;
-            }
-            String tag = m.group(1) == null || m.group(1).equals("*") ? null : m.group(1).toLowerCase(Locale.ROOT);
-            if (tag != null && !tags.contains(tag)) {
+        for (Compound compound : Compound.of(selector)) {
+            if (!compound.mayMatch(tags::contains, ids::contains, classes::contains,
+                    (tag, name) -> tagClasses.contains(tag + "." + name), attributes::contains)) {
                 return false;
-            }
-            Matcher part = PART.matcher(m.group(2));
-            while (part.find()) {
-                String name = part.group(2);
-                boolean present = switch (part.group(1)) {
-                    case "#" -> ids.contains(name);
-                    case "." -> classes.contains(name) && (tag == null || tagClasses.contains(tag + "." + name));
-                    default -> attributes.contains(name.toLowerCase(Locale.ROOT));
-                };
-                if (!present) {
-                    return false;
-                }
             }
         }
         return true;
+    }
+
+    /**
+     * Unwraps, in the PDF's copy of the page, each {@code span} that only groups text for the screen: it
+     * holds text alone and has no attribute but its classes, no selector kept by {@link #cut} may match
+     * it, and no selector that depends on the order of siblings ({@code +}, {@code ~}, {@code :first-child}
+     * and the like) may match it or one of its sibling elements. Its text then takes the very style it
+     * inherited, in one box less. Call after cutting every stylesheet.
+     */
+    void unwrapPlainSpans(Document page) {
+        List<Compound> subjects = new ArrayList<>();
+        List<Compound> bySiblings = new ArrayList<>();
+        for (String selector : kept) {
+            List<Compound> parts = Compound.of(selector);
+            subjects.add(parts.isEmpty() ? Compound.ANY : parts.get(parts.size() - 1));
+            if (SIBLING_SENSITIVE.matcher(selector).find()) {
+                bySiblings.addAll(parts.isEmpty() ? List.of(Compound.ANY) : parts);
+            }
+        }
+        subjects.removeIf(compound -> compound.tag() != null && !compound.tag().equals("span"));
+        for (Element span : page.getElementsByTag("span")) {
+            if (span.attributes().size() == 1 && span.hasAttr("class") && span.childrenSize() == 0 && span.hasText()
+                    && span.parent() != null && !mayMatchAny(span, subjects) && !mayMatchAny(span, bySiblings)
+                    && span.siblingElements().stream().noneMatch(sibling -> mayMatchAny(sibling, bySiblings))) {
+                span.unwrap();
+            }
+        }
+    }
+
+    private static boolean mayMatchAny(Element element, List<Compound> compounds) {
+        String tag = element.normalName().toLowerCase(Locale.ROOT);
+        String id = element.id();
+        Set<String> names = element.classNames();
+        for (Compound compound : compounds) {
+            if (compound.mayMatch(tag::equals, id::equals, names::contains, (t, name) -> names.contains(name),
+                    element::hasAttr)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * One compound part of a selector as this class reads it, pseudo-classes and pseudo-elements left
+     * aside: the tag ({@code null} for any), ids, classes and attribute names it asks for.
+     */
+    private record Compound(String tag, List<String> ids, List<String> classes, List<String> attributes) {
+
+        /** A part anything may match: what this reading does not follow. */
+        static final Compound ANY = new Compound(null, List.of(), List.of(), List.of());
+
+        /** The compound parts of {@code selector}; one {@link #ANY} for a selector this reading does not follow. */
+        static List<Compound> of(String selector) {
+            String plain = PSEUDO.matcher(ROOT.matcher(selector).replaceAll("html")).replaceAll("");
+            plain = ATTRIBUTE.matcher(plain).replaceAll("[$1]");
+            if (plain.indexOf('\\') >= 0 || plain.indexOf('"') >= 0 || plain.indexOf('\'') >= 0 || plain.indexOf(':') >= 0
+                    || plain.indexOf('(') >= 0 || plain.indexOf('|') >= 0) {
+                return List.of(ANY);
+            }
+            List<Compound> compounds = new ArrayList<>();
+            for (String text : COMBINATOR.split(plain.trim())) {
+                if (!text.isEmpty()) {
+                    compounds.add(parse(text));
+                }
+            }
+            return compounds;
+        }
+
+        private static Compound parse(String text) {
+            Matcher m = COMPOUND.matcher(text);
+            if (!m.matches()) {
+                return ANY;
+            }
+            String tag = m.group(1) == null || m.group(1).equals("*") ? null : m.group(1).toLowerCase(Locale.ROOT);
+            List<String> ids = new ArrayList<>();
+            List<String> classes = new ArrayList<>();
+            List<String> attributes = new ArrayList<>();
+            Matcher part = PART.matcher(m.group(2));
+            while (part.find()) {
+                switch (part.group(1)) {
+                    case "#" -> ids.add(part.group(2));
+                    case "." -> classes.add(part.group(2));
+                    default -> attributes.add(part.group(2).toLowerCase(Locale.ROOT));
+                }
+            }
+            return new Compound(tag, ids, classes, attributes);
+        }
+
+        /** False only when this part asks for a tag, id, class (with its tag) or attribute that the tests say is absent. */
+        boolean mayMatch(Predicate<String> tagPresent, Predicate<String> idPresent, Predicate<String> classPresent,
+                         BiPredicate<String, String> tagClassPresent, Predicate<String> attributePresent) {
+            if (tag != null && !tagPresent.test(tag)) {
+                return false;
+            }
+            for (String id : ids) {
+                if (!idPresent.test(id)) {
+                    return false;
+                }
+            }
+            for (String name : classes) {
+                if (!classPresent.test(name) || tag != null && !tagClassPresent.test(tag, name)) {
+                    return false;
+                }
+            }
+            for (String attribute : attributes) {
+                if (!attributePresent.test(attribute)) {
+                    return false;
+                }
+            }
+            return true;
+        }
     }
 
     /** The selectors of a rule's prelude, split at the commas outside brackets, parentheses and strings. */
@@ -262,10 +357,27 @@ final class PdfStyles {
         return i;
     }
 
-    /** The renderer's XHTML handling, its default stylesheet cut for this page (parsed once per document). */
-    private final class CutDefaults extends XhtmlNamespaceHandler {
+    /** The stylesheet {@code resource} of the renderer's jar. */
+    private static String rendererSheet(String resource) {
+        try (InputStream in = XhtmlCssOnlyNamespaceHandler.class.getResourceAsStream(resource)) {
+            if (in == null) {
+                throw new IllegalStateException("the PDF renderer's default stylesheet " + resource + " is missing");
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new IllegalStateException("the PDF renderer's default stylesheet cannot be read", e);
+        }
+    }
 
+    /** The renderer's XHTML handling, its default stylesheet cut for this page (parsed once per document). */
+    private static final class CutDefaults extends XhtmlNamespaceHandler {
+
+        private final String css;
         private StylesheetInfo defaults;
+
+        CutDefaults(PdfStyles styles) {
+            this.css = styles.cut(rendererSheet(getPathToDefaultStylesheet()));
+        }
 
         @Override
         public StylesheetInfo getDefaultStylesheet(StylesheetFactory factory) {
@@ -275,22 +387,10 @@ final class PdfStyles {
                 info.setOrigin(StylesheetInfo.USER_AGENT);
                 info.setMedia("all");
                 info.setType("text/css");
-                info.setStylesheet(factory.parse(new StringReader(cut(defaultSheet())), info));
+                info.setStylesheet(factory.parse(new StringReader(css), info));
                 defaults = info;
             }
             return defaults;
-        }
-
-        private String defaultSheet() {
-            String resource = getPathToDefaultStylesheet();
-            try (InputStream in = XhtmlCssOnlyNamespaceHandler.class.getResourceAsStream(resource)) {
-                if (in == null) {
-                    throw new IllegalStateException("the PDF renderer's default stylesheet " + resource + " is missing");
-                }
-                return new String(in.readAllBytes(), StandardCharsets.UTF_8);
-            } catch (IOException e) {
-                throw new IllegalStateException("the PDF renderer's default stylesheet cannot be read", e);
-            }
         }
     }
 }
