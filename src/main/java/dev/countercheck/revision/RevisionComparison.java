@@ -2,6 +2,7 @@ package dev.countercheck.revision;
 
 import java.util.ArrayList;
 import java.util.EnumMap;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -9,11 +10,33 @@ import java.util.Optional;
 
 /**
  * Every finding of two revisions, classified by its stable id: closed, still open, changed or new.
- *
- * @param previous what the earlier revision is called (its revision label, else its file)
- * @param entries  the later revision's findings in its order, then the closed ones in the earlier order
+ * An entry is found by its id at once (a report looks up each of a large project's 100,000 findings).
  */
-public record RevisionComparison(String previous, List<Entry> entries) {
+public final class RevisionComparison {
+
+    private final String previous;
+    private final List<Entry> entries;
+    private final Map<String, Entry> byId = new HashMap<>();
+
+    /**
+     * @param previous what the earlier revision is called (its revision label, else its file)
+     * @param entries  the later revision's findings in its order, then the closed ones in the earlier order
+     */
+    private RevisionComparison(String previous, List<Entry> entries) {
+        this.previous = previous;
+        this.entries = List.copyOf(entries);
+        this.entries.forEach(e -> byId.putIfAbsent(e.id(), e));
+    }
+
+    /** What the earlier revision is called (its revision label, else its file). */
+    public String previous() {
+        return previous;
+    }
+
+    /** The later revision's findings in its order, then the closed ones in the earlier order. */
+    public List<Entry> entries() {
+        return entries;
+    }
 
     /**
      * One finding across the two revisions.
@@ -44,7 +67,7 @@ public record RevisionComparison(String previous, List<Entry> entries) {
         }
         earlier.values().forEach(then -> entries.add(new Entry(then.id(), FindingChange.CLOSED, Optional.of(then),
                 Optional.empty())));
-        return new RevisionComparison(previous, List.copyOf(entries));
+        return new RevisionComparison(previous, entries);
     }
 
     /** How many findings of each kind of change, every kind present. */
@@ -64,7 +87,8 @@ public record RevisionComparison(String previous, List<Entry> entries) {
         return s.toString();
     }
 
+    /** The first entry of this id. */
     public Optional<Entry> entry(String id) {
-        return entries.stream().filter(e -> e.id().equals(id)).findFirst();
+        return Optional.ofNullable(byId.get(id));
     }
 }

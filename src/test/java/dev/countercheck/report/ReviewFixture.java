@@ -36,14 +36,14 @@ import java.util.OptionalInt;
  * revision and no "prepared by"; the summary map leaves out the
  * verdicts no element has, so the writers must print them as 0.
  */
-final class ReviewFixture {
+public final class ReviewFixture {
 
     static final String TITLE = "Harbour Lane cold store (invented demo project)";
 
     private ReviewFixture() {
     }
 
-    static Review review() {
+    public static Review review() {
         return review(TITLE);
     }
 
