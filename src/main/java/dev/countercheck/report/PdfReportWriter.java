@@ -4,6 +4,7 @@ import com.openhtmltopdf.outputdevice.helper.ExternalResourceControlPriority;
 import com.openhtmltopdf.pdfboxout.PdfBoxRenderer;
 import com.openhtmltopdf.pdfboxout.PdfRendererBuilder;
 import com.openhtmltopdf.pdfboxout.PdfRendererBuilder.PdfAConformance;
+import com.openhtmltopdf.simple.extend.XhtmlNamespaceHandler;
 import com.openhtmltopdf.svgsupport.BatikSVGDrawer;
 import com.openhtmltopdf.svgsupport.BatikSVGDrawer.SvgExternalResourceMode;
 import com.openhtmltopdf.svgsupport.BatikSVGDrawer.SvgScriptMode;
@@ -106,12 +107,17 @@ public final class PdfReportWriter {
     void render(String page, Review review, String jsonName, String json, OutputStream out) throws IOException {
         Document html = Jsoup.parse(page);
         addBookmarks(html);
+        PdfStyles styles = PdfStyles.of(html);
+        styles.cutPageStyles(html);
+        XhtmlNamespaceHandler handler = styles.namespaceHandler();
+        styles.unwrapPlainSpans(html);
         org.w3c.dom.Document dom = new W3CDom().fromJsoup(html);
         try (PDDocument document = new PDDocument(IOUtils.createTempFileOnlyStreamCache());
              PdfFonts fonts = PdfFonts.open(document)) {
             BatikSVGDrawer drawings = new BatikSVGDrawer(SvgScriptMode.SECURE, SvgExternalResourceMode.SECURE);
             PdfRendererBuilder builder = new PdfRendererBuilder()
                     .withW3cDocument(dom, null)
+                    .useNamespaceHandler(handler)
                     .usePDDocument(document)
                     .usePdfAConformance(PdfAConformance.PDFA_3_U)
                     .useColorProfile(PdfArchive.srgbProfile())
@@ -123,6 +129,7 @@ public final class PdfReportWriter {
                     .withProducer(producer(review));
             // The fonts stay open until the document is saved: their subsets are embedded then.
             try (PdfBoxRenderer renderer = builder.buildPdfRenderer()) {
+                renderer.getSharedContext().setTextRenderer(new PdfTextWidths());
                 fonts.register(renderer.getFontResolver(), drawings);
                 layOut(renderer, document, review, page, jsonName, json);
                 document.save(out);
