@@ -30,11 +30,6 @@ final class ReportNumbers {
     private ReportNumbers() {
     }
 
-    /** A computed quantity, to four significant figures: {@code 4301.9 → 4302}. */
-    static BigDecimal quantity(double value) {
-        return new BigDecimal(Num.f(value));
-    }
-
     /** A dimensionless ratio, to four decimal places: {@code 0.91234 → 0.9123}, {@code 0.9100 → 0.91}. */
     static BigDecimal ratio(double value) {
         return new BigDecimal(value).setScale(RATIO_DECIMALS, RoundingMode.HALF_EVEN).stripTrailingZeros();
@@ -45,7 +40,7 @@ final class ReportNumbers {
         return BigDecimal.valueOf(value).stripTrailingZeros();
     }
 
-    /** Text of {@link #quantity}: the trace's own text, which is already plain ({@link Num#f}). */
+    /** A computed quantity, to four significant figures ({@code 4301.9 → "4302"}): the trace's own text, {@link Num#f}. */
     static String quantityText(double value) {
         return Num.f(value);
     }

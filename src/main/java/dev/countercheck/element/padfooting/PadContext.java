@@ -1,7 +1,6 @@
 package dev.countercheck.element.padfooting;
 
 import dev.countercheck.element.Axis;
-import dev.countercheck.element.DetailingVariables;
 import dev.countercheck.element.PlanGeometry;
 import dev.countercheck.element.Section;
 import dev.countercheck.eurocode.Materials;
@@ -80,9 +79,6 @@ final class PadContext {
     /** A case with the factor on the weights, the key of a resultant. */
     private record Weighted(ActionCase action, double factor) {
     }
-
-    /** The detailing rules' section variables, formed once for every scope of the run. */
-    final DetailingVariables.Once detailingSection = new DetailingVariables.Once();
 
     PadContext(PadFooting pad, Ruleset rules) {
         this.pad = pad;

@@ -87,7 +87,7 @@ final class PadFootingReviewer {
         checks().forEach((id, check) -> done.put(id, guarded(id, check, ctx)));
         Map<Axis, Double> asRequired = RuleChecks.asRequired(done, "bending");
         List<CheckOutcome> outcomes = RuleChecks.inCatalogueOrder(CATALOGUE, done, ctx.rules, PadScopes.SCOPES,
-                (scope, subject) -> PadScopes.values(ctx, scope, subject, asRequired));
+                PadScopes.forRun(ctx, asRequired));
         return new Run(ctx, outcomes);
     }
 

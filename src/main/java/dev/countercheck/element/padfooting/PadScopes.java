@@ -16,6 +16,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.BiFunction;
 
 import static dev.countercheck.element.DetailingVariables.BARS;
 import static dev.countercheck.element.DetailingVariables.SECTION;
@@ -50,13 +51,24 @@ final class PadScopes {
         return Map.of(SECTION, s, BARS, bars, STARTERS, DetailingVariables.starters(s));
     }
 
-    /** @param asRequired As,req of each direction as the bending checks computed it (mm², 0 when not computed) */
-    static Values values(PadContext ctx, String scope, String subject, Map<Axis, Double> asRequired) {
+    /**
+     * The values of each scope and subject of one run's detailing rules; the section's, which hold σs,qp from
+     * {@code asRequired}, are formed once for them all.
+     *
+     * @param asRequired As,req of each direction as the bending checks computed it (mm², 0 when not computed)
+     */
+    static BiFunction<String, String, Values> forRun(PadContext ctx, Map<Axis, Double> asRequired) {
+        DetailingVariables.Once section = new DetailingVariables.Once();
+        return (scope, subject) -> values(ctx, scope, subject, asRequired, section);
+    }
+
+    private static Values values(PadContext ctx, String scope, String subject, Map<Axis, Double> asRequired,
+                                 DetailingVariables.Once section) {
         if (ctx.pad.reinforcement().isEmpty() || ctx.section.isEmpty()) {
             return Values.missing("no reinforcement given");
         }
         Reinforcement r = ctx.pad.reinforcement().get();
-        Map<String, Object> v = new LinkedHashMap<>(ctx.detailingSection.get(() -> sectionValues(ctx, r, asRequired)));
+        Map<String, Object> v = new LinkedHashMap<>(section.get(() -> sectionValues(ctx, r, asRequired)));
         if (BARS.equals(scope)) {
             Axis axis = "x".equals(subject) ? Axis.X : Axis.Y;
             List<BarSet> sets = DetailingVariables.bars(ctx.section.get(), axis);

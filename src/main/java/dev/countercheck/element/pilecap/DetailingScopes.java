@@ -18,6 +18,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.BiFunction;
 
 import static dev.countercheck.element.DetailingVariables.BARS;
 import static dev.countercheck.element.DetailingVariables.SECTION;
@@ -64,15 +65,24 @@ final class DetailingScopes {
     }
 
     /**
+     * The values of each scope and subject of one run's detailing rules; the section's, which hold σs,qp from
+     * {@code asRequired}, are formed once for them all.
+     *
      * @param asRequired As,req of each direction's tie as the tie checks computed it (mm², 0 when not computed)
      */
-    static Values values(PileCapContext ctx, String scope, String subject, Map<Axis, Double> asRequired) {
+    static BiFunction<String, String, Values> forRun(PileCapContext ctx, Map<Axis, Double> asRequired) {
+        DetailingVariables.Once section = new DetailingVariables.Once();
+        return (scope, subject) -> values(ctx, scope, subject, asRequired, section);
+    }
+
+    private static Values values(PileCapContext ctx, String scope, String subject, Map<Axis, Double> asRequired,
+                                 DetailingVariables.Once section) {
         PileCap cap = ctx.cap;
         if (cap.reinforcement().isEmpty() || ctx.section.isEmpty()) {
             return Values.missing("no reinforcement given");
         }
         Reinforcement r = cap.reinforcement().get();
-        Map<String, Object> v = new LinkedHashMap<>(ctx.detailingSection.get(() -> capValues(ctx, r, asRequired)));
+        Map<String, Object> v = new LinkedHashMap<>(section.get(() -> capValues(ctx, r, asRequired)));
         if (BARS.equals(scope)) {
             Axis axis = "x".equals(subject) ? Axis.X : Axis.Y;
             List<BarSet> sets = DetailingVariables.bars(ctx.section.get(), axis);

@@ -1,7 +1,6 @@
 package dev.countercheck.element.pilecap;
 
 import dev.countercheck.element.Axis;
-import dev.countercheck.element.DetailingVariables;
 import dev.countercheck.element.PlanGeometry;
 import dev.countercheck.element.Section;
 import dev.countercheck.statics.PileGroupReactions;
@@ -53,9 +52,6 @@ final class PileCapContext {
     private final Optional<double[]> designLine;
     /** The piles at their positions as designed, prepared once for every case. */
     private final PileGroupReactions.Group designGroup;
-
-    /** The detailing rules' section variables, formed once for every scope of the run. */
-    final DetailingVariables.Once detailingSection = new DetailingVariables.Once();
 
     PileCapContext(PileCap cap, Ruleset rules) {
         this.cap = cap;

@@ -97,7 +97,7 @@ final class PileCapReviewer {
         checks.forEach((id, check) -> done.put(id, guarded(id, check, ctx)));
         Map<Axis, Double> asRequired = RuleChecks.asRequired(done, "tie");
         List<CheckOutcome> outcomes = RuleChecks.inCatalogueOrder(CATALOGUE, done, ctx.rules, DetailingScopes.SCOPES,
-                (scope, subject) -> DetailingScopes.values(ctx, scope, subject, asRequired));
+                DetailingScopes.forRun(ctx, asRequired));
         return new Run(ctx, outcomes);
     }
 

@@ -19,8 +19,8 @@ class RuleEvaluatorsOnSamplePadsTest {
     @Test
     void compiledAndDecimalEvaluationAgreeOnTheSamplePads() throws Exception {
         EvaluatorAgreement agreement = SampleScopes.agreement(PadFooting.class, "pad-footing", PadScopes.SCOPES,
-                "bending", (pad, rules, scope, subject, asRequired) -> PadScopes.values(new PadContext(pad, rules),
-                        scope, subject, asRequired));
+                "bending", (pad, rules, scope, subject, asRequired) -> PadScopes.forRun(new PadContext(pad, rules),
+                        asRequired).apply(scope, subject));
         System.out.println("pad footings: " + agreement.counts());
         assertThat(agreement.compared()).isGreaterThan(500);
         assertThat(agreement.disagreements()).isEmpty();

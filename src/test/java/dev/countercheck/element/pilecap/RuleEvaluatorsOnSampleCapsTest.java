@@ -19,8 +19,8 @@ class RuleEvaluatorsOnSampleCapsTest {
     @Test
     void compiledAndDecimalEvaluationAgreeOnTheSampleCaps() throws Exception {
         EvaluatorAgreement agreement = SampleScopes.agreement(PileCap.class, "pile-cap", DetailingScopes.SCOPES, "tie",
-                (cap, rules, scope, subject, asRequired) -> DetailingScopes.values(new PileCapContext(cap, rules), scope,
-                        subject, asRequired));
+                (cap, rules, scope, subject, asRequired) -> DetailingScopes.forRun(new PileCapContext(cap, rules),
+                        asRequired).apply(scope, subject));
         System.out.println("pile caps: " + agreement.counts());
         assertThat(agreement.compared()).isGreaterThan(1000);
         assertThat(agreement.disagreements()).isEmpty();
