@@ -32,6 +32,10 @@ public final class ControlPerimeter {
         }
     }
 
+    /** Math.acos(1) and Math.asin(1), formed once: the bounds of the part of an arc the plan does not cut. */
+    private static final double ACOS_ONE = Math.acos(1);
+    private static final double ASIN_ONE = Math.asin(1);
+
     private static final int STRIPS = 400;
     /** The margin, as a share of a + D, by which a head must clear the perimeter to skip the strips. */
     private static final double CLEARANCE = 1e-9;
@@ -124,8 +128,8 @@ public final class ControlPerimeter {
         for (int sx : new int[] {1, -1}) {
             length += Math.abs(x0 + sx * (hx + aMm)) <= halfX ? overlap(y0 - hy, y0 + hy, halfY) : 0;
             for (int sy : new int[] {1, -1}) {
-                double from = Math.acos(clamp((halfX - sx * (x0 + sx * hx)) / r));
-                double to = Math.asin(clamp((halfY - sy * (y0 + sy * hy)) / r));
+                double from = acosClamped((halfX - sx * (x0 + sx * hx)) / r);
+                double to = asinClamped((halfY - sy * (y0 + sy * hy)) / r);
                 length += r * Math.max(0, to - from);
             }
         }
@@ -138,6 +142,19 @@ public final class ControlPerimeter {
     /** Length of [lo, hi] within [−half, half]. */
     private static double overlap(double lo, double hi, double half) {
         return Math.max(0, Math.min(hi, half) - Math.max(lo, -half));
+    }
+
+    /**
+     * acos of v clamped to [−1, 1]. An arc the plan does not cut has v ≥ 1: it takes {@link #ACOS_ONE}, the same
+     * double without the call (the arcs of most perimeters are whole, and the call is costly).
+     */
+    private static double acosClamped(double v) {
+        return v >= 1 ? ACOS_ONE : Math.acos(clamp(v));
+    }
+
+    /** asin of v clamped to [−1, 1]; v ≥ 1 takes {@link #ASIN_ONE}, as {@link #acosClamped}. */
+    private static double asinClamped(double v) {
+        return v >= 1 ? ASIN_ONE : Math.asin(clamp(v));
     }
 
     private static double clamp(double v) {
@@ -334,9 +351,9 @@ public final class ControlPerimeter {
                     continue;
                 }
                 double half = lift + Math.sqrt(v);
-                double lo = Math.max(centreY - chords[i], columnY - half);
-                double hi = Math.min(centreY + chords[i], columnY + half);
-                inside += Math.max(0, hi - lo);
+                double lo = greater(centreY - chords[i], columnY - half);
+                double hi = lesser(centreY + chords[i], columnY + half);
+                inside += greater(0, hi - lo);
             }
             return whole == 0 ? 0 : inside / whole;
         }
@@ -402,5 +419,20 @@ public final class ControlPerimeter {
 
     private static double sq(double v) {
         return v * v;
+    }
+
+    /**
+     * The greater of two finite values, as {@link Math#max} gives it but for the sign of a zero when both are
+     * zeros: the strips' lengths use it where that sign never reaches the sum (a length of ±0 adds nothing, and
+     * a bound of ±0 subtracted from a nonzero value gives the same difference). Math.max's handling of NaN and
+     * −0 compiles to a blend that costs the strip loops about half their time; this is a compare and a branch.
+     */
+    private static double greater(double a, double b) {
+        return a >= b ? a : b;
+    }
+
+    /** The lesser of two finite values, as {@link Math#min} gives it but for the sign of a zero (see {@link #greater}). */
+    private static double lesser(double a, double b) {
+        return a <= b ? a : b;
     }
 }
