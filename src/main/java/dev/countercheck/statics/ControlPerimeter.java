@@ -92,18 +92,36 @@ public final class ControlPerimeter {
     }
 
     /**
-     * The value of {@link #beta} alone, without its trace text (the search over many perimeters and cases;
-     * the governing one is traced by {@link #beta}): the same arithmetic and the same range checks.
+     * What β at distance a takes from the column and a alone, formed once for a perimeter that many cases and loads
+     * are tried at ({@link #betaValue}): u, and k and W along x (My) and along y (Mx), of a rectangular column.
      */
-    public static double betaValue(ColumnOutline c, double aMm, double vEdKn, double mxKnm, double myKnm) {
+    public record BetaGeometry(ColumnOutline column, double aMm, double u, double kAlongX, double wAlongX,
+                               double kAlongY, double wAlongY) {
+    }
+
+    /** The {@link BetaGeometry} of the perimeter at distance a, with the range checks of its formulas. */
+    public static BetaGeometry betaGeometry(ColumnOutline c, double aMm) {
         if (c.circular()) {
-            return Punching.betaCircularValue(Math.hypot(mxKnm, myKnm) * 1000 / vEdKn, c.cxMm(), aMm);
+            return new BetaGeometry(c, aMm, 0, 0, 0, 0, 0);
         }
         double u = Punching.u1RectangularValue(c.cxMm(), c.cyMm(), aMm);
-        double alongX = Punching.betaEccentricValue(Punching.kEccentricityValue(c.cxMm(), c.cyMm()), myKnm, vEdKn,
-                u, Punching.w1RectangularValue(c.cxMm(), c.cyMm(), aMm));
-        double alongY = Punching.betaEccentricValue(Punching.kEccentricityValue(c.cyMm(), c.cxMm()), mxKnm, vEdKn,
-                u, Punching.w1RectangularValue(c.cyMm(), c.cxMm(), aMm));
+        return new BetaGeometry(c, aMm, u, Punching.kEccentricityValue(c.cxMm(), c.cyMm()),
+                Punching.w1RectangularValue(c.cxMm(), c.cyMm(), aMm), Punching.kEccentricityValue(c.cyMm(), c.cxMm()),
+                Punching.w1RectangularValue(c.cyMm(), c.cxMm(), aMm));
+    }
+
+    /**
+     * The value of {@link #beta} alone at the perimeter {@code g} was formed for, without its trace text (the search
+     * over many perimeters and cases; the governing one is traced by {@link #beta}): the same arithmetic and the same
+     * range checks.
+     */
+    public static double betaValue(BetaGeometry g, double vEdKn, double mxKnm, double myKnm) {
+        ColumnOutline c = g.column();
+        if (c.circular()) {
+            return Punching.betaCircularValue(Math.hypot(mxKnm, myKnm) * 1000 / vEdKn, c.cxMm(), g.aMm());
+        }
+        double alongX = Punching.betaEccentricValue(g.kAlongX(), myKnm, vEdKn, g.u(), g.wAlongX());
+        double alongY = Punching.betaEccentricValue(g.kAlongY(), mxKnm, vEdKn, g.u(), g.wAlongY());
         return alongX + alongY - 1;
     }
 

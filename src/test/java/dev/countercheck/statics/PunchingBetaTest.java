@@ -41,7 +41,7 @@ class PunchingBetaTest {
         for (ColumnOutline c : columns) {
             for (double a : new double[] {17.3, 480, 1600}) {
                 for (double[] m : new double[][] {{0, 0}, {150, -300}, {-75.5, 910}}) {
-                    assertThat(ControlPerimeter.betaValue(c, a, 2317.5, m[0], m[1]))
+                    assertThat(ControlPerimeter.betaValue(ControlPerimeter.betaGeometry(c, a), 2317.5, m[0], m[1]))
                             .isEqualTo(ControlPerimeter.beta(c, a, 2317.5, m[0], m[1]).value());
                 }
             }

@@ -132,6 +132,7 @@ final class PunchingChecks {
         private final double[] u;
         private final double[] whole;
         private final double[] vRdKn;
+        private final ControlPerimeter.BetaGeometry[] geometry;
 
         Perimeters(PadContext ctx, ColumnOutline outline, List<ActionCase> cases, List<PressureField> fields, double d,
                    int count, double stress, double vMin) {
@@ -146,11 +147,13 @@ final class PunchingChecks {
             u = new double[count + 1];
             whole = new double[count + 1];
             vRdKn = new double[count + 1];
+            geometry = new ControlPerimeter.BetaGeometry[count + 1];
             for (int j = 1; j <= count; j++) {
                 a[j] = 2 * d * j / count;
                 u[j] = ControlPerimeter.lengthInPlan(outline, a[j], ctx.pad.planXMm(), ctx.pad.planYMm());
                 whole[j] = ControlPerimeter.fullValue(outline, a[j]);
                 vRdKn[j] = Punching.vRdEnhancedValue(stress, vMin, d, a[j]) * u[j] * d / 1000;
+                geometry[j] = ControlPerimeter.betaGeometry(outline, a[j]);
             }
         }
 
@@ -207,7 +210,7 @@ final class PunchingChecks {
 
         /** β of case c at perimeter j for VEd,red, on the part of the perimeter on the plan (by value). */
         private double beta(int j, ActionCase c, double reduced) {
-            double betaWhole = ControlPerimeter.betaValue(outline, a[j], reduced, c.mxKnm(), c.myKnm());
+            double betaWhole = ControlPerimeter.betaValue(geometry[j], reduced, c.mxKnm(), c.myKnm());
             return Punching.betaOnPartValue(betaWhole, u[j], whole[j]);
         }
     }

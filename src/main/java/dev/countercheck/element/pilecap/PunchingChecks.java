@@ -120,6 +120,7 @@ final class PunchingChecks {
         private final double[] u;
         private final double[] vRdMpa;
         private final double[] vRdKn;
+        private final ControlPerimeter.BetaGeometry[] geometry;
 
         Perimeters(PileCapContext ctx, double d, int count, double stress, double vMin) {
             this.ctx = ctx;
@@ -130,11 +131,13 @@ final class PunchingChecks {
             u = new double[count + 1];
             vRdMpa = new double[count + 1];
             vRdKn = new double[count + 1];
+            geometry = new ControlPerimeter.BetaGeometry[count + 1];
             for (int j = 1; j <= count; j++) {
                 a[j] = 2 * d * j / count;
                 vRdMpa[j] = Punching.vRdEnhancedValue(stress, vMin, d, a[j]);
                 u[j] = ControlPerimeter.lengthInPlan(column, a[j], ctx.cap.planXMm(), ctx.cap.planYMm());
                 vRdKn[j] = vRdMpa[j] * u[j] * d / 1000;
+                geometry[j] = ControlPerimeter.betaGeometry(column, a[j]);
             }
         }
 
@@ -158,7 +161,7 @@ final class PunchingChecks {
             for (UlsCase c : ctx.uls) {
                 double v = reduced(c, shares, shares);
                 if (v > LOAD_RESIDUE * c.action().nKn()) {
-                    Perimeter here = new Perimeter(a[j], u[j], shares, v, ControlPerimeter.betaValue(column, a[j], v,
+                    Perimeter here = new Perimeter(a[j], u[j], shares, v, ControlPerimeter.betaValue(geometry[j], v,
                             c.action().mxKnm(), c.action().myKnm()), c, vRdMpa[j], vRdKn[j]);
                     if (here.utilisation() > worst.utilisation()) {
                         worst = here;
@@ -183,7 +186,7 @@ final class PunchingChecks {
             for (UlsCase c : ctx.uls) {
                 double v = reduced(c, least, most);
                 if (v > LOAD_RESIDUE * c.action().nKn()) {
-                    double beta = ControlPerimeter.betaValue(column, a[j], v, c.action().mxKnm(), c.action().myKnm());
+                    double beta = ControlPerimeter.betaValue(geometry[j], v, c.action().mxKnm(), c.action().myKnm());
                     bound = Math.max(bound, beta * v / vRdKn[j]);
                 }
             }
