@@ -91,10 +91,11 @@ public final class ProjectReviewer {
         assumptions.add(GENERAL_CAUTION);
         assumptions.add("Nationally determined parameters come from ruleset " + rules.id() + " (" + rules.title()
                 + "); every value used is shown in the calculation trace with the file that set it.");
-        if (!rules.recalled().isEmpty()) {
+        List<String> recalled = rules.recalled();
+        if (!recalled.isEmpty()) {
             assumptions.add("Values of ruleset " + rules.id() + " recalled from memory, not yet verified against the"
                     + " printed standard or annex (verify them before relying on a check that uses them; the trace"
-                    + " marks each step that does): " + String.join("; ", rules.recalled()) + ".");
+                    + " marks each step that does): " + String.join("; ", recalled) + ".");
         }
         ElementKinds.ALL.stream().filter(k -> submission.elements().stream().anyMatch(e -> e.type().equals(k.type())))
                 .forEach(k -> assumptions.addAll(k.assumptions()));

@@ -81,7 +81,11 @@ public record Ruleset(String id, String title, String standard, String version, 
 
     /** Whether a table or parameter of this name is marked as recalled from memory. */
     public boolean isRecalled(String name) {
-        return (parameters.containsKey(name) && parameters.get(name).source().recalled())
-                || (tables.containsKey(name) && tables.get(name).source().recalled());
+        Parameter p = parameters.get(name);
+        if (p != null && p.source().recalled()) {
+            return true;
+        }
+        TableDef t = tables.get(name);
+        return t != null && t.source().recalled();
     }
 }

@@ -18,6 +18,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.function.BiFunction;
 
 import static dev.countercheck.element.DetailingVariables.BARS;
@@ -143,10 +144,13 @@ final class DetailingScopes {
      * when a quasi-permanent case is given (common approximation).
      */
     private static Optional<Double> quasiPermanentRatio(PileCapContext ctx, Axis axis) {
+        OptionalDouble nQp = ctx.cap.actions().stream().filter(a -> a.kind() == ActionCase.Kind.SLS_QUASI_PERMANENT)
+                .mapToDouble(ActionCase::nKn).max();
+        if (nQp.isEmpty()) {
+            return Optional.empty();
+        }
         double nUls = TieCheck.governingAxialForce(ctx, axis);
-        return ctx.cap.actions().stream().filter(a -> a.kind() == ActionCase.Kind.SLS_QUASI_PERMANENT)
-                .mapToDouble(ActionCase::nKn).max().stream().boxed().findFirst()
-                .filter(q -> nUls > 0).map(q -> q / nUls);
+        return nUls > 0 ? Optional.of(nQp.getAsDouble() / nUls) : Optional.empty();
     }
 
     /** σs ≈ fyd·(N_qp/N_uls)·(As,req/As,prov) (crack-control), 0 without a QP case. */
@@ -155,7 +159,4 @@ final class DetailingScopes {
         return quasiPermanentRatio(ctx, axis).filter(q -> provided > 0)
                 .map(q -> ctx.fyd.value() * q * asRequired / provided).orElse(0.0);
     }
-
-
-
 }

@@ -49,8 +49,10 @@ record ShearWidth(Step width, Step as) {
         double b = union.stream().mapToDouble(s -> Math.max(0, s[1] - s[0])).sum();
         List<BarSet> sets = axis == Axis.X ? section.xBars() : section.yBars();
         double[] centres = TieBands.barCentres(ctx.cap, axis, sets);
-        long inside = java.util.Arrays.stream(centres)
-                .filter(c -> union.stream().anyMatch(s -> c >= s[0] - 1e-6 && c <= s[1] + 1e-6)).count();
+        int inside = 0;
+        for (double c : centres) {
+            inside += withinAny(c, union) ? 1 : 0;
+        }
         double as = centres.length == 0 ? 0 : all.value() * inside / centres.length;
         String strips2 = String.join(" ∪ ", union.stream().map(s -> "[" + Num.f(s[0]) + ", " + Num.f(s[1]) + "]")
                 .toList());
@@ -59,5 +61,15 @@ record ShearWidth(Step width, Step as) {
         Step steel = Step.of("As,b", "(bars within b)·As/n", inside + "·" + Num.f(all.value()) + "/" + centres.length,
                 as, "mm2", ctx.clauseOf("shear_strip_width"));
         return new ShearWidth(width, steel);
+    }
+
+    /** Whether {@code c} lies within one of the strips (to 10⁻⁶ mm). */
+    private static boolean withinAny(double c, List<double[]> strips) {
+        for (double[] s : strips) {
+            if (c >= s[0] - 1e-6 && c <= s[1] + 1e-6) {
+                return true;
+            }
+        }
+        return false;
     }
 }
