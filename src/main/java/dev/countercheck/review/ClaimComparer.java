@@ -56,10 +56,21 @@ public final class ClaimComparer {
 
     /** How the tolerance of a claim in {@code unit} is formed, for the finding: "the larger of 2 % and 10 mm2". */
     private String toleranceRule(String unit) {
-        String relative = String.format(java.util.Locale.ROOT, "%s %%", dev.countercheck.eurocode.Num.f(tolerance * 100));
+        String relative = dev.countercheck.eurocode.Num.f(tolerance * 100) + " %";
         Double floor = floors.get(unit);
         return floor == null || floor <= 0 ? relative + " of the recomputed value"
                 : "the larger of " + relative + " of the recomputed value and " + CheckBuilder.show(floor, unit);
+    }
+
+    /**
+     * v ≥ 0 to one decimal as {@code String.format(Locale.ROOT, "%.1f", v)} writes it (half up on the digits of
+     * {@code Double.toString}), without a Formatter per finding.
+     */
+    static String oneDecimal(double v) {
+        if (!Double.isFinite(v)) {
+            return String.format(java.util.Locale.ROOT, "%.1f", v);
+        }
+        return new java.math.BigDecimal(Double.toString(v)).setScale(1, java.math.RoundingMode.HALF_UP).toPlainString();
     }
 
     /** The slug of every finding about a claim of {@code quantity}: {@code claim-} and the quantity's name. */
@@ -77,7 +88,7 @@ public final class ClaimComparer {
             return java.util.Optional.empty();
         }
         boolean unsafe = c.verdict() == ClaimVerdict.DIFFERS_UNCONSERVATIVE;
-        String percent = String.format(java.util.Locale.ROOT, "%.1f %%", Math.abs(c.difference()) * 100);
+        String percent = oneDecimal(Math.abs(c.difference()) * 100) + " %";
         String direction = c.claimed() > c.computed() ? "above" : "below";
         String message = "Claimed " + check.id() + "." + q.name() + " = " + CheckBuilder.show(c.claimed(), q.unit())
                 + " is " + percent + " " + direction + " the recomputed " + CheckBuilder.show(c.computed(), q.unit())

@@ -7,13 +7,15 @@ import java.util.regex.Pattern;
 public final class Slugs {
 
     private static final Pattern SLUG = Pattern.compile("[a-z0-9]+(-[a-z0-9]+)*");
+    private static final Pattern NOT_SLUG = Pattern.compile("[^a-z0-9]+");
+    private static final Pattern END_HYPHENS = Pattern.compile("^-+|-+$");
 
     private Slugs() {
     }
 
     /** {@code "ULS 2 (wind)"} → {@code "uls-2-wind"}: a name of the submission turned into a slug. */
     public static String of(String name) {
-        String s = name.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-+|-+$", "");
+        String s = END_HYPHENS.matcher(NOT_SLUG.matcher(name.toLowerCase(Locale.ROOT)).replaceAll("-")).replaceAll("");
         return s.isEmpty() ? "unnamed" : s;
     }
 

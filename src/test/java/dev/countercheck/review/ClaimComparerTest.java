@@ -64,4 +64,29 @@ class ClaimComparerTest {
     void aUnitWithoutAFloorHasTheRelativeToleranceOnly() {
         assertThat(COMPARER.allowance(20, "kNm")).isEqualTo(0.4, org.assertj.core.api.Assertions.within(1e-12));
     }
+
+    /**
+     * The share a finding states is written as String.format's "%.1f" writes it, to the character: random values of
+     * every size, and the values on a tie of the first decimal (k·0.05, as computed and as parsed).
+     */
+    @Test
+    void theShareIsWrittenAsTheFormatterWritesIt() {
+        java.util.Random random = new java.util.Random(2012);
+        java.util.List<String> mismatches = new java.util.ArrayList<>();
+        java.util.List<Double> values = new java.util.ArrayList<>(java.util.List.of(0.0, 0.05, 0.15, 0.25, 0.35, 0.45,
+                1.05, 2.675, 99.95, 999.95, 1e-7, 1e7, 123456789.25, Double.MIN_VALUE, 1e300));
+        for (int k = 0; k < 40_000; k++) {
+            values.add(k * 0.05);
+            values.add(Double.parseDouble(k / 20 + "." + (k % 20 < 2 ? "0" : "") + (k % 20) * 5));
+            values.add(random.nextDouble() * Math.pow(10, random.nextInt(12) - 4));
+            values.add(Math.abs(random.nextDouble() - random.nextDouble()) * 100);
+        }
+        for (double v : values) {
+            String expected = String.format(java.util.Locale.ROOT, "%.1f", v);
+            if (!ClaimComparer.oneDecimal(v).equals(expected)) {
+                mismatches.add(v + ": " + ClaimComparer.oneDecimal(v) + " vs " + expected);
+            }
+        }
+        assertThat(mismatches).isEmpty();
+    }
 }
