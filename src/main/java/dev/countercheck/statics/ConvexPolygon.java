@@ -148,18 +148,30 @@ final class ConvexPolygon {
     /**
      * ∫ (q0 + qx·x + qy·y) dA: {@link #integrate} of that plane with the same arithmetic, term for term (the same
      * double), without a call through an interface per point (the search over control perimeters integrates many).
+     * The midpoint of the fan's edge from vertex 0 to vertex i + 1, and its pressure, are those of triangle i's last
+     * midpoint and triangle i + 1's first (the same sum, x0 + x(i+1), either way round): formed once for both, as is
+     * that edge's difference from vertex 0.
      */
     double integratePlane(double q0, double qx, double qy) {
+        if (xs.length < 3) {
+            return 0;
+        }
+        double x0 = xs[0];
+        double y0 = ys[0];
+        double dx = xs[1] - x0;
+        double dy = ys[1] - y0;
+        double first = q0 + qx * ((x0 + xs[1]) / 2) + qy * ((y0 + ys[1]) / 2);
         double sum = 0;
         for (int i = 1; i + 1 < xs.length; i++) {
-            double area = 0.5 * ((xs[i] - xs[0]) * (ys[i + 1] - ys[0]) - (xs[i + 1] - xs[0]) * (ys[i] - ys[0]));
-            double x1 = (xs[0] + xs[i]) / 2;
-            double y1 = (ys[0] + ys[i]) / 2;
-            double x2 = (xs[i] + xs[i + 1]) / 2;
-            double y2 = (ys[i] + ys[i + 1]) / 2;
-            double x3 = (xs[i + 1] + xs[0]) / 2;
-            double y3 = (ys[i + 1] + ys[0]) / 2;
-            sum += area / 3 * ((q0 + qx * x1 + qy * y1) + (q0 + qx * x2 + qy * y2) + (q0 + qx * x3 + qy * y3));
+            double dxNext = xs[i + 1] - x0;
+            double dyNext = ys[i + 1] - y0;
+            double area = 0.5 * (dx * dyNext - dxNext * dy);
+            double outer = q0 + qx * ((xs[i] + xs[i + 1]) / 2) + qy * ((ys[i] + ys[i + 1]) / 2);
+            double last = q0 + qx * ((xs[i + 1] + x0) / 2) + qy * ((ys[i + 1] + y0) / 2);
+            sum += area / 3 * (first + outer + last);
+            first = last;
+            dx = dxNext;
+            dy = dyNext;
         }
         return sum;
     }
