@@ -43,25 +43,27 @@ public final class PunchingFace {
         Step d = b.trace(in.section().get().dMean());
         Column c = in.column();
         ColumnOutline outline = PlanGeometry.outline(c);
-        Step beta = null;
+        // β by value for every case (the same double as its trace: PunchingBetaTest); the worst case's is traced.
+        ControlPerimeter.BetaGeometry face = ControlPerimeter.betaGeometry(outline, 2 * d.value());
+        ActionCase governing = null;
         double worst = Double.NEGATIVE_INFINITY;
-        String worstCase = "";
         for (ActionCase a : in.uls()) {
             double n = a.nKn();
             if (n <= 0) {
                 continue;
             }
-            Step caseBeta = ControlPerimeter.beta(outline, 2 * d.value(), n, a.mxKnm(), a.myKnm());
-            if (caseBeta.value() * n > worst) {
-                worst = caseBeta.value() * n;
-                beta = caseBeta;
-                worstCase = a.name();
+            double caseBeta = ControlPerimeter.betaValue(face, n, a.mxKnm(), a.myKnm());
+            if (caseBeta * n > worst) {
+                worst = caseBeta * n;
+                governing = a;
             }
         }
-        if (beta == null) {
+        if (governing == null) {
             return b.notApplicable("no ULS case presses the column onto the " + element).build();
         }
-        b.value("beta", beta);
+        String worstCase = governing.name();
+        Step beta = b.value("beta", ControlPerimeter.beta(outline, 2 * d.value(), governing.nKn(), governing.mxKnm(),
+                governing.myKnm()));
         b.governing(worstCase);
         Step ved = b.value("ved", Step.of("VEd", "β·N", Num.f(beta.value()) + "·" + Num.f(worst / beta.value())
                 + " (" + worstCase + ")", worst, "kN", "EN 1992-1-1 6.4.3(3), 6.4.5(3)"));
