@@ -106,25 +106,43 @@ final class TieCheck {
     private static Side governing(PileCapContext ctx, Axis axis, double offset) {
         double centre = axis.along(ctx.cap.column().position());
         List<Point> piles = ctx.cap.piles().positions();
-        Side best = new Side(0, "no pile beyond the column", ctx.uls.get(0).action().name(),
-                ctx.uls.get(0).action().nKn());
+        UlsCase bestCase = ctx.uls.get(0);
+        int bestSign = 0;
+        double bestSum = 0;
         for (UlsCase u : ctx.uls) {
             double[] p = u.withSelfWeight().reactionsKn();
             for (int sign : new int[] {1, -1}) {
                 double sum = 0;
-                List<String> terms = new ArrayList<>();
                 for (int i = 0; i < piles.size(); i++) {
-                    double lever = sign * (axis.along(piles.get(i)) - centre) - offset;
+                    double lever = lever(axis, piles.get(i), centre, sign, offset);
                     if (lever > 0) {
                         sum += p[i] * lever;
-                        terms.add(Num.f(p[i]) + "·" + Num.f(lever));
                     }
                 }
-                if (sum > best.sumKnMm) {
-                    best = new Side(sum, String.join(" + ", terms), u.action().name(), u.action().nKn());
+                if (sum > bestSum) {
+                    bestCase = u;
+                    bestSign = sign;
+                    bestSum = sum;
                 }
             }
         }
-        return best;
+        if (bestSign == 0) {
+            return new Side(0, "no pile beyond the column", bestCase.action().name(), bestCase.action().nKn());
+        }
+        // The terms are written for the governing side alone, with the levers its sum took.
+        double[] p = bestCase.withSelfWeight().reactionsKn();
+        List<String> terms = new ArrayList<>();
+        for (int i = 0; i < piles.size(); i++) {
+            double lever = lever(axis, piles.get(i), centre, bestSign, offset);
+            if (lever > 0) {
+                terms.add(Num.f(p[i]) + "·" + Num.f(lever));
+            }
+        }
+        return new Side(bestSum, String.join(" + ", terms), bestCase.action().name(), bestCase.action().nKn());
+    }
+
+    /** The lever of a pile beyond the column centre plus {@code offset} on side {@code sign}; ≤ 0 when not beyond. */
+    private static double lever(Axis axis, Point pile, double centre, int sign, double offset) {
+        return sign * (axis.along(pile) - centre) - offset;
     }
 }
