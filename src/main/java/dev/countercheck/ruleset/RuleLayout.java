@@ -27,6 +27,9 @@ public final class RuleLayout {
     /** The slots with the parameters' values filled in. */
     private final Object[] parameters;
     private final boolean[] isParameter;
+    /** The scope's variables in the order it declares them, and their slots: a frame's values come in that order. */
+    private final String[] declared;
+    private final Integer[] declaredSlots;
     private final Map<String, CompiledExpression> compiled = new HashMap<>();
 
     RuleLayout(RuleExpressions expressions, CheckDef check, Iterable<String> variables,
@@ -36,6 +39,13 @@ public final class RuleLayout {
         slot(DIR);
         variables.forEach(this::slot);
         check.derived().forEach(d -> slot(d.name()));
+        List<String> scope = new ArrayList<>();
+        variables.forEach(scope::add);
+        this.declared = scope.toArray(new String[0]);
+        this.declaredSlots = new Integer[declared.length];
+        for (int i = 0; i < declared.length; i++) {
+            declaredSlots[i] = slots.get(declared[i]);
+        }
         this.parameters = new Object[names.size()];
         this.isParameter = new boolean[names.size()];
         parameterValues.forEach((name, value) -> {
@@ -105,15 +115,19 @@ public final class RuleLayout {
         private Map<String, Object> extra;
 
         private Frame(Map<String, Object> variables, String subject) {
-            variables.forEach((name, value) -> {
-                Integer slot = slots.get(name);
+            int i = 0;
+            for (Map.Entry<String, Object> e : variables.entrySet()) {
+                String name = e.getKey();
+                // The scope's values come in the order it declares its variables: the slot is then known.
+                Integer slot = i < declared.length && name.equals(declared[i]) ? declaredSlots[i] : slots.get(name);
+                i++;
                 if (slot == null) {
                     extra = extra == null ? new HashMap<>() : extra;
-                    extra.put(name, value);
+                    extra.put(name, e.getValue());
                 } else if (!isParameter[slot]) {
-                    values[slot] = value;
+                    values[slot] = e.getValue();
                 }
-            });
+            }
             int dir = slots.get(DIR);
             if (!isParameter[dir]) {
                 values[dir] = subject;
