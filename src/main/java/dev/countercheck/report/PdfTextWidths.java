@@ -58,6 +58,11 @@ final class PdfTextWidths extends PdfBoxTextRenderer {
         }
     }
 
+    /** Whether the PDF device's current font can be read, so that texts are drawn without the device's test. */
+    static boolean readsTheDevicesFont() {
+        return CURRENT_FONT != null;
+    }
+
     @Override
     public void drawString(OutputDevice device, String text, float x, float y) {
         drawString(device, text, x, y, null);
