@@ -62,6 +62,8 @@ public final class OutputSet implements AutoCloseable {
 
     /** The size of the buffer between a report's writer and its file. */
     static final int BUFFER = 1 << 16;
+    /** The characters of a text encoded at once by {@link #add(String, String)}. */
+    private static final int SLICE = 1 << 16;
 
     /** The journal of a set while it is written; its move to {@code .countercheck.<pid>.<set>.set} commits the set. */
     private static final String PENDING = "countercheck-set";
@@ -111,8 +113,22 @@ public final class OutputSet implements AutoCloseable {
         return add(name, out -> out.write(content));
     }
 
+    /**
+     * Adds a text file whose whole text is at hand, written as UTF-8 by the string's own encoder in
+     * slices (a writer's encoder takes its slow path at the first character beyond ASCII).
+     */
     public OutputSet add(String name, String content) {
-        return addText(name, out -> out.write(content));
+        return add(name, out -> {
+            int start = 0;
+            while (start < content.length()) {
+                int end = Math.min(content.length(), start + SLICE);
+                if (end < content.length() && Character.isHighSurrogate(content.charAt(end - 1))) {
+                    end--; // a surrogate pair stays in one slice
+                }
+                out.write(content.substring(start, end).getBytes(StandardCharsets.UTF_8));
+                start = end;
+            }
+        });
     }
 
     /**

@@ -5,9 +5,6 @@ import com.openhtmltopdf.pdfboxout.PdfBoxRenderer;
 import com.openhtmltopdf.pdfboxout.PdfRendererBuilder;
 import com.openhtmltopdf.pdfboxout.PdfRendererBuilder.PdfAConformance;
 import com.openhtmltopdf.simple.extend.XhtmlNamespaceHandler;
-import com.openhtmltopdf.svgsupport.BatikSVGDrawer;
-import com.openhtmltopdf.svgsupport.BatikSVGDrawer.SvgExternalResourceMode;
-import com.openhtmltopdf.svgsupport.BatikSVGDrawer.SvgScriptMode;
 import com.openhtmltopdf.util.XRLog;
 import dev.countercheck.review.Review;
 import dev.countercheck.round.ReviewRound;
@@ -114,7 +111,7 @@ public final class PdfReportWriter {
         org.w3c.dom.Document dom = new W3CDom().fromJsoup(html);
         try (PDDocument document = new PDDocument(IOUtils.createTempFileOnlyStreamCache());
              PdfFonts fonts = PdfFonts.open(document)) {
-            BatikSVGDrawer drawings = new BatikSVGDrawer(SvgScriptMode.SECURE, SvgExternalResourceMode.SECURE);
+            PdfDrawings drawings = new PdfDrawings();
             PdfRendererBuilder builder = new PdfRendererBuilder()
                     .withW3cDocument(dom, null)
                     .useNamespaceHandler(handler)

@@ -14,9 +14,12 @@ import java.io.InputStream;
 import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.HashSet;
+import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Set;
 import java.util.function.BiPredicate;
 import java.util.function.Predicate;
@@ -170,10 +173,16 @@ final class PdfStyles {
             }
         }
         subjects.removeIf(compound -> compound.tag() != null && !compound.tag().equals("span"));
+        // a span with its classes alone: whether a subject may match it depends on its class attribute only
+        Map<String, Boolean> styledByClasses = new HashMap<>();
+        // the span and its sibling elements are its parent's children: unwrapping one that no such rule sees changes no answer
+        Map<Element, Boolean> orderSensitive = new IdentityHashMap<>();
         for (Element span : page.getElementsByTag("span")) {
             if (span.attributes().size() == 1 && span.hasAttr("class") && span.childrenSize() == 0 && span.hasText()
-                    && span.parent() != null && !mayMatchAny(span, subjects) && !mayMatchAny(span, bySiblings)
-                    && span.siblingElements().stream().noneMatch(sibling -> mayMatchAny(sibling, bySiblings))) {
+                    && span.parent() != null
+                    && !styledByClasses.computeIfAbsent(span.className(), c -> mayMatchAny(span, subjects))
+                    && !orderSensitive.computeIfAbsent(span.parent(),
+                            parent -> parent.children().stream().anyMatch(child -> mayMatchAny(child, bySiblings)))) {
                 span.unwrap();
             }
         }

@@ -126,6 +126,34 @@ class PdfReportWriterTest {
     }
 
     @Test
+    void drawsEachDistinctDrawingOnceAndPlacesEveryRepeatAsTheSameForm() throws IOException {
+        // the fixture's page with its first drawing drawn twice over, side by side
+        String page = new HtmlReportWriter().write(review);
+        java.util.regex.Matcher svg = java.util.regex.Pattern.compile("(?s)<svg.*?</svg>").matcher(page);
+        assertThat(svg.find()).isTrue();
+        page = page.substring(0, svg.end()) + svg.group() + svg.group() + page.substring(svg.end());
+        List<String> drawings = new ArrayList<>();
+        for (svg.reset(page); svg.find(); ) {
+            drawings.add(svg.group());
+        }
+        java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+        new PdfReportWriter().render(page, review, "fixture.json", new JsonResultWriter().write(review), out);
+
+        List<org.apache.pdfbox.cos.COSObjectKey> placed = new ArrayList<>();
+        try (PDDocument document = Loader.loadPDF(out.toByteArray())) {
+            for (PDPage p : document.getPages()) {
+                org.apache.pdfbox.cos.COSDictionary forms = p.getResources().getCOSObject().getCOSDictionary(COSName.XOBJECT);
+                if (forms != null) {
+                    forms.keySet().forEach(name -> placed.add(((org.apache.pdfbox.cos.COSObject) forms.getItem(name)).getKey()));
+                }
+            }
+        }
+        assertThat(placed).as("every drawing placed").hasSameSizeAs(drawings);
+        assertThat(Set.copyOf(placed)).as("one form per distinct drawing").hasSize(Set.copyOf(drawings).size())
+                .hasSizeLessThan(drawings.size());
+    }
+
+    @Test
     void embedsEveryFontItUsesAndOnlyTheShippedOnes() throws IOException {
         Set<String> fonts = new TreeSet<>();
         try (PDDocument document = Loader.loadPDF(pdf)) {
