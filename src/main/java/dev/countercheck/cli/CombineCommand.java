@@ -21,11 +21,14 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 
 /** {@code combine FILE}: prints the combinations generated from each element's characteristic loads. */
-@Command(name = "combine", mixinStandardHelpOptions = true, versionProvider = Version.class,
+@Command(name = CombineCommand.NAME, mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Print the EN 1990 combinations generated from the characteristic loads (loads:) of each"
                 + " element: as text, or as YAML to paste under the element's actions. Exit 0, 2 for unusable"
                 + " input, 3 on an internal error.")
 public final class CombineCommand implements Callable<Integer> {
+
+    /** The sub-command's name on the command line. */
+    static final String NAME = "combine";
 
     /** How the combinations are printed. */
     enum Format { TEXT, YAML }

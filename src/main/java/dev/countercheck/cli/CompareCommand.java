@@ -17,12 +17,15 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
 /** {@code compare OLD.json NEW.json}: what became of each finding from one revision's review to the next. */
-@Command(name = "compare", mixinStandardHelpOptions = true, versionProvider = Version.class,
+@Command(name = CompareCommand.NAME, mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Compare the JSON results of two revisions: each finding, matched by its id, is closed,"
                 + " still-open, changed (other severity or values) or new; the counts close the list.",
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:compared", "2:a result file cannot be used, or wrong usage"})
 public final class CompareCommand implements Callable<Integer> {
+
+    /** The sub-command's name on the command line. */
+    static final String NAME = "compare";
 
     @Parameters(index = "0", paramLabel = "OLD.json", description = "The result of the earlier revision.")
     Path older;

@@ -6,19 +6,31 @@ import java.io.PrintWriter;
 import picocli.CommandLine.Command;
 
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import java.util.stream.Stream;
 
 /** The top-level command: only sub-commands; alone it prints the help and exits as a usage error. */
 @Command(name = "countercheck", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Independent design review of reinforced-concrete foundations to EN 1992-1-1.")
 public final class CountercheckCommand implements Callable<Integer> {
 
-    /** The sub-commands, in the order the help lists them. */
-    private static final List<Class<?>> SUBCOMMANDS = List.of(ReviewCommand.class, ValidateCommand.class,
-            RulesCommand.class, ExampleCommand.class, CombineCommand.class, SchemaCommand.class, CompareCommand.class,
-            CommandLine.HelpCommand.class);
+    /**
+     * The sub-commands by name, in the order the help lists them (then picocli's {@code help}). Found by their
+     * names' constants, so that choosing one reads no annotation: the first one read costs a noticeable part of
+     * the start-up, which the commands that load a ruleset spend loading it on a second core instead.
+     */
+    private static final Map<String, Class<?>> BY_NAME = byName(ReviewCommand.NAME, ReviewCommand.class,
+            ValidateCommand.NAME, ValidateCommand.class, RulesCommand.NAME, RulesCommand.class,
+            ExampleCommand.NAME, ExampleCommand.class, CombineCommand.NAME, CombineCommand.class,
+            SchemaCommand.NAME, SchemaCommand.class, CompareCommand.NAME, CompareCommand.class);
+    /** Every sub-command, in the order the help lists them. */
+    private static final List<Class<?>> SUBCOMMANDS = Stream.concat(BY_NAME.values().stream(),
+            Stream.of(CommandLine.HelpCommand.class)).toList();
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -50,8 +62,16 @@ public final class CountercheckCommand implements Callable<Integer> {
 
     /** The sub-command that {@code args} start with, the {@code help} command aside (it needs all the others). */
     static Optional<Class<?>> subcommand(String... args) {
-        return SUBCOMMANDS.stream().filter(sub -> args.length > 0 && sub != CommandLine.HelpCommand.class
-                && sub.getAnnotation(Command.class).name().equals(args[0])).findFirst();
+        return args.length == 0 ? Optional.empty() : Optional.ofNullable(BY_NAME.get(args[0]));
+    }
+
+    /** The sub-commands by their names, each name followed by its command, in the order given. */
+    private static Map<String, Class<?>> byName(Object... nameThenCommand) {
+        Map<String, Class<?>> byName = new LinkedHashMap<>();
+        for (int i = 0; i < nameThenCommand.length; i += 2) {
+            byName.put((String) nameThenCommand[i], (Class<?>) nameThenCommand[i + 1]);
+        }
+        return Collections.unmodifiableMap(byName);
     }
 
     /** Whether {@code command} applies a ruleset to a submission (it has the {@link RulesetOptions}). */

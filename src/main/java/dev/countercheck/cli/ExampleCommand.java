@@ -5,9 +5,12 @@ import picocli.CommandLine.Command;
 import java.util.concurrent.Callable;
 
 /** {@code example}: prints a commented starter submission. */
-@Command(name = "example", mixinStandardHelpOptions = true, versionProvider = Version.class,
+@Command(name = ExampleCommand.NAME, mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Print a commented starter submission to adapt: countercheck example > my-project.yaml")
 public final class ExampleCommand implements Callable<Integer> {
+
+    /** The sub-command's name on the command line. */
+    static final String NAME = "example";
 
     static final String RESOURCE = "/example-submission.yaml";
 

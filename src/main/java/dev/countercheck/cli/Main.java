@@ -1,5 +1,9 @@
 package dev.countercheck.cli;
 
+import dev.countercheck.report.ReviewReports;
+
+import java.util.Optional;
+
 /** Entry point: builds the command line and exits with what it returns. */
 public final class Main {
 
@@ -14,9 +18,11 @@ public final class Main {
     public static void main(String[] args) {
         int code;
         try {
-            // a command that applies a ruleset most often applies the default one: loaded on a second core meanwhile
-            if (CountercheckCommand.subcommand(args).filter(CountercheckCommand::appliesRuleset).isPresent()) {
-                Rulesets.loadAhead();
+            // a command that applies a ruleset most often applies the default one: loaded on a second core meanwhile,
+            // and then, for a review, what its reports need whatever the review finds
+            Optional<Class<?>> command = CountercheckCommand.subcommand(args);
+            if (command.filter(CountercheckCommand::appliesRuleset).isPresent()) {
+                Rulesets.loadAhead(command.get() == ReviewCommand.class ? ReviewReports::prepare : () -> { });
             }
             code = CountercheckCommand.commandLine(args).execute(args);
         } catch (Throwable e) {

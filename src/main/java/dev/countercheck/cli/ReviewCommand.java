@@ -32,7 +32,7 @@ import java.util.Set;
 import java.util.concurrent.Callable;
 
 /** {@code review FILE...}: reviews each submission and writes its JSON result and HTML report. */
-@Command(name = "review", mixinStandardHelpOptions = true, versionProvider = Version.class,
+@Command(name = ReviewCommand.NAME, mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Recompute every check of each submission and write DIR/<name>.json and DIR/<name>.html;"
                 + " for several submissions or a folder, also DIR/index.html.",
         exitCodeListHeading = "%nExit status:%n",
@@ -41,6 +41,9 @@ import java.util.concurrent.Callable;
                 "2:unusable input or wrong usage, or the reports could not be written",
                 "3:internal error (a fault of the tool, never of the input)"})
 public final class ReviewCommand implements Callable<Integer> {
+
+    /** The sub-command's name on the command line. */
+    static final String NAME = "review";
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "Submission files (YAML or JSON) or folders of them.")
     List<Path> files;

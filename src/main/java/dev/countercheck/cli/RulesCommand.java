@@ -19,9 +19,12 @@ import java.util.concurrent.Callable;
  * {@code rules}: every parameter, table and check of the effective ruleset with its clause and the
  * file that set it. {@code --format markdown} writes the rule reference the docs include.
  */
-@Command(name = "rules", mixinStandardHelpOptions = true, versionProvider = Version.class,
+@Command(name = RulesCommand.NAME, mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "List every parameter, table and rule of the effective ruleset, with its clause and origin.")
 public final class RulesCommand implements Callable<Integer> {
+
+    /** The sub-command's name on the command line. */
+    static final String NAME = "rules";
 
     /** Output formats of the listing. */
     enum Format { text, markdown }

@@ -48,11 +48,20 @@ final class Rulesets {
      * submission on a second core. A command without a rulesets folder takes it when it asks for that
      * ruleset; when the load failed, or another ruleset is asked for, it is not used (the command loads
      * what it needs itself, with its own errors), and the work done ahead has only warmed the loader up.
+     * The thread then runs {@code then}, more work the command will need (a review's report template),
+     * whose failure is left for the command to meet where it does that work itself.
      */
-    static void loadAhead() {
+    static void loadAhead(Runnable then) {
         FutureTask<Ruleset> task = new FutureTask<>(() ->
                 new RulesetLoader(Optional.empty(), ProjectReviewer.RULE_VOCABULARY).load(DEFAULT));
-        Thread thread = new Thread(task, "countercheck-ruleset-ahead");
+        Thread thread = new Thread(() -> {
+            task.run();
+            try {
+                then.run();
+            } catch (RuntimeException | Error e) {
+                // only a head start: the command does this work again where it needs it, and reports its failure
+            }
+        }, "countercheck-ruleset-ahead");
         thread.setDaemon(true);
         thread.start();
         ahead = Optional.of(task);

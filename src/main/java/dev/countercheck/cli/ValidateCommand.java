@@ -17,10 +17,13 @@ import java.util.List;
 import java.util.concurrent.Callable;
 
 /** {@code validate FILE...}: reads and validates submissions, writes nothing. */
-@Command(name = "validate", mixinStandardHelpOptions = true, versionProvider = Version.class,
+@Command(name = ValidateCommand.NAME, mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Read and validate submissions, and the ruleset each would be reviewed with, without reviewing them."
                 + " Exit 0 when all are usable, 2 otherwise, 3 on an internal error.")
 public final class ValidateCommand implements Callable<Integer> {
+
+    /** The sub-command's name on the command line. */
+    static final String NAME = "validate";
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "Submission files (YAML or JSON) or folders of them.")
     List<Path> files;

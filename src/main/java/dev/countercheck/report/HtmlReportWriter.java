@@ -30,6 +30,14 @@ public final class HtmlReportWriter {
     /** Configured once; it keeps each template compiled after its first use (safe to share between threads). */
     private static final Configuration FREEMARKER = configuration();
 
+    /**
+     * The report's template, compiled on first use. A holder, so that a thread that asks for it while another
+     * compiles it ({@link #prepare()} on a second core) waits for that one instead of compiling it again.
+     */
+    private static final class Report {
+        static final Template TEMPLATE = load(HtmlReportWriter.TEMPLATE);
+    }
+
     private static Configuration configuration() {
         Configuration freemarker = new Configuration(Configuration.VERSION_2_3_34);
         freemarker.setClassForTemplateLoading(HtmlReportWriter.class, "/templates");
@@ -46,6 +54,11 @@ public final class HtmlReportWriter {
         freemarker.setNewBuiltinClassResolver(TemplateClassResolver.ALLOWS_NOTHING_RESOLVER);
         freemarker.setObjectWrapper(new ReportObjectWrapper(Configuration.VERSION_2_3_34));
         return freemarker;
+    }
+
+    /** Compiles the report's template now (a part of a short review's time), if no thread has yet. */
+    static void prepare() {
+        template(TEMPLATE);
     }
 
     /** The HTML page for {@code review} on its own: no sign-off names, responses or previous revision. */
@@ -96,12 +109,7 @@ public final class HtmlReportWriter {
      * is the writer's own (a full disk), any other failure a bug in this package.
      */
     void render(String name, Object model, Writer out) throws IOException {
-        Template template;
-        try {
-            template = FREEMARKER.getTemplate(name);
-        } catch (IOException e) {
-            throw new IllegalStateException("could not read templates/" + name + " from the jar: " + e.getMessage(), e);
-        }
+        Template template = template(name);
         try {
             template.process(model, out);
         } catch (TemplateException e) {
@@ -109,5 +117,19 @@ public final class HtmlReportWriter {
             throw new IllegalStateException("could not render templates/" + name + ": " + e.getMessage(), e);
         }
         out.flush();
+    }
+
+    /** The compiled template {@code name}. */
+    private static Template template(String name) {
+        return name.equals(TEMPLATE) ? Report.TEMPLATE : load(name);
+    }
+
+    /** Template {@code name} from Freemarker's cache, compiled the first time; one missing from the jar is a bug here. */
+    private static Template load(String name) {
+        try {
+            return FREEMARKER.getTemplate(name);
+        } catch (IOException e) {
+            throw new IllegalStateException("could not read templates/" + name + " from the jar: " + e.getMessage(), e);
+        }
     }
 }

@@ -21,6 +21,17 @@ public final class ReviewReports {
     }
 
     /**
+     * Readies now what every report needs and no review changes: the HTML template compiled and the glossary of
+     * symbols read, some of a short review's start-up. Safe from any thread, once or more, while another renders
+     * (a thread that needs either while another readies it waits for that one); a caller may run it on a second
+     * core while the review runs.
+     */
+    public static void prepare() {
+        HtmlReportWriter.prepare();
+        Glossary.bundled();
+    }
+
+    /**
      * Adds the reports of {@code review} in {@code round} to {@code set}.
      *
      * @param pdf the PDF's file name, when a PDF is wanted

@@ -3,8 +3,15 @@ package dev.countercheck.ruleset;
 import com.ezylang.evalex.BaseException;
 import com.ezylang.evalex.Expression;
 import com.ezylang.evalex.config.ExpressionConfiguration;
+import com.ezylang.evalex.config.FunctionDictionaryIfc;
+import com.ezylang.evalex.config.MapBasedFunctionDictionary;
 import com.ezylang.evalex.data.EvaluationValue;
 import com.ezylang.evalex.functions.FunctionIfc;
+import com.ezylang.evalex.functions.basic.AbsFunction;
+import com.ezylang.evalex.functions.basic.IfFunction;
+import com.ezylang.evalex.functions.basic.MaxFunction;
+import com.ezylang.evalex.functions.basic.MinFunction;
+import com.ezylang.evalex.functions.basic.SqrtFunction;
 import com.ezylang.evalex.parser.ParseException;
 
 import java.math.BigDecimal;
@@ -46,6 +53,7 @@ public final class RuleExpressions {
         @SuppressWarnings("unchecked")
         Map.Entry<String, FunctionIfc>[] array = functions.toArray(new Map.Entry[0]);
         this.configuration = ExpressionConfiguration.builder()
+                .functionDictionary(offeredFunctions())
                 .mathContext(MathContext.DECIMAL64)
                 .structuresAllowed(false)
                 .implicitMultiplicationAllowed(false)
@@ -56,6 +64,21 @@ public final class RuleExpressions {
         Map<String, Double> values = new HashMap<>();
         parameters.forEach((name, p) -> values.put(name, p.value()));
         this.parameterValues = Map.copyOf(values);
+    }
+
+    /**
+     * A new dictionary of the library functions a rule may call ({@link ExpressionBounds#FUNCTIONS}, EvalEx's own
+     * function objects), to which the tables are added. EvalEx's default dictionary would build all its seventy-odd
+     * functions first; a call of any other is refused when the ruleset is read, so that none could be reached.
+     */
+    static FunctionDictionaryIfc offeredFunctions() {
+        FunctionDictionaryIfc functions = new MapBasedFunctionDictionary();
+        functions.addFunction("IF", new IfFunction());
+        functions.addFunction("MAX", new MaxFunction());
+        functions.addFunction("MIN", new MinFunction());
+        functions.addFunction("ABS", new AbsFunction());
+        functions.addFunction("SQRT", new SqrtFunction());
+        return functions;
     }
 
     /**
@@ -97,8 +120,6 @@ public final class RuleExpressions {
 
     /** The variable names an expression uses (table function names excluded); throws on a syntax error. */
     Set<String> variablesOf(String expression) throws BaseException {
-        Expression e = new Expression(expression, configuration);
-        e.validate();
         Set<String> used = new TreeSet<>(parse(expression).variables());
         used.removeAll(tables);
         return used;

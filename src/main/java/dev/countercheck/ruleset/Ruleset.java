@@ -3,6 +3,7 @@ package dev.countercheck.ruleset;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Supplier;
 
 /**
  * The effective ruleset: a ruleset file with everything it {@code extends} resolved.
@@ -11,7 +12,8 @@ import java.util.Optional;
  * @param title       its title
  * @param standard    the standard and annex it represents
  * @param version     its own version
- * @param sha256      hash over the contents of every file of the chain, most general first
+ * @param digest      the hash over the contents of every file of the chain, most general first, in hex ({@link
+ *                    #sha256()}), worked out when first asked for (a validation never asks)
  * @param files       the files of the chain, most general first
  * @param parameters  every parameter by name, with the file that set its value
  * @param tables      every table by name, with the file that set it
@@ -21,10 +23,15 @@ import java.util.Optional;
  * @param expressions the evaluator for the rules' expressions, with the tables as functions
  * @param options     the methods the ruleset chooses, by name
  */
-public record Ruleset(String id, String title, String standard, String version, String sha256, List<String> files,
+public record Ruleset(String id, String title, String standard, String version, Supplier<String> digest, List<String> files,
                       Map<String, Parameter> parameters, Map<String, TableDef> tables, Map<String, CheckDef> checks,
                       Map<String, Map<String, Rule>> rules, Map<String, SeverityDef> severities,
                       RuleExpressions expressions, Map<String, RuleOption> options) {
+
+    /** The SHA-256 hash over the contents of every file of the chain, most general first, in hex. */
+    public String sha256() {
+        return digest.get();
+    }
 
     /** The choice of option {@code name}; every option the engine offers is validated at load. */
     public RuleOption option(String name) {

@@ -26,6 +26,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Supplier;
 import java.util.regex.Pattern;
 
 /**
@@ -200,7 +201,7 @@ public final class RulesetLoader {
         }
         MapNode root = top.root();
         return new Ruleset(optionalText(root, "id").orElse(top.name()), optionalText(root, "title").orElse(""),
-                optionalText(root, "standard").orElse(""), optionalText(root, "version").orElse(""), hash(chain),
+                optionalText(root, "standard").orElse(""), optionalText(root, "version").orElse(""), hashOnDemand(chain),
                 chain.stream().map(RulesetFile::name).toList(), Collections.unmodifiableMap(parameters),
                 Collections.unmodifiableMap(tables), Collections.unmodifiableMap(validated), validator.rules(),
                 Collections.unmodifiableMap(severities), expressions, Collections.unmodifiableMap(options));
@@ -513,10 +514,28 @@ public final class RulesetLoader {
         return Optional.empty();
     }
 
-    private static String hash(List<RulesetFile> chain) {
+    /** {@link #hash} of the chain, worked out the first time it is asked for (a thread may then work it out again). */
+    private static Supplier<String> hashOnDemand(List<RulesetFile> chain) {
+        List<byte[]> contents = chain.stream().map(RulesetFile::bytes).toList();
+        return new Supplier<>() {
+            private volatile String hash;
+
+            @Override
+            public String get() {
+                String h = hash;
+                if (h == null) {
+                    h = hash(contents);
+                    hash = h;
+                }
+                return h;
+            }
+        };
+    }
+
+    private static String hash(List<byte[]> contents) {
         try {
             MessageDigest sha = MessageDigest.getInstance("SHA-256");
-            chain.forEach(f -> sha.update(f.bytes()));
+            contents.forEach(sha::update);
             return HexFormat.of().formatHex(sha.digest());
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("SHA-256 is part of every Java runtime", e);

@@ -188,12 +188,16 @@ class CommandsTest {
                     .isEqualTo(all);
         }
         assertThat(CountercheckCommand.commandLine("validate", "x.yaml").getSubcommands()).containsOnlyKeys("validate");
+        // each sub-command is found by the name its annotation gives it
+        CountercheckCommand.commandLine().getSubcommands().forEach((name, sub) -> assertThat(
+                CountercheckCommand.subcommand(name)).as(name).isEqualTo(name.equals("help") ? Optional.empty()
+                : Optional.of(sub.getCommand().getClass())));
         assertThat(CountercheckCommand.commandLine("help", "validate").getSubcommands()).containsKeys("review", "rules");
     }
 
     @Test
     void theDefaultRulesetLoadedAheadIsTheOneLoadedOnTheSpot() throws Exception {
-        Rulesets.loadAhead();
+        Rulesets.loadAhead(() -> { });
         StringWriter console = new StringWriter();
         Ruleset ahead = new Rulesets(Optional.empty(), new PrintWriter(console)).load(Rulesets.DEFAULT);
         Ruleset direct = new RulesetLoader(Optional.empty(), ProjectReviewer.RULE_VOCABULARY).load(Rulesets.DEFAULT);
