@@ -13,7 +13,6 @@ import dev.countercheck.ruleset.CheckDef.RequirementDef;
 import dev.countercheck.ruleset.Rule;
 import dev.countercheck.ruleset.RuleLayout;
 import dev.countercheck.ruleset.Ruleset;
-import dev.countercheck.ruleset.ValueSource;
 import dev.countercheck.ruleset.Variable;
 import dev.countercheck.submission.CheckCatalogue;
 
@@ -23,11 +22,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.BiFunction;
-import java.util.function.Function;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * Runs a ruleset's check on one subject: the derived quantities in order (each a trace step with
@@ -35,14 +30,6 @@ import java.util.regex.Pattern;
  * an ordinary check outcome, with the same statuses, findings and trace as the Java checks.
  */
 public final class RuleChecks {
-
-    private static final Pattern NAME = Pattern.compile("(?<![\\w.\"])([A-Za-z_][A-Za-z0-9_]*)(?![\\w\"(])");
-    private static final Pattern PLACEHOLDER = Pattern.compile("\\{([A-Za-z_][A-Za-z0-9_]*)}");
-    /** Formulas and messages split once at their names: the rulesets' texts are few, the elements many. */
-    private static final Map<String, String[]> FORMULAS = new ConcurrentHashMap<>();
-    private static final Map<String, String[]> MESSAGES = new ConcurrentHashMap<>();
-    private static final Pattern IDENTIFIER = Pattern.compile("[A-Za-z_][A-Za-z0-9_]*");
-    private static final Map<String, List<String>> IDENTIFIERS = new ConcurrentHashMap<>();
 
     private RuleChecks() {
     }
@@ -117,17 +104,21 @@ public final class RuleChecks {
         CheckDef def = rule.def();
         String subject = rule.subject();
         CheckBuilder b = new CheckBuilder(catalogue.check(def.idFor(subject)));
-        RuleLayout.Frame values = rules.expressions().layout(def, scope).frame(variables, subject);
+        RuleLayout layout = rules.expressions().layout(def, scope);
+        RuleLayout.Frame values = layout.frame(variables, subject);
         try {
             if (def.appliesWhen().isPresent() && !values.bool(def.appliesWhen().get())) {
-                return b.notApplicable(fill(def.notApplicable(), values::get)).build();
+                return b.notApplicable(fill(layout, def.notApplicable(), values)).build();
             }
             Map<String, Step> steps = new HashMap<>();
-            for (DerivedDef d : def.derived()) {
+            List<DerivedDef> derived = def.derived();
+            for (int i = 0; i < derived.size(); i++) {
+                DerivedDef d = derived.get(i);
                 double v = values.number(d.formula());
                 values.put(d.name(), v);
-                steps.put(d.name(), b.trace(marked(Step.ofRule(d.symbol(), d.formula(), substitute(d.formula(), values::get),
-                        v, d.unit(), d.clause() + " (" + def.origin() + ")"), d.formula(), rules)));
+                Step step = Step.ofRule(d.symbol(), d.formula(), layout.formula(i).fill(values, RuleChecks::inFormula),
+                        v, d.unit(), d.clause() + " (" + def.origin() + ")");
+                steps.put(d.name(), b.trace(layout.recalled(i).map(step::remarked).orElse(step)));
             }
             for (String name : def.values()) {
                 Step step = steps.get(name);
@@ -146,12 +137,12 @@ public final class RuleChecks {
                     b.pass();
                 } else {
                     b.failRequirement(Severity.fromLabel(r.severity()), r.finding(),
-                            fill(r.message(), values::get) + " (" + r.clause() + ")");
+                            fill(layout, r.message(), values) + " (" + r.clause() + ")");
                 }
             }
             for (CheckDef.CautionDef c : def.cautions()) {
                 if (values.bool(c.when())) {
-                    b.caution(fill(c.text(), values::get));
+                    b.caution(fill(layout, c.text(), values));
                 }
             }
         } catch (BaseException | RuntimeException e) {
@@ -161,68 +152,23 @@ public final class RuleChecks {
         return b.build();
     }
 
-    /** The step, remarked when its formula uses a parameter or table the ruleset marks as recalled from memory. */
-    private static Step marked(Step step, String formula, Ruleset rules) {
-        String recalled = null;
-        for (String name : IDENTIFIERS.computeIfAbsent(formula, RuleChecks::identifiers)) {
-            if (rules.isRecalled(name)) {
-                recalled = recalled == null ? name : recalled + ", " + name;
-            }
-        }
-        return recalled == null ? step : step.remarked(recalled + " " + ValueSource.MARK);
+    /** A message of the check with each {name} replaced by its value. */
+    private static String fill(RuleLayout layout, String message, RuleLayout.Frame values) {
+        return layout.message(message).fill(values, RuleChecks::inMessage);
     }
 
-    /** Every name a formula writes (variables, parameters, tables), once each, in order. */
-    private static List<String> identifiers(String formula) {
-        List<String> names = new ArrayList<>();
-        Matcher m = IDENTIFIER.matcher(formula);
-        while (m.find()) {
-            if (!names.contains(m.group()) && (m.start() == 0 || formula.charAt(m.start() - 1) != '"')) {
-                names.add(m.group());
-            }
-        }
-        return List.copyOf(names);
+    /** A name's value as a formula in the trace shows it; a name of no value as written. */
+    private static String inFormula(Object value, String name) {
+        return value == null ? name : show(value, true);
     }
 
-    /** The formula with each known value put in for its name (names of no value stay as written). */
-    static String substitute(String formula, Function<String, Object> values) {
-        String[] parts = FORMULAS.computeIfAbsent(formula, f -> split(f, NAME));
-        StringBuilder out = new StringBuilder(formula.length() + 16);
-        for (int i = 0; i < parts.length; i++) {
-            out.append(i % 2 == 0 ? parts[i] : show(values.apply(parts[i]), parts[i], true));
-        }
-        return out.toString();
-    }
-
-    /** A message with each {name} replaced by its value. */
-    static String fill(String template, Function<String, Object> values) {
-        String[] parts = MESSAGES.computeIfAbsent(template, t -> split(t, PLACEHOLDER));
-        StringBuilder out = new StringBuilder(template.length() + 16);
-        for (int i = 0; i < parts.length; i++) {
-            out.append(i % 2 == 0 ? parts[i] : show(values.apply(parts[i]), "{" + parts[i] + "}", false));
-        }
-        return out.toString();
-    }
-
-    /** The text around each match of {@code pattern} (even places) and the names it matched (odd places). */
-    private static String[] split(String text, Pattern pattern) {
-        List<String> parts = new ArrayList<>();
-        Matcher m = pattern.matcher(text);
-        int last = 0;
-        while (m.find()) {
-            parts.add(text.substring(last, m.start()));
-            parts.add(m.group(1));
-            last = m.end();
-        }
-        parts.add(text.substring(last));
-        return parts.toArray(new String[0]);
+    /** A name's value as a message shows it; a name of no value as its placeholder. */
+    private static String inMessage(Object value, String name) {
+        return value == null ? "{" + name + "}" : show(value, false);
     }
 
     /** A value as a trace or a message shows it: numbers to four figures, text quoted in formulas. */
-    private static String show(Object value, String absent, boolean quoteText) {
-        if (value == null) {
-            return absent;
-        }
+    private static String show(Object value, boolean quoteText) {
         if (value instanceof Number n) {
             return Num.f(n.doubleValue());
         }

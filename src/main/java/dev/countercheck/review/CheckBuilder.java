@@ -12,7 +12,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
-import java.util.stream.IntStream;
 import java.util.OptionalDouble;
 
 /**
@@ -56,13 +55,19 @@ public final class CheckBuilder {
             throw new IllegalArgumentException(spec.id() + "." + name + " is in " + q.unit() + ", step "
                     + step.symbol() + " is in " + step.unit());
         }
-        int index = IntStream.range(0, trace.size()).filter(i -> trace.get(i) == step).findFirst()
-                .orElseGet(() -> {
-                    trace(step);
-                    return trace.size() - 1;
-                });
-        values.put(name, new Value(step.value(), q.unit(), OptionalInt.of(index)));
+        values.put(name, new Value(step.value(), q.unit(), OptionalInt.of(indexInTrace(step))));
         return step;
+    }
+
+    /** Where this very step stands in the trace (an equal step elsewhere is another); added at the end if absent. */
+    private int indexInTrace(Step step) {
+        for (int i = 0; i < trace.size(); i++) {
+            if (trace.get(i) == step) {
+                return i;
+            }
+        }
+        trace(step);
+        return trace.size() - 1;
     }
 
     /**

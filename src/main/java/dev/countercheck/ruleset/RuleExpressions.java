@@ -18,6 +18,7 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -41,6 +42,8 @@ public final class RuleExpressions {
     private final ExpressionConfiguration configuration;
     private final Set<String> tables;
     private final Map<String, Double> parameterValues;
+    /** The parameters and tables marked as recalled from memory, by name. */
+    private final Set<String> recalled = new HashSet<>();
     private final Map<String, Parsed> parsed = new ConcurrentHashMap<>();
     /** The layout of each check for each scope, by their identity: built once, used for every element. */
     private final Map<LayoutKey, RuleLayout> layouts = new ConcurrentHashMap<>();
@@ -64,6 +67,21 @@ public final class RuleExpressions {
         Map<String, Double> values = new HashMap<>();
         parameters.forEach((name, p) -> values.put(name, p.value()));
         this.parameterValues = Map.copyOf(values);
+        parameters.forEach((name, p) -> {
+            if (p.source().recalled()) {
+                recalled.add(name);
+            }
+        });
+        tables.forEach((name, t) -> {
+            if (t.source().recalled()) {
+                recalled.add(name);
+            }
+        });
+    }
+
+    /** Whether a parameter or table of this name is marked as recalled from memory. */
+    boolean isRecalled(String name) {
+        return recalled.contains(name);
     }
 
     /**

@@ -4,14 +4,20 @@ import com.ezylang.evalex.BaseException;
 
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /**
  * The names one check's expressions see, each given a slot once: the ruleset's parameters, {@code dir}, the
  * variables of the check's scope and its derived quantities; and its expressions compiled against those slots
- * ({@link CompiledExpression}), each with EvalEx behind it for what the compiled form does not answer. A run of
- * the check on one subject holds its values in a {@link Frame}. Built once per check and scope ({@link
+ * ({@link CompiledExpression}), each with EvalEx behind it for what the compiled form does not answer; its
+ * formulas and messages split at their names ({@link NamedText}), and the recalled values each formula uses. A run
+ * of the check on one subject holds its values in a {@link Frame}. Built once per check and scope ({@link
  * RuleExpressions#layout}).
  *
  * <p>The values stand as they would in one map filled in this order, each name replacing an earlier of the same
@@ -20,6 +26,7 @@ import java.util.Map;
 public final class RuleLayout {
 
     private static final String DIR = "dir";
+    private static final Pattern IDENTIFIER = Pattern.compile("[A-Za-z_][A-Za-z0-9_]*");
 
     private final RuleExpressions expressions;
     private final Map<String, Integer> slots = new HashMap<>();
@@ -30,13 +37,19 @@ public final class RuleLayout {
     /** The scope's variables in the order it declares them, and their slots: a frame's values come in that order. */
     private final String[] declared;
     private final Integer[] declaredSlots;
+    private final int dirSlot;
     private final Map<String, CompiledExpression> compiled = new HashMap<>();
+    /** Each derived quantity's formula, in the check's order, and the remark naming the recalled values it uses. */
+    private final NamedText[] formulas;
+    private final String[] recalled;
+    private final Map<String, NamedText> messages = new HashMap<>();
 
     RuleLayout(RuleExpressions expressions, CheckDef check, Iterable<String> variables,
                Map<String, Double> parameterValues) {
         this.expressions = expressions;
         parameterValues.keySet().forEach(this::slot);
         slot(DIR);
+        this.dirSlot = slots.get(DIR);
         variables.forEach(this::slot);
         check.derived().forEach(d -> slot(d.name()));
         List<String> scope = new ArrayList<>();
@@ -66,6 +79,29 @@ public final class RuleLayout {
                 compiled.put(text, c);
             }
         }
+        this.formulas = check.derived().stream().map(d -> new NamedText(d.formula(), NamedText.FORMULA_NAME, slots))
+                .toArray(NamedText[]::new);
+        this.recalled = check.derived().stream().map(d -> recalledIn(d.formula())).toArray(String[]::new);
+        List<String> messageTexts = new ArrayList<>();
+        messageTexts.add(check.notApplicable());
+        check.requirements().forEach(r -> messageTexts.add(r.message()));
+        check.cautions().forEach(c -> messageTexts.add(c.text()));
+        messageTexts.forEach(m -> messages.computeIfAbsent(m, t -> new NamedText(t, NamedText.PLACEHOLDER, slots)));
+    }
+
+    /**
+     * The remark for a formula that writes a parameter or table the ruleset marks as recalled from memory (every
+     * name it writes but text literals, once each, in order); null when it writes none.
+     */
+    private String recalledIn(String formula) {
+        Set<String> names = new LinkedHashSet<>();
+        Matcher m = IDENTIFIER.matcher(formula);
+        while (m.find()) {
+            if ((m.start() == 0 || formula.charAt(m.start() - 1) != '"') && expressions.isRecalled(m.group())) {
+                names.add(m.group());
+            }
+        }
+        return names.isEmpty() ? null : String.join(", ", names) + " " + ValueSource.MARK;
     }
 
     private void slot(String name) {
@@ -102,6 +138,21 @@ public final class RuleLayout {
         return compiled.get(expression);
     }
 
+    /** The formula of the check's derived quantity {@code index}, split at its names. */
+    public NamedText formula(int index) {
+        return formulas[index];
+    }
+
+    /** The remark naming the recalled values the formula of derived quantity {@code index} uses, if any. */
+    public Optional<String> recalled(int index) {
+        return Optional.ofNullable(recalled[index]);
+    }
+
+    /** One of the check's messages (not-applicable, requirements', cautions'), split at its placeholders. */
+    public NamedText message(String text) {
+        return messages.get(text);
+    }
+
     /** A run of the check on one subject: {@code variables} are its scope's values for it. */
     public Frame frame(Map<String, Object> variables, String subject) {
         return new Frame(variables, subject);
@@ -128,9 +179,8 @@ public final class RuleLayout {
                     values[slot] = e.getValue();
                 }
             }
-            int dir = slots.get(DIR);
-            if (!isParameter[dir]) {
-                values[dir] = subject;
+            if (!isParameter[dirSlot]) {
+                values[dirSlot] = subject;
             }
         }
 
@@ -141,8 +191,12 @@ public final class RuleLayout {
 
         /** The value of {@code name} as spelled, null when it has none. */
         public Object get(String name) {
-            Integer slot = slots.get(name);
-            return slot != null ? values[slot] : extra == null ? null : extra.get(name);
+            return get(slots.getOrDefault(name, -1), name);
+        }
+
+        /** The value of {@code name}, found at {@code slot} (-1: outside the layout); null when it has none. */
+        Object get(int slot, String name) {
+            return slot >= 0 ? values[slot] : extra == null ? null : extra.get(name);
         }
 
         /** A number result, or an exception naming the expression when it is not one. */

@@ -85,14 +85,4 @@ public record Ruleset(String id, String title, String standard, String version, 
                 + t.clause() + "; " + t.origin() + ")"));
         return List.copyOf(out);
     }
-
-    /** Whether a table or parameter of this name is marked as recalled from memory. */
-    public boolean isRecalled(String name) {
-        Parameter p = parameters.get(name);
-        if (p != null && p.source().recalled()) {
-            return true;
-        }
-        TableDef t = tables.get(name);
-        return t != null && t.source().recalled();
-    }
 }

@@ -37,7 +37,12 @@ public final class CheckCatalogue {
     public record CheckSpec(String id, String title, String basis, Kind kind, List<QuantitySpec> quantities) {
 
         public Optional<QuantitySpec> quantity(String name) {
-            return quantities.stream().filter(q -> q.name().equals(name)).findFirst();
+            for (QuantitySpec q : quantities) {
+                if (q.name().equals(name)) {
+                    return Optional.of(q);
+                }
+            }
+            return Optional.empty();
         }
     }
 
