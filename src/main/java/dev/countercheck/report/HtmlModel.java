@@ -198,12 +198,15 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
                               String verdict, List<CheckView> checks, List<FindingRow> findings, int cautionCount,
                               Supplier<List<DrawingView>> drawingsOf, List<CombinationRow> combinations) {
 
-        /** The checks with a utilisation, largest first, then the others in their order. */
+        /** The checks with a utilisation, largest first, then the others in their order (each utilisation read once). */
         public List<CheckView> checksByUtilisation() {
-            List<CheckView> sorted = new ArrayList<>(checks);
-            sorted.sort(Comparator.comparing((CheckView c) -> c.utilisationValue().isEmpty())
-                    .thenComparing(c -> -c.utilisationValue().orElse(0.0)));
-            return sorted;
+            record Keyed(CheckView check, Optional<Double> utilisation) {
+            }
+            return checks.stream().map(c -> new Keyed(c, c.utilisationValue()))
+                    .sorted(Comparator.comparing((Keyed k) -> k.utilisation().isEmpty())
+                            .thenComparing(k -> -k.utilisation().orElse(0.0)))
+                    .map(Keyed::check)
+                    .toList();
         }
 
         /** The check with the largest utilisation, as a list of one, or none when no check has one. */
