@@ -25,8 +25,8 @@ final class ExpressionBounds {
     /** Names, numbers, texts and operators; the evaluator's tree has at most this many nodes. */
     static final int MAX_TOKENS = 200;
     static final int MAX_NESTING = 20;
-    /** The library functions a rule may call; the ruleset's tables are functions too. */
-    static final Set<String> FUNCTIONS = Set.of("IF", "MAX", "MIN", "ABS", "SQRT");
+    /** The library functions a rule may call ({@link RuleExpressions#OFFERED}); the ruleset's tables are functions too. */
+    static final Set<String> FUNCTIONS = RuleExpressions.OFFERED.keySet();
     static final double MAX_NUMBER = 1e6;
     static final double MAX_EXPONENT = 10;
 

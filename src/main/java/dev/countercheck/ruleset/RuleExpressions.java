@@ -24,6 +24,7 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.Supplier;
 import java.util.function.ToIntFunction;
 
 /**
@@ -85,17 +86,17 @@ public final class RuleExpressions {
     }
 
     /**
-     * A new dictionary of the library functions a rule may call ({@link ExpressionBounds#FUNCTIONS}, EvalEx's own
-     * function objects), to which the tables are added. EvalEx's default dictionary would build all its seventy-odd
-     * functions first; a call of any other is refused when the ruleset is read, so that none could be reached.
+     * The library functions a rule may call, by name, each as EvalEx's own function object. EvalEx's default
+     * dictionary would build all its seventy-odd functions first; a call of any other is refused when the ruleset is
+     * read ({@link ExpressionBounds}), so that none could be reached.
      */
+    static final Map<String, Supplier<FunctionIfc>> OFFERED = Map.of("IF", IfFunction::new, "MAX", MaxFunction::new,
+            "MIN", MinFunction::new, "ABS", AbsFunction::new, "SQRT", SqrtFunction::new);
+
+    /** A new dictionary of the {@link #OFFERED} functions, to which the tables are added. */
     static FunctionDictionaryIfc offeredFunctions() {
         FunctionDictionaryIfc functions = new MapBasedFunctionDictionary();
-        functions.addFunction("IF", new IfFunction());
-        functions.addFunction("MAX", new MaxFunction());
-        functions.addFunction("MIN", new MinFunction());
-        functions.addFunction("ABS", new AbsFunction());
-        functions.addFunction("SQRT", new SqrtFunction());
+        OFFERED.forEach((name, function) -> functions.addFunction(name, function.get()));
         return functions;
     }
 
