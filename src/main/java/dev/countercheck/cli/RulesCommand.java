@@ -13,6 +13,9 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 import java.io.PrintWriter;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 
 /**
@@ -94,11 +97,32 @@ public final class RulesCommand implements Callable<Integer> {
             c.appliesWhen().ifPresent(w -> out.println("  applies when " + w));
             for (CheckDef.DerivedDef d : c.derived()) {
                 out.printf("  %-14s = %s  [%s] %s%n", d.symbol(), d.formula(), d.unit(), d.clause());
+                restated(c, d).forEach((type, own) -> out.printf("    for %s: %s  %s%n", type, own.formula(),
+                        own.clause()));
             }
             for (CheckDef.RequirementDef q : c.requirements()) {
-                out.printf("  requires %s  (%s %s, %s)%n", q.that(), q.finding(), q.severity(), q.clause());
+                out.printf("  requires %s  (%s %s, %s%s)%n", q.that(), q.finding(), q.severity(), q.clause(),
+                        ownMessages(c, q));
             }
         }
+    }
+
+    /** The element types that restate derived quantity {@code d} of check {@code c} ({@code for:}), with their own. */
+    private static Map<String, CheckDef.DerivedDef> restated(CheckDef c, CheckDef.DerivedDef d) {
+        Map<String, CheckDef.DerivedDef> out = new LinkedHashMap<>();
+        c.variants().forEach((type, v) -> Optional.ofNullable(v.derived().get(d.name())).ifPresent(r -> out.put(type, r)));
+        return out;
+    }
+
+    /** "; its own message for TYPE" for each element type that restates the finding's message, else nothing. */
+    private static String ownMessages(CheckDef c, CheckDef.RequirementDef q) {
+        StringBuilder out = new StringBuilder();
+        c.variants().forEach((type, v) -> {
+            if (v.messages().containsKey(q.finding())) {
+                out.append("; its own message for ").append(type);
+            }
+        });
+        return out.toString();
     }
 
     /** The mark of a value recalled from memory, as the listing shows it after the value's line. */
@@ -172,11 +196,14 @@ public final class RulesCommand implements Callable<Integer> {
             for (CheckDef.DerivedDef d : c.derived()) {
                 out.println("| " + d.symbol() + " (`" + d.name() + "`) | `" + d.formula().replace("|", "\\|") + "` | "
                         + d.unit() + " | " + d.clause() + " |");
+                restated(c, d).forEach((type, own) -> out.println("| " + d.symbol() + " (`" + d.name() + "`), for "
+                        + type + " | `" + own.formula().replace("|", "\\|") + "` | " + d.unit() + " | " + own.clause()
+                        + " |"));
             }
             out.println();
             for (CheckDef.RequirementDef q : c.requirements()) {
                 out.println("- requires `" + q.that().replace("|", "\\|") + "` (finding `" + q.finding() + "`, "
-                        + q.severity() + ", " + q.clause() + ")");
+                        + q.severity() + ", " + q.clause() + ownMessages(c, q) + ")");
             }
         }
     }

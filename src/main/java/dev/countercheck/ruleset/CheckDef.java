@@ -3,6 +3,7 @@ package dev.countercheck.ruleset;
 import dev.countercheck.input.SourceLocation;
 
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -17,11 +18,28 @@ import java.util.Optional;
  * @param values        the check's reported quantities, each a variable or derived name
  * @param requirements  what must hold
  * @param cautions      cautions to show when their condition holds
+ * @param variants      what the check says otherwise for some of its element types ({@code for:}), by type
  * @param origin        the ruleset file that defined the check
  */
 public record CheckDef(String id, List<String> elementTypes, String scope, Optional<String> appliesWhen, String notApplicable,
                        List<DerivedDef> derived, List<String> values, List<RequirementDef> requirements,
-                       List<CautionDef> cautions, String origin, SourceLocation location) {
+                       List<CautionDef> cautions, Map<String, Variant> variants, String origin,
+                       SourceLocation location) {
+
+    /**
+     * What a check shared by several element types says otherwise for one of them ({@code for: <type>:}): the
+     * formula and clause of some derived quantities (symbol and unit stay the check's) and the message of some
+     * findings. Everything else is the check's own.
+     *
+     * @param derived  the derived quantities it restates, by name
+     * @param messages the messages it restates, by finding name
+     */
+    public record Variant(Map<String, DerivedDef> derived, Map<String, Message> messages) {
+    }
+
+    /** A finding's message as a variant restates it, with where it is written. */
+    public record Message(String text, SourceLocation location) {
+    }
 
     /** A caution shown with the check when {@code when} is true. */
     public record CautionDef(String when, String text, SourceLocation location) {
@@ -42,6 +60,29 @@ public record CheckDef(String id, List<String> elementTypes, String scope, Optio
      */
     public record RequirementDef(String that, String finding, String severity, Optional<String> utilisation,
                                  String message, String clause, SourceLocation location) {
+    }
+
+    /**
+     * The check as it runs for {@code elementType}: its variant's derived quantities and messages in place of
+     * its own (in the same order), or the check itself when the type has no variant.
+     */
+    public CheckDef forType(String elementType) {
+        Variant v = variants.get(elementType);
+        if (v == null) {
+            return this;
+        }
+        List<DerivedDef> d = derived.stream().map(x -> v.derived().getOrDefault(x.name(), x)).toList();
+        List<RequirementDef> r = requirements.stream().map(x -> !v.messages().containsKey(x.finding()) ? x
+                : new RequirementDef(x.that(), x.finding(), x.severity(), x.utilisation(),
+                        v.messages().get(x.finding()).text(), x.clause(), x.location())).toList();
+        return new CheckDef(id, elementTypes, scope, appliesWhen, notApplicable, d, values, r, cautions, Map.of(),
+                origin, location);
+    }
+
+    /** The check with its derived quantities in {@code ordered} (the same quantities, in evaluation order). */
+    CheckDef withDerived(List<DerivedDef> ordered) {
+        return new CheckDef(id, elementTypes, scope, appliesWhen, notApplicable, ordered, values, requirements, cautions,
+                variants, origin, location);
     }
 
     /** The id for one subject: {@code {dir}} replaced. */

@@ -9,7 +9,9 @@ import dev.countercheck.input.Problems;
 import dev.countercheck.input.Shown;
 import dev.countercheck.input.Suggestions;
 import dev.countercheck.ruleset.CheckDef.DerivedDef;
+import dev.countercheck.ruleset.CheckDef.Message;
 import dev.countercheck.ruleset.CheckDef.RequirementDef;
+import dev.countercheck.ruleset.CheckDef.Variant;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -26,7 +28,9 @@ final class RuleDefinitions {
     private static final List<String> TABLE_KEYS = List.of("symbol", "unit", "clause", "note", "interpolate",
             "several", "columns", "rows", "beyond", "source");
     private static final List<String> CHECK_KEYS = List.of("applies_to", "scope", "applies_when", "not_applicable", "derived",
-            "values", "requirements", "cautions");
+            "values", "requirements", "cautions", "for");
+    private static final List<String> VARIANT_KEYS = List.of("derived", "messages");
+    private static final List<String> VARIANT_DERIVED_KEYS = List.of("formula", "clause");
     private static final List<String> CAUTION_KEYS = List.of("when", "text");
     private static final List<String> DERIVED_KEYS = List.of("symbol", "formula", "unit", "clause");
     private static final List<String> REQUIREMENT_KEYS = List.of("that", "finding", "severity", "utilisation",
@@ -102,8 +106,7 @@ final class RuleDefinitions {
             MapNode c = map.get();
             unknownKeys(c, path, CHECK_KEYS);
             List<DerivedDef> derived = new ArrayList<>();
-            for (Entry d : c.entry("derived").flatMap(x -> mapping(x.value(), path + ".derived")).map(MapNode::entries)
-                    .orElse(List.of())) {
+            for (Entry d : entries(c, "derived", path)) {
                 String dPath = path + ".derived." + d.key();
                 mapping(d.value(), dPath).ifPresent(m -> {
                     unknownKeys(m, dPath, DERIVED_KEYS);
@@ -149,9 +152,68 @@ final class RuleDefinitions {
             into.put(e.key(), new CheckDef(e.key(), types, required(c, "scope", path),
                     optionalExpression(c, "applies_when", path),
                     text(c, "not_applicable").orElse("the rule's applies_when condition is false"), derived,
-                    texts(c.entry("values").map(Entry::value), path + ".values"), requirements, cautions, origin,
-                    e.keyLocation()));
+                    texts(c.entry("values").map(Entry::value), path + ".values"), requirements, cautions,
+                    variants(c, path, types, derived, requirements), origin, e.keyLocation()));
         }
+    }
+
+    /**
+     * The {@code for:} block of a check: for an element type it applies to, the derived quantities (formula and
+     * clause) and the findings' messages that the type states otherwise.
+     */
+    private Map<String, Variant> variants(MapNode c, String path, List<String> types, List<DerivedDef> derived,
+                                          List<RequirementDef> requirements) {
+        Map<String, Variant> variants = new LinkedHashMap<>();
+        for (Entry t : entries(c, "for", path)) {
+            String tPath = path + ".for." + t.key();
+            if (!types.contains(t.key())) {
+                problems.add(t.keyLocation(), tPath, "'" + Shown.text(t.key()) + "' is not a type the check applies"
+                        + " to (" + String.join(", ", types) + ")" + Suggestions.hint(t.key(), types));
+                continue;
+            }
+            Optional<MapNode> variant = mapping(t.value(), tPath);
+            if (variant.isEmpty()) {
+                continue;
+            }
+            unknownKeys(variant.get(), tPath, VARIANT_KEYS);
+            Map<String, DerivedDef> restated = new LinkedHashMap<>();
+            for (Entry d : entries(variant.get(), "derived", tPath)) {
+                String dPath = tPath + ".derived." + d.key();
+                Optional<DerivedDef> own = derived.stream().filter(x -> x.name().equals(d.key())).findFirst();
+                if (own.isEmpty()) {
+                    problems.add(d.keyLocation(), dPath, "the check derives no '" + Shown.text(d.key()) + "' to restate"
+                            + Suggestions.hint(d.key(), derived.stream().map(DerivedDef::name).toList()));
+                    continue;
+                }
+                mapping(d.value(), dPath).ifPresent(m -> {
+                    unknownKeys(m, dPath, VARIANT_DERIVED_KEYS);
+                    restated.put(d.key(), new DerivedDef(d.key(), own.get().symbol(), expression(m, "formula", dPath),
+                            own.get().unit(), required(m, "clause", dPath), d.keyLocation()));
+                });
+            }
+            Map<String, Message> messages = new LinkedHashMap<>();
+            List<String> findings = requirements.stream().map(RequirementDef::finding).toList();
+            for (Entry f : entries(variant.get(), "messages", tPath)) {
+                String fPath = tPath + ".messages." + f.key();
+                if (!findings.contains(f.key())) {
+                    problems.add(f.keyLocation(), fPath, "no requirement of the check raises finding '"
+                            + Shown.text(f.key()) + "'" + Suggestions.hint(f.key(), findings));
+                } else if (f.value() instanceof ScalarNode s && s.kind() != ScalarNode.Kind.NULL) {
+                    messages.put(f.key(), new Message(s.text(), f.value().location()));
+                } else {
+                    problems.add(f.value().location(), fPath, "expected the finding's message, found "
+                            + f.value().describe());
+                }
+            }
+            variants.put(t.key(), new Variant(restated, messages));
+        }
+        return variants;
+    }
+
+    /** The entries of the mapping {@code key} of {@code map}; none when it is absent or not a mapping (reported). */
+    private List<Entry> entries(MapNode map, String key, String path) {
+        return map.entry(key).flatMap(x -> mapping(x.value(), path + "." + key)).map(MapNode::entries)
+                .orElse(List.of());
     }
 
     private Optional<MapNode> mapping(Node node, String path) {

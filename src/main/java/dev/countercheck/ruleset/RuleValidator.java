@@ -5,10 +5,12 @@ import dev.countercheck.input.InputError;
 import dev.countercheck.input.SourceLocation;
 import dev.countercheck.ruleset.CheckDef.DerivedDef;
 import dev.countercheck.ruleset.CheckDef.RequirementDef;
+import dev.countercheck.ruleset.CheckDef.Variant;
 import dev.countercheck.ruleset.RuleVocabulary.ElementRules;
 
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -55,15 +57,18 @@ final class RuleValidator {
         List<Checked> each = checks.values().parallelStream()
                 .map(check -> new RuleValidator(vocabulary, parameters, expressions).checked(check)).toList();
         Map<String, CheckDef> out = new LinkedHashMap<>();
+        Map<String, Map<String, CheckDef>> byType = new LinkedHashMap<>();
         for (Checked checked : each) {
             errors.addAll(checked.errors());
             checked.check().ifPresent(c -> out.put(c.id(), c));
+            checked.check().ifPresent(c -> byType.put(c.id(), checked.byType()));
         }
         for (CheckDef check : out.values()) {
             for (String type : check.elementTypes()) {
+                CheckDef own = byType.get(check.id()).get(type);
                 for (String subject : vocabulary.elementTypes().get(type).subjectsOf(check.scope())) {
                     Rule before = rules.computeIfAbsent(type, t -> new LinkedHashMap<>())
-                            .putIfAbsent(check.idFor(subject), new Rule(check, subject));
+                            .putIfAbsent(check.idFor(subject), new Rule(own, subject));
                     if (before != null) {
                         error(check.location(), check.id(), "'" + check.idFor(subject) + "' of " + type
                                 + " is already defined by the check " + before.def().id());
@@ -79,41 +84,60 @@ final class RuleValidator {
         return Collections.unmodifiableMap(rules);
     }
 
-    /** A check validated: with its derived quantities in evaluation order, or empty; and its errors. */
-    private record Checked(Optional<CheckDef> check, List<InputError> errors) {
+    /**
+     * A check validated: with its derived quantities in evaluation order, or empty; the check as each of its types
+     * runs it ({@link CheckDef#forType}, also in evaluation order; the check itself for a type without a variant);
+     * and its errors.
+     */
+    private record Checked(Optional<CheckDef> check, Map<String, CheckDef> byType, List<InputError> errors) {
     }
 
     /** {@code check} validated by this validator, which has seen no other. */
     private Checked checked(CheckDef check) {
-        return new Checked(validate(check), errors);
+        Map<String, CheckDef> byType = new LinkedHashMap<>();
+        Optional<CheckDef> validated = validate(check, byType);
+        return new Checked(validated, byType, errors);
     }
 
-    private Optional<CheckDef> validate(CheckDef check) {
+    private Optional<CheckDef> validate(CheckDef check, Map<String, CheckDef> byType) {
         int before = errors.size();
         if (check.elementTypes().isEmpty()) {
             error(check.location(), check.id() + ".applies_to", "the check applies to no element type; the types are "
                     + String.join(", ", new TreeSet<>(vocabulary.elementTypes().keySet())));
         }
-        List<DerivedDef> ordered = List.of();
+        Map<String, List<DerivedDef>> ordered = new LinkedHashMap<>();
         for (String type : check.elementTypes()) {
             Optional<ElementRules> rulesOfType = vocabulary.of(type);
             if (rulesOfType.isEmpty()) {
                 error(check.location(), check.id() + ".applies_to", "unknown element type '" + type
                         + "'; the element types are " + String.join(", ", new TreeSet<>(vocabulary.elementTypes().keySet())));
             } else {
-                ordered = validate(check, type, rulesOfType.get());
+                ordered.put(type, validate(check.forType(type), type, rulesOfType.get(),
+                        Optional.ofNullable(check.variants().get(type))));
             }
         }
         if (errors.size() > before) {
             return Optional.empty();
         }
-        return Optional.of(new CheckDef(check.id(), check.elementTypes(), check.scope(), check.appliesWhen(),
-                check.notApplicable(), ordered, check.values(), check.requirements(), check.cautions(), check.origin(),
-                check.location()));
+        // the check as the rules listing shows it: in the order of evaluation of its last type, each quantity as
+        // the check states it (a variant restates formulas, never which quantities there are)
+        List<String> order = ordered.isEmpty() ? List.of()
+                : ordered.get(check.elementTypes().get(check.elementTypes().size() - 1)).stream().map(DerivedDef::name)
+                .toList();
+        CheckDef validated = check.withDerived(check.derived().stream()
+                .sorted(Comparator.comparingInt(d -> order.indexOf(d.name()))).toList());
+        ordered.forEach((type, derived) -> {
+            CheckDef own = check.forType(type).withDerived(derived);
+            byType.put(type, own.equals(validated) ? validated : own);
+        });
+        return Optional.of(validated);
     }
 
-    /** Validates the check as a rule of {@code type}; returns its derived quantities in evaluation order. */
-    private List<DerivedDef> validate(CheckDef check, String type, ElementRules vocabulary) {
+    /**
+     * Validates the check as a rule of {@code type} ({@code variant}: what the check states otherwise for it, whose
+     * messages' errors are placed where they are written); returns its derived quantities in evaluation order.
+     */
+    private List<DerivedDef> validate(CheckDef check, String type, ElementRules vocabulary, Optional<Variant> variant) {
         Optional<Map<String, Variable>> scope = vocabulary.scope(check.scope());
         if (scope.isEmpty()) {
             error(check.location(), check.id(), "unknown scope '" + check.scope() + "' for " + type + "; the scopes are "
@@ -186,10 +210,12 @@ final class RuleValidator {
                 error(r.location(), path + ".severity", "severity '" + r.severity()
                         + "' is not one of critical, major, minor, note");
             }
+            SourceLocation messageAt = variant.map(v -> v.messages().get(r.finding())).map(CheckDef.Message::location)
+                    .orElse(r.location());
             Matcher m = PLACEHOLDER.matcher(r.message());
             while (m.find()) {
                 if (!known.contains(m.group(1))) {
-                    error(r.location(), path + ".message", "the message names {" + m.group(1) + "}, which is not known"
+                    error(messageAt, path + ".message", "the message names {" + m.group(1) + "}, which is not known"
                             + " here");
                 }
             }

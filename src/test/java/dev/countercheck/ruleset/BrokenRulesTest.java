@@ -43,6 +43,13 @@ class BrokenRulesTest {
             unknown type       |  max-steel: {applies_to: [pile-kap], scope: section, derived: {}, values: [], requirements: []}                                                                                             | 6 | unknown element type
             no type            |  max-steel: {scope: section, derived: {}, values: [], requirements: []}                                                                                                                   | 6 | is missing: every check names the element types it applies to
             unknown placeholder|  max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', severity: major, message: 'see {nothing}', clause: x}]}                     | 6 | {nothing}
+            variant of a type the check does not apply to | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [], for: {pad-footing: {}}} | 6 | is not a type the check applies to (pile-cap)
+            variant of a quantity the check does not derive | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [], for: {pile-cap: {derived: {as_max: {formula: 'as_x', clause: x}}}}} | 6 | to restate
+            variant with an unknown variable | max-steel: {applies_to: [pile-cap, pad-footing], scope: section, derived: {as_max: {formula: 'as_x', unit: mm2, clause: x}}, values: [as_max], requirements: [], for: {pad-footing: {derived: {as_max: {formula: 'as_q', clause: x}}}}} | 6 | 'as_q'
+            variant without clause | max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'as_x', unit: mm2, clause: x}}, values: [], requirements: [], for: {pile-cap: {derived: {as_max: {formula: 'as_y'}}}}} | 6 | every rule names the clause
+            variant restating a unit | max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'as_x', unit: mm2, clause: x}}, values: [], requirements: [], for: {pile-cap: {derived: {as_max: {formula: 'as_y', unit: mm, clause: x}}}}} | 6 | unknown key
+            variant of a finding no requirement raises | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {messages: {as-y: m}}}} | 6 | no requirement of the check raises finding
+            variant message with an unknown name | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {messages: {as-x: 'see {nothing}'}}}} | 6 | {nothing}
             """)
     void aBrokenRuleIsRefusedWithItsLocation(String name, String check, int line, String message, @TempDir Path dir)
             throws IOException {
@@ -65,6 +72,61 @@ class BrokenRulesTest {
                 () -> new RulesetLoader(dir, ProjectReviewer.RULE_VOCABULARY).load("broken")).errors();
         assertThat(errors).anySatisfy(e -> assertThat(e.message())
                 .contains("'min-steel-x' of pile-cap is already defined by the check min-steel-{dir}"));
+    }
+
+    @Test
+    void aVariantsErrorsArePlacedWhereTheVariantWritesThem(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("broken.yaml"), HEAD + """
+                  max-steel:
+                    applies_to: [pile-cap, pad-footing]
+                    scope: section
+                    derived:
+                      as_max: {formula: 'as_x', unit: mm2, clause: x}
+                    values: [as_max]
+                    requirements:
+                      - {that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}
+                    for:
+                      pad-footing:
+                        derived:
+                          as_max: {formula: 'as_q', clause: x}
+                        messages:
+                          as-x: 'see {nothing}'
+                """);
+        List<InputError> errors = catchThrowableOfType(RulesetException.class,
+                () -> new RulesetLoader(dir, ProjectReviewer.RULE_VOCABULARY).load("broken")).errors();
+        assertThat(errors).anySatisfy(e -> {
+            assertThat(e.message()).contains("'as_q'");
+            assertThat(e.location().line()).isEqualTo(17);
+            assertThat(e.location().column()).isEqualTo(11);
+        }).anySatisfy(e -> {
+            assertThat(e.message()).contains("{nothing}");
+            assertThat(e.location().line()).isEqualTo(19);
+            assertThat(e.location().column()).isEqualTo(17);
+        }).as("none at the check's own lines").allSatisfy(e -> assertThat(e.location().line()).isIn(17, 19));
+    }
+
+    @Test
+    void aVariantRestatesOneTypesFormulaAndMessageAndLeavesTheRestAsTheCheckStatesIt() throws RulesetException {
+        Ruleset rules = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY).load("en1992-recommended");
+        CheckDef pad = rules.rule("pad-footing", "cover").orElseThrow().def();
+        CheckDef cap = rules.rule("pile-cap", "cover").orElseThrow().def();
+        assertThat(pad).as("the check as written serves pads").isSameAs(rules.checks().get("cover"));
+        assertThat(formula(pad, "required")).isEqualTo("MAX(c_nom, c_ground)");
+        assertThat(formula(cap, "required")).isEqualTo("MAX(c_nom, c_ground, embedment)");
+        assertThat(cap.derived().stream().map(CheckDef.DerivedDef::name))
+                .as("the same quantities, in the same order").containsExactlyElementsOf(
+                        pad.derived().stream().map(CheckDef.DerivedDef::name).toList());
+        assertThat(cap.derived()).filteredOn(d -> !d.name().equals("required")).containsExactlyElementsOf(
+                pad.derived().stream().filter(d -> !d.name().equals("required")).toList());
+        assertThat(cap.requirements().get(0).message()).contains("pile embedment {embedment} mm");
+        assertThat(pad.requirements().get(0).message()).doesNotContain("pile");
+        assertThat(cap.requirements().subList(1, 3)).isEqualTo(pad.requirements().subList(1, 3));
+        assertThat(rules.rule("pile-cap", "max-steel").orElseThrow().def()).as("a check without variants")
+                .isSameAs(rules.rule("pad-footing", "max-steel").orElseThrow().def());
+    }
+
+    private static String formula(CheckDef check, String name) {
+        return check.derived().stream().filter(d -> d.name().equals(name)).findFirst().orElseThrow().formula();
     }
 
     @Test

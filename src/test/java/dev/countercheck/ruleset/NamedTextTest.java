@@ -26,7 +26,7 @@ class NamedTextTest {
                 List.of(new CheckDef.DerivedDef("total", "T", FORMULA, "mm2", "6.1", AT)), List.of(),
                 List.of(new CheckDef.RequirementDef("total > 0", "invented", "error", Optional.empty(), MESSAGE,
                         "6.1", AT)),
-                List.of(), "invented", AT);
+                List.of(), Map.of(), "invented", AT);
         return new RuleExpressions(Map.of(), Map.of()).layout(check, scope);
     }
 
