@@ -114,14 +114,13 @@ public final class RulesCommand implements Callable<Integer> {
         return out;
     }
 
-    /** "; its own message for TYPE" for each element type that restates the finding's message, else nothing. */
+    /** "; its own message (clause) for TYPE" for each element type that restates the requirement, else nothing. */
     private static String ownMessages(CheckDef c, CheckDef.RequirementDef q) {
         StringBuilder out = new StringBuilder();
-        c.variants().forEach((type, v) -> {
-            if (v.messages().containsKey(q.finding())) {
-                out.append("; its own message for ").append(type);
-            }
-        });
+        c.variants().forEach((type, v) -> Optional.ofNullable(v.requirements().get(q.finding())).ifPresent(w -> {
+            out.append("; for ").append(type).append(w.message().isPresent() ? " its own message" : "");
+            w.clause().ifPresent(clause -> out.append(w.message().isPresent() ? " and " : " ").append(clause));
+        }));
         return out.toString();
     }
 

@@ -28,17 +28,20 @@ public record CheckDef(String id, List<String> elementTypes, String scope, Optio
 
     /**
      * What a check shared by several element types says otherwise for one of them ({@code for: <type>:}): the
-     * formula and clause of some derived quantities (symbol and unit stay the check's) and the message of some
-     * findings. Everything else is the check's own.
+     * formula and clause of some derived quantities (symbol and unit stay the check's) and the message or clause
+     * of some requirements. Everything else is the check's own.
      *
-     * @param derived  the derived quantities it restates, by name
-     * @param messages the messages it restates, by finding name
+     * @param derived      the derived quantities it restates, by name
+     * @param requirements the requirements' words it restates, by finding name
      */
-    public record Variant(Map<String, DerivedDef> derived, Map<String, Message> messages) {
+    public record Variant(Map<String, DerivedDef> derived, Map<String, Words> requirements) {
     }
 
-    /** A finding's message as a variant restates it, with where it is written. */
-    public record Message(String text, SourceLocation location) {
+    /**
+     * A requirement's message and clause as a variant restates them (each empty when the variant keeps the
+     * requirement's own), with where the variant writes the message (else the restated requirement).
+     */
+    public record Words(Optional<String> message, Optional<String> clause, SourceLocation location) {
     }
 
     /** A caution shown with the check when {@code when} is true. */
@@ -63,8 +66,8 @@ public record CheckDef(String id, List<String> elementTypes, String scope, Optio
     }
 
     /**
-     * The check as it runs for {@code elementType}: its variant's derived quantities and messages in place of
-     * its own (in the same order), or the check itself when the type has no variant.
+     * The check as it runs for {@code elementType}: its variant's derived quantities and requirements' words in
+     * place of its own (in the same order), or the check itself when the type has no variant.
      */
     public CheckDef forType(String elementType) {
         Variant v = variants.get(elementType);
@@ -72,9 +75,10 @@ public record CheckDef(String id, List<String> elementTypes, String scope, Optio
             return this;
         }
         List<DerivedDef> d = derived.stream().map(x -> v.derived().getOrDefault(x.name(), x)).toList();
-        List<RequirementDef> r = requirements.stream().map(x -> !v.messages().containsKey(x.finding()) ? x
-                : new RequirementDef(x.that(), x.finding(), x.severity(), x.utilisation(),
-                        v.messages().get(x.finding()).text(), x.clause(), x.location())).toList();
+        List<RequirementDef> r = requirements.stream().map(x -> Optional.ofNullable(v.requirements().get(x.finding()))
+                .map(w -> new RequirementDef(x.that(), x.finding(), x.severity(), x.utilisation(),
+                        w.message().orElse(x.message()), w.clause().orElse(x.clause()), x.location()))
+                .orElse(x)).toList();
         return new CheckDef(id, elementTypes, scope, appliesWhen, notApplicable, d, values, r, cautions, Map.of(),
                 origin, location);
     }

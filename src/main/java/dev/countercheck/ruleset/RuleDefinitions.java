@@ -9,9 +9,9 @@ import dev.countercheck.input.Problems;
 import dev.countercheck.input.Shown;
 import dev.countercheck.input.Suggestions;
 import dev.countercheck.ruleset.CheckDef.DerivedDef;
-import dev.countercheck.ruleset.CheckDef.Message;
 import dev.countercheck.ruleset.CheckDef.RequirementDef;
 import dev.countercheck.ruleset.CheckDef.Variant;
+import dev.countercheck.ruleset.CheckDef.Words;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -29,8 +29,9 @@ final class RuleDefinitions {
             "several", "columns", "rows", "beyond", "source");
     private static final List<String> CHECK_KEYS = List.of("applies_to", "scope", "applies_when", "not_applicable", "derived",
             "values", "requirements", "cautions", "for");
-    private static final List<String> VARIANT_KEYS = List.of("derived", "messages");
+    private static final List<String> VARIANT_KEYS = List.of("derived", "requirements");
     private static final List<String> VARIANT_DERIVED_KEYS = List.of("formula", "clause");
+    private static final List<String> VARIANT_REQUIREMENT_KEYS = List.of("message", "clause");
     private static final List<String> CAUTION_KEYS = List.of("when", "text");
     private static final List<String> DERIVED_KEYS = List.of("symbol", "formula", "unit", "clause");
     private static final List<String> REQUIREMENT_KEYS = List.of("that", "finding", "severity", "utilisation",
@@ -159,7 +160,7 @@ final class RuleDefinitions {
 
     /**
      * The {@code for:} block of a check: for an element type it applies to, the derived quantities (formula and
-     * clause) and the findings' messages that the type states otherwise.
+     * clause) and the requirements (message, clause; by finding) that the type states otherwise.
      */
     private Map<String, Variant> variants(MapNode c, String path, List<String> types, List<DerivedDef> derived,
                                           List<RequirementDef> requirements) {
@@ -191,21 +192,25 @@ final class RuleDefinitions {
                             own.get().unit(), required(m, "clause", dPath), d.keyLocation()));
                 });
             }
-            Map<String, Message> messages = new LinkedHashMap<>();
+            Map<String, Words> words = new LinkedHashMap<>();
             List<String> findings = requirements.stream().map(RequirementDef::finding).toList();
-            for (Entry f : entries(variant.get(), "messages", tPath)) {
-                String fPath = tPath + ".messages." + f.key();
+            for (Entry f : entries(variant.get(), "requirements", tPath)) {
+                String fPath = tPath + ".requirements." + f.key();
                 if (!findings.contains(f.key())) {
                     problems.add(f.keyLocation(), fPath, "no requirement of the check raises finding '"
                             + Shown.text(f.key()) + "'" + Suggestions.hint(f.key(), findings));
-                } else if (f.value() instanceof ScalarNode s && s.kind() != ScalarNode.Kind.NULL) {
-                    messages.put(f.key(), new Message(s.text(), f.value().location()));
-                } else {
-                    problems.add(f.value().location(), fPath, "expected the finding's message, found "
-                            + f.value().describe());
+                    continue;
                 }
+                mapping(f.value(), fPath).ifPresent(m -> {
+                    unknownKeys(m, fPath, VARIANT_REQUIREMENT_KEYS);
+                    if (text(m, "message").isEmpty() && text(m, "clause").isEmpty()) {
+                        problems.add(m.location(), fPath, "a restated requirement gives its message, its clause or both");
+                    }
+                    words.put(f.key(), new Words(text(m, "message"), text(m, "clause"),
+                            m.entry("message").map(x -> x.value().location()).orElse(m.location())));
+                });
             }
-            variants.put(t.key(), new Variant(restated, messages));
+            variants.put(t.key(), new Variant(restated, words));
         }
         return variants;
     }

@@ -210,8 +210,8 @@ final class RuleValidator {
                 error(r.location(), path + ".severity", "severity '" + r.severity()
                         + "' is not one of critical, major, minor, note");
             }
-            SourceLocation messageAt = variant.map(v -> v.messages().get(r.finding())).map(CheckDef.Message::location)
-                    .orElse(r.location());
+            SourceLocation messageAt = variant.map(v -> v.requirements().get(r.finding()))
+                    .filter(w -> w.message().isPresent()).map(CheckDef.Words::location).orElse(r.location());
             Matcher m = PLACEHOLDER.matcher(r.message());
             while (m.find()) {
                 if (!known.contains(m.group(1))) {

@@ -48,8 +48,9 @@ class BrokenRulesTest {
             variant with an unknown variable | max-steel: {applies_to: [pile-cap, pad-footing], scope: section, derived: {as_max: {formula: 'as_x', unit: mm2, clause: x}}, values: [as_max], requirements: [], for: {pad-footing: {derived: {as_max: {formula: 'as_q', clause: x}}}}} | 6 | 'as_q'
             variant without clause | max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'as_x', unit: mm2, clause: x}}, values: [], requirements: [], for: {pile-cap: {derived: {as_max: {formula: 'as_y'}}}}} | 6 | every rule names the clause
             variant restating a unit | max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'as_x', unit: mm2, clause: x}}, values: [], requirements: [], for: {pile-cap: {derived: {as_max: {formula: 'as_y', unit: mm, clause: x}}}}} | 6 | unknown key
-            variant of a finding no requirement raises | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {messages: {as-y: m}}}} | 6 | no requirement of the check raises finding
-            variant message with an unknown name | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {messages: {as-x: 'see {nothing}'}}}} | 6 | {nothing}
+            variant of a finding no requirement raises | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {requirements: {as-y: {message: m}}}}} | 6 | no requirement of the check raises finding
+            variant requirement without words | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {requirements: {as-x: {}}}}} | 6 | gives its message, its clause or both
+            variant message with an unknown name | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {requirements: {as-x: {message: 'see {nothing}'}}}}} | 6 | {nothing}
             """)
     void aBrokenRuleIsRefusedWithItsLocation(String name, String check, int line, String message, @TempDir Path dir)
             throws IOException {
@@ -89,8 +90,9 @@ class BrokenRulesTest {
                       pad-footing:
                         derived:
                           as_max: {formula: 'as_q', clause: x}
-                        messages:
-                          as-x: 'see {nothing}'
+                        requirements:
+                          as-x:
+                            message: 'see {nothing}'
                 """);
         List<InputError> errors = catchThrowableOfType(RulesetException.class,
                 () -> new RulesetLoader(dir, ProjectReviewer.RULE_VOCABULARY).load("broken")).errors();
@@ -100,13 +102,13 @@ class BrokenRulesTest {
             assertThat(e.location().column()).isEqualTo(11);
         }).anySatisfy(e -> {
             assertThat(e.message()).contains("{nothing}");
-            assertThat(e.location().line()).isEqualTo(19);
-            assertThat(e.location().column()).isEqualTo(17);
-        }).as("none at the check's own lines").allSatisfy(e -> assertThat(e.location().line()).isIn(17, 19));
+            assertThat(e.location().line()).isEqualTo(20);
+            assertThat(e.location().column()).isEqualTo(22);
+        }).as("none at the check's own lines").allSatisfy(e -> assertThat(e.location().line()).isIn(17, 20));
     }
 
     @Test
-    void aVariantRestatesOneTypesFormulaAndMessageAndLeavesTheRestAsTheCheckStatesIt() throws RulesetException {
+    void aVariantRestatesOneTypesFormulasAndRequirementsAndLeavesTheRestAsTheCheckStatesIt() throws RulesetException {
         Ruleset rules = new RulesetLoader(Path.of("rulesets"), ProjectReviewer.RULE_VOCABULARY).load("en1992-recommended");
         CheckDef pad = rules.rule("pad-footing", "cover").orElseThrow().def();
         CheckDef cap = rules.rule("pile-cap", "cover").orElseThrow().def();
@@ -121,6 +123,10 @@ class BrokenRulesTest {
         assertThat(cap.requirements().get(0).message()).contains("pile embedment {embedment} mm");
         assertThat(pad.requirements().get(0).message()).doesNotContain("pile");
         assertThat(cap.requirements().subList(1, 3)).isEqualTo(pad.requirements().subList(1, 3));
+        assertThat(rules.rule("pile-cap", "min-steel-x").orElseThrow().def().requirements().get(1).clause())
+                .isEqualTo("EN 1992-1-1 9.8.1(3)");
+        assertThat(rules.rule("pad-footing", "min-steel-x").orElseThrow().def().requirements().get(1).clause())
+                .isEqualTo("EN 1992-1-1 9.8.2.1(1)");
         assertThat(rules.rule("pile-cap", "max-steel").orElseThrow().def()).as("a check without variants")
                 .isSameAs(rules.rule("pad-footing", "max-steel").orElseThrow().def());
     }
