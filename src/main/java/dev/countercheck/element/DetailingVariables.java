@@ -19,8 +19,8 @@ import java.util.function.ToDoubleFunction;
  * The detailing-rule scopes every element type shares, and the variables they have in common:
  * {@code section} (the whole element: concrete, covers and bars), {@code bottom-bars} (one direction of
  * bottom bars, subjects x and y) and {@code starters} (the column's starter bars). Every scope also sees
- * the section's variables. A type adds its own variables (a pile cap's laps and pile positions); what is
- * required of them is the ruleset's business.
+ * the section's variables. A type adds its own variables (a pile cap's pile heads, laps and pile
+ * positions); what is required of them is the ruleset's business.
  */
 public final class DetailingVariables {
 
@@ -40,12 +40,11 @@ public final class DetailingVariables {
      *
      * @param noun             what the element is called in the rules' messages ({@code cap}, {@code footing})
      * @param castAgainstSides what the side faces are cast against, as the rules read it
-     * @param embedmentMm      pile heads cast into the element (0 when there are none)
      * @param sigmaQp          the quasi-permanent steel stress of each direction's bottom bars, MPa
      */
     public record SectionFacts(String noun, RectangularPlan plan, double depthMm, Materials materials, Reinforcement r, Section s,
                                double fck, double fctm, double fctd, double fyd, String castAgainst,
-                               String castAgainstSides, double embedmentMm, double coverDeviationMm,
+                               String castAgainstSides, double coverDeviationMm,
                                boolean hasQuasiPermanentCase, ToDoubleFunction<Axis> sigmaQp) {
     }
 
@@ -71,10 +70,10 @@ public final class DetailingVariables {
 
     /**
      * The section's variables with units, descriptions and example values (used to type-check rule
-     * expressions at load); the two a type describes in its own words are passed in, and the type's noun
+     * expressions at load); the one a type describes in its own words is passed in, and the type's noun
      * ({@code element}: what a rule's message calls the element, e.g. "the {element} gives {available} mm").
      */
-    public static Map<String, Variable> section(String noun, Variable castAgainstSides, Variable embedment) {
+    public static Map<String, Variable> section(String noun, Variable castAgainstSides) {
         Map<String, Variable> s = new LinkedHashMap<>();
         s.put("element", Variable.text("what the element is called in messages: cap or footing", noun));
         s.put("h", Variable.number("mm", "overall depth h", 1200));
@@ -95,7 +94,6 @@ public final class DetailingVariables {
         s.put("cover_top", Variable.number("mm", "stated nominal top cover", 50).written("c_top"));
         s.put("cover_side", Variable.number("mm", "stated nominal side cover", 75).written("c_side"));
         s.put("delta_c_dev", Variable.number("mm", "Δc_dev as stated, else the ruleset's cover_deviation", 10).written("Δcdev"));
-        s.put("embedment", embedment);
         s.put("phi_bottom", Variable.number("mm", "largest bar of the bottom layer 1", 25).written("φbottom"));
         s.put("phi_top", Variable.number("mm", "largest top bar (0 when none)", 16).written("φtop"));
         s.put("phi_side", Variable.number("mm", "side bars (else the largest bottom bar)", 12).written("φside"));
@@ -145,7 +143,6 @@ public final class DetailingVariables {
         v.put("cover_top", r.cover().topMm());
         v.put("cover_side", r.cover().sideMm());
         v.put("delta_c_dev", f.materials().coverDeviationMm().orElse(f.coverDeviationMm()));
-        v.put("embedment", f.embedmentMm());
         v.put("phi_bottom", layerDiameter(r, 1));
         v.put("phi_top", r.top().stream().mapToDouble(BarSet::diameterMm).max().orElse(0));
         v.put("phi_side", r.sides().map(Reinforcement.SideBars::diameterMm)

@@ -38,8 +38,7 @@ final class PadScopes {
     private static Map<String, Map<String, Variable>> scopes() {
         Map<String, Variable> s = DetailingVariables.section(PadFootingReviewer.NOUN,
                 Variable.text("what the side faces are cast against: formwork for pads (the submission has no"
-                        + " field for it; a listed assumption)", "formwork"),
-                Variable.number("mm", "pile heads cast into the element: none under a pad (0)", 0));
+                        + " field for it; a listed assumption)", "formwork"));
         Map<String, Variable> bars = new LinkedHashMap<>(s);
         bars.put("phi", Variable.number("mm", "bar diameter", 16).written("φ"));
         bars.put("count", Variable.number("-", "number of bars", 12).written("n"));
@@ -97,7 +96,7 @@ final class PadScopes {
         return DetailingVariables.sectionValues(new DetailingVariables.SectionFacts(PadFootingReviewer.NOUN,
                 pad, pad.depthMm(),
                 pad.materials(), r, s, ctx.fck.value(), ctx.fctm.value(), ctx.fctd.value(), ctx.fyd.value(),
-                pad.castAgainst().name().toLowerCase(Locale.ROOT), "formwork", 0.0,
+                pad.castAgainst().name().toLowerCase(Locale.ROOT), "formwork",
                 ctx.rules.number("cover_deviation"), !ctx.cases(ActionCase.Kind.SLS_QUASI_PERMANENT).isEmpty(),
                 axis -> sigmaQp(ctx, DetailingVariables.bars(s, axis), asRequired.getOrDefault(axis, 0.0))));
     }

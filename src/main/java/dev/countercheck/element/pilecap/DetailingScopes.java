@@ -38,14 +38,17 @@ final class DetailingScopes {
     private DetailingScopes() {
     }
 
+    /** The section's variable a cap has and a footing has not: the pile heads cast into it. */
+    private static final String EMBEDMENT = "embedment";
+
     /** The variables of each scope, with units, descriptions and example values. */
     static final Map<String, Map<String, Variable>> SCOPES = scopes();
 
     private static Map<String, Map<String, Variable>> scopes() {
         Map<String, Variable> cap = DetailingVariables.section(PileCapReviewer.NOUN,
                 Variable.text("what the side faces are cast against: soil or formwork"
-                        + " (formwork when the submission does not say)", "formwork"),
-                Variable.number("mm", "pile head cast into the cap", 75));
+                        + " (formwork when the submission does not say)", "formwork"));
+        cap.put(EMBEDMENT, Variable.number("mm", "pile head cast into the cap", 75));
         Map<String, Variable> bars = new LinkedHashMap<>(cap);
         bars.put("phi", Variable.number("mm", "bar diameter", 25).written("φ"));
         bars.put("count", Variable.number("-", "number of bars", 12).written("n"));
@@ -104,14 +107,14 @@ final class DetailingScopes {
     private static Map<String, Object> capValues(PileCapContext ctx, Reinforcement r, Map<Axis, Double> asRequired) {
         PileCap cap = ctx.cap;
         Section s = ctx.section.orElseThrow();
-        return DetailingVariables.sectionValues(new DetailingVariables.SectionFacts(PileCapReviewer.NOUN, cap,
-                cap.depthMm(),
-                cap.materials(), r, s, ctx.fck.value(), ctx.fctm.value(), ctx.fctd.value(), ctx.fyd.value(),
+        Map<String, Object> v = DetailingVariables.sectionValues(new DetailingVariables.SectionFacts(
+                PileCapReviewer.NOUN, cap, cap.depthMm(), cap.materials(), r, s, ctx.fck.value(), ctx.fctm.value(), ctx.fctd.value(), ctx.fyd.value(),
                 cap.castAgainst().bottom().name().toLowerCase(Locale.ROOT),
-                cap.castAgainst().sides().name().toLowerCase(Locale.ROOT), cap.piles().embedmentMm(),
-                ctx.rules.number("cover_deviation"),
+                cap.castAgainst().sides().name().toLowerCase(Locale.ROOT), ctx.rules.number("cover_deviation"),
                 cap.actions().stream().anyMatch(a -> a.kind() == ActionCase.Kind.SLS_QUASI_PERMANENT),
                 axis -> sigmaQp(ctx, axis, DetailingVariables.bars(s, axis), asRequired.getOrDefault(axis, 0.0))));
+        v.put(EMBEDMENT, cap.piles().embedmentMm());
+        return v;
     }
 
     private static Map<String, Object> barValues(PileCapContext ctx, Reinforcement r, Axis axis, List<BarSet> sets,
