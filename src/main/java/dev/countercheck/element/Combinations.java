@@ -38,18 +38,10 @@ public final class Combinations {
 
     /** What the review assumes when it combines characteristic loads, for the report. */
     public static final String ASSUMPTION = "Where characteristic loads are given, the review generates the"
-            + " combinations of EN 1990 itself (factors and ψ from the ruleset) and adds each element's own weight (and"
-            + " a footing's overburden) with the factor of each combination on the permanent actions. The strength"
+            + " combinations of EN 1990 itself (factors and ψ from the ruleset) and adds each element's own weight"
+            + " with the factor of each combination on the permanent actions. The strength"
             + " checks use the STR and accidental combinations and the serviceability checks the SLS ones; the"
-            + " accidental combinations are checked with the material factors of persistent situations (conservative)."
-            + " A pad footing's bearing resistance and sliding take both combinations of design approach 1, the worse"
-            + " governing (EN 1997-1 2.4.7.3.4.2): combination 1 on the STR combinations (EN 1990 Table A1.2(B)),"
-            + " combination 2 on the GEO ones (Table A1.2(C)); its overturning takes the EQU combinations (Table"
-            + " A1.2(A)) with the footing's and the overburden's weight always × γG,inf (they only stabilise). For pile"
-            + " caps the GEO and EQU combinations are listed only: the one design resistance per pile the submission"
-            + " gives is compared with the STR reactions, never smaller than the GEO ones; the piles' own geotechnical"
-            + " resistance (design approach 1, combination 2, with its resistance factors) is the designer's pile design"
-            + " and is not checked.";
+            + " accidental combinations are checked with the material factors of persistent situations (conservative).";
 
     private static final List<String> PSI_ROWS = List.of("A", "B", "C", "D", "E", "F", "G", "H", "S", "W", "T");
 

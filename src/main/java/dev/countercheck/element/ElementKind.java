@@ -42,6 +42,12 @@ public interface ElementKind<E extends ElementInput> {
     /** The assumptions every review of this type makes, for the report. */
     List<String> assumptions();
 
+    /**
+     * What the review of this type assumes of the combinations the review generates, added to {@link
+     * Combinations#ASSUMPTION} when an element of this type has generated ones (a sentence or more).
+     */
+    String combinationsAssumption();
+
     /** Reviews one element: every check of the catalogue, in catalogue order. */
     ElementReview review(E element, Ruleset rules, ElementAssembler assembler);
 

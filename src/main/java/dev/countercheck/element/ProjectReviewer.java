@@ -99,8 +99,12 @@ public final class ProjectReviewer {
         }
         ElementKinds.ALL.stream().filter(k -> submission.elements().stream().anyMatch(e -> e.type().equals(k.type())))
                 .forEach(k -> assumptions.addAll(k.assumptions()));
-        if (elements.stream().anyMatch(e -> !e.combinations().isEmpty())) {
-            assumptions.add(Combinations.ASSUMPTION);
+        List<String> combined = ElementKinds.ALL.stream().filter(k -> elements.stream()
+                .anyMatch(e -> e.type().equals(k.type()) && !e.combinations().isEmpty()))
+                .map(ElementKind::combinationsAssumption).toList();
+        if (!combined.isEmpty()) {
+            // what every kind assumes of its generated combinations, for the kinds that have some
+            assumptions.add(Combinations.ASSUMPTION + " " + String.join(" ", combined));
         }
         assumptions.add("Checks marked not-checked were not performed; the review says nothing about them.");
         var p = submission.project();

@@ -41,6 +41,11 @@ public final class PadFootingKind implements ElementKind<PadFooting> {
     }
 
     @Override
+    public String combinationsAssumption() {
+        return PadFootingReviewer.COMBINATIONS_ASSUMPTION;
+    }
+
+    @Override
     public ElementReview review(PadFooting pad, Ruleset rules, ElementAssembler assembler) {
         return new PadFootingReviewer(assembler).review(pad, rules);
     }

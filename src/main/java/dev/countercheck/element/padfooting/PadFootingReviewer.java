@@ -29,6 +29,14 @@ final class PadFootingReviewer {
     /** What a pad footing is called in messages and rule texts (the rules' variable {@code element}). */
     static final String NOUN = "footing";
 
+    /** What a pad-footing review assumes of the combinations it generates (after {@code Combinations.ASSUMPTION}). */
+    static final String COMBINATIONS_ASSUMPTION = "A pad footing's overburden takes the same factor as its own"
+            + " weight. Its bearing resistance and sliding take both"
+            + " combinations of design approach 1, the worse governing (EN 1997-1 2.4.7.3.4.2): combination 1 on the STR"
+            + " combinations (EN 1990 Table A1.2(B)), combination 2 on the GEO ones (Table A1.2(C)); its overturning"
+            + " takes the EQU combinations (Table A1.2(A)) with the footing's and the overburden's weight always ×"
+            + " γG,inf (they only stabilise).";
+
     /** The assumptions every pad-footing review makes, for the report. */
     static final List<String> ASSUMPTIONS = List.of(
             "The side faces of a pad footing are taken as cast against formwork: the side cover is checked"

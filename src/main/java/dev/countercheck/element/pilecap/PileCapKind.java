@@ -46,6 +46,11 @@ public final class PileCapKind implements ElementKind<PileCap> {
     }
 
     @Override
+    public String combinationsAssumption() {
+        return PileCapReviewer.COMBINATIONS_ASSUMPTION;
+    }
+
+    @Override
     public ElementReview review(PileCap cap, Ruleset rules, ElementAssembler assembler) {
         return new PileCapReviewer(assembler).review(cap, rules);
     }

@@ -29,6 +29,12 @@ final class PileCapReviewer {
     /** What a pile cap is called in messages and rule texts (the rules' variable {@code element}). */
     static final String NOUN = "cap";
 
+    /** What a pile-cap review assumes of the combinations it generates (after {@code Combinations.ASSUMPTION}). */
+    static final String COMBINATIONS_ASSUMPTION = "For pile caps the GEO and EQU combinations are listed only: the one"
+            + " design resistance per pile the submission gives is compared with the STR reactions, never smaller than"
+            + " the GEO ones; the piles' own geotechnical resistance (design approach 1, combination 2, with its"
+            + " resistance factors) is the designer's pile design and is not checked.";
+
     static final List<String> ASSUMPTIONS = List.of(
             "Pile caps are rigid: pile reactions vary linearly with position (common practice). The cap's own"
                     + " weight (γconc × plan area × h) is added at the cap centre unless the submission says it is"
