@@ -40,8 +40,11 @@ final class Derivation {
         this.notation = new RuleNotation(ruleSymbols);
     }
 
-    /** The steps of check {@code checkId}'s trace, numbered from 1, anchored {@code <anchor>-s<n>}. */
-    List<StepView> of(String checkId, List<Step> trace, String anchor) {
+    /**
+     * The steps of the trace of check {@code checkId} of an element of {@code elementType}, numbered from 1, anchored
+     * {@code <anchor>-s<n>}.
+     */
+    List<StepView> of(String elementType, String checkId, List<Step> trace, String anchor) {
         Map<String, String> defined = new HashMap<>();
         List<StepView> steps = new ArrayList<>(trace.size());
         for (int i = 0; i < trace.size(); i++) {
@@ -49,7 +52,8 @@ final class Derivation {
             String name = FormulaSymbols.base(step.symbol());
             boolean fromRule = step.fromRule();
             String symbol = fromRule || name.indexOf('_') >= 0 ? notation.symbol(name) : name;
-            Optional<String> quantity = meaning(symbol, checkId).or(() -> Optional.ofNullable(rulesetNames.get(name)));
+            Optional<String> quantity = meaning(symbol, elementType, checkId)
+                    .or(() -> Optional.ofNullable(rulesetNames.get(name)));
             boolean definesSymbol = quantity.isPresent() && !quantity.get().equals(defined.get(symbol));
             quantity.ifPresent(q -> defined.put(symbol, q));
             List<String> uses = new ArrayList<>();
@@ -59,7 +63,7 @@ final class Derivation {
             if (rule.isPresent()) {
                 defineRuleNames(RuleNotation.names(rule.get()), symbol, defined, uses, where);
             } else {
-                defineSymbols(step.formula(), symbol, checkId, defined, uses, where);
+                defineSymbols(step.formula(), symbol, elementType, checkId, defined, uses, where);
             }
             String formula = rule.map(notation::text).orElse(step.formula());
             String substituted = rule.isPresent()
@@ -84,14 +88,14 @@ final class Derivation {
     }
 
     /** The symbols of a formula the code wrote, each defined by the glossary (or the ruleset) at its first use. */
-    private void defineSymbols(String formula, String symbol, String checkId, Map<String, String> defined,
-                               List<String> uses, List<Definition> where) {
+    private void defineSymbols(String formula, String symbol, String elementType, String checkId,
+                               Map<String, String> defined, List<String> uses, List<Definition> where) {
         for (String name : glossary.symbolsIn(formula)) {
             if (name.equals(symbol)) {
                 continue;
             }
             uses.add(name);
-            Optional<String> meaning = meaning(name, checkId);
+            Optional<String> meaning = meaning(name, elementType, checkId);
             if (meaning.isPresent() && !meaning.get().equals(defined.get(name))) {
                 defined.put(name, meaning.get());
                 where.add(new Definition(name, meaning.get()));
@@ -119,7 +123,7 @@ final class Derivation {
         }
     }
 
-    private Optional<String> meaning(String symbol, String checkId) {
-        return glossary.meaning(symbol, checkId).or(() -> Optional.ofNullable(rulesetNames.get(symbol)));
+    private Optional<String> meaning(String symbol, String elementType, String checkId) {
+        return glossary.meaning(symbol, elementType, checkId).or(() -> Optional.ofNullable(rulesetNames.get(symbol)));
     }
 }

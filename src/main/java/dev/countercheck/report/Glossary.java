@@ -21,7 +21,9 @@ import java.util.regex.Pattern;
  * The meaning of every symbol the calculations write, declared once in {@code report/symbols.yaml} and read
  * by the derivation renderer ({@link Derivation}), which defines each symbol at its first use in a check's
  * derivation. A symbol means one thing, or one thing per group of checks (a glob on the check id, {@code *}
- * for the rest: the a of the pile-reaction plane is not the a of a control perimeter); a {@code #} in a symbol
+ * for the rest: the a of the pile-reaction plane is not the a of a control perimeter; a glob that names the
+ * element type, {@code pad-footing/*}, holds for that type's checks alone: a pad's φ is a bar's, never a pile's);
+ * a {@code #} in a symbol
  * stands for a number ({@code P#} is P1, P2, ...). The file also lists the words a formula's text may hold
  * that are not symbols ("over", "max"). Read once, at the first report; the review itself never reads it.
  */
@@ -39,7 +41,7 @@ final class Glossary {
     private final Map<String, List<Meaning>> exact;
     private final Map<Pattern, List<Meaning>> numbered;
     private final Set<String> words;
-    /** {@link #meaning} by symbol and check id, joined by a line break (neither holds one). */
+    /** {@link #meaning} by symbol and element type/check id, joined by a line break (neither holds one). */
     private final Memo<Optional<String>> meanings = new Memo<>(this::lookUp, MEMO_LIMIT);
     private final Memo<List<String>> formulaSymbols =
             new Memo<>(formula -> List.copyOf(FormulaSymbols.in(formula, this)), MEMO_LIMIT);
@@ -58,9 +60,9 @@ final class Glossary {
         return Bundled.INSTANCE;
     }
 
-    /** What {@code symbol} means in check {@code checkId}, when the glossary defines it. */
-    Optional<String> meaning(String symbol, String checkId) {
-        return meanings.get(symbol + "\n" + checkId);
+    /** What {@code symbol} means in check {@code checkId} of an element of {@code elementType}, when the glossary defines it. */
+    Optional<String> meaning(String symbol, String elementType, String checkId) {
+        return meanings.get(symbol + "\n" + elementType + "/" + checkId);
     }
 
     /** The symbols of {@code formula} ({@link FormulaSymbols#in}, with this glossary's words left out). */
@@ -128,11 +130,14 @@ final class Glossary {
         return List.copyOf(list);
     }
 
-    /** A glob over check ids (several separated by spaces): {@code *} any run of characters. */
+    /**
+     * A glob over {@code <element type>/<check id>} (several separated by spaces): {@code *} any run of characters;
+     * a glob without {@code /} is one over check ids, of any element type.
+     */
     private static Pattern glob(String globs) {
         List<String> parts = new ArrayList<>();
         for (String g : globs.trim().split("\\s+")) {
-            parts.add(Pattern.quote(g).replace("*", "\\E.*\\Q"));
+            parts.add((g.contains("/") ? "" : "[^/]*/") + Pattern.quote(g).replace("*", "\\E.*\\Q"));
         }
         return Pattern.compile(String.join("|", parts));
     }

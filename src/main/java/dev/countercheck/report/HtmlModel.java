@@ -464,7 +464,7 @@ public record HtmlModel(Header header, String pageHeading, List<Count> verdictCo
         String utilisation = check.utilisation().isPresent()
                 ? ReportNumbers.utilisation(check.utilisation().getAsDouble())
                 : "";
-        List<StepView> trace = derivation.of(check.id(), check.trace(), anchor);
+        List<StepView> trace = derivation.of(element.type(), check.id(), check.trace(), anchor);
         String bar = check.utilisation().isPresent() ? ReportNumbers.barPercent(check.utilisation().getAsDouble()) : "";
         boolean over = check.utilisation().isPresent() && check.utilisation().getAsDouble() > 1;
         return new CheckView(anchor, check.id(), check.title(), check.basis(), check.status().label(),

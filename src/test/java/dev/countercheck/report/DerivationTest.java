@@ -128,7 +128,8 @@ class DerivationTest {
 
     @Test
     void aSymbolTheGlossaryLacksIsLeftUndefinedSoTheStructureTestFails() {
-        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of()).of("shear-x", List.of(
+        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of()).of("pile-cap", "shear-x",
+                List.of(
                 Step.of("VRd,c", "max(vRd,c; vmin)·bw·d", "…", 250, "kN", "EN 1992-1-1 6.2.2(1)"),
                 Step.of("Qzz", "VRd,c·ωq", "…", 1, "-", "invented")), "e1-c1");
         assertThat(steps.get(0).definesSymbol()).isTrue();
@@ -142,11 +143,14 @@ class DerivationTest {
     @Test
     void aSymbolMeansWhatItsCheckSaysAndARulesetNameWhatTheRulesetDeclares() {
         Glossary g = Glossary.bundled();
-        assertThat(g.meaning("a", "pile-reactions")).get().asString().contains("reaction plane");
-        assertThat(g.meaning("a", "punching-perimeter")).get().asString().contains("control perimeter");
-        assertThat(g.meaning("P7", "pile-reactions")).get().asString().contains("reaction of that pile");
+        assertThat(g.meaning("a", "pile-cap", "pile-reactions")).get().asString().contains("reaction plane");
+        assertThat(g.meaning("a", "pile-cap", "punching-perimeter")).get().asString().contains("control perimeter");
+        assertThat(g.meaning("P7", "pile-cap", "pile-reactions")).get().asString().contains("reaction of that pile");
+        assertThat(g.meaning("φ", "pile-cap", "node-pile")).get().asString().contains("pile");
+        assertThat(g.meaning("φ", "pad-footing", "bending-x")).as("a pad has no piles").hasValue("diameter of a bar");
+        assertThat(g.meaning("D", "pad-footing", "bearing-resistance")).get().asString().contains("below the ground");
         List<StepView> steps = new Derivation(g, Map.of("cover_side", "nominal cover at the sides"), Map.of())
-                .of("cover", List.of(Step.ofRule("cnom,prov,side", "cover_side", "40", 40, "mm",
+                .of("pile-cap", "cover", List.of(Step.ofRule("cnom,prov,side", "cover_side", "40", 40, "mm",
                         "EN 1992-1-1 4.4.1 (r.yaml)")), "e1-c1");
         assertThat(steps.get(0).where()).containsExactly(
                 new HtmlModel.Definition("cover_side", "nominal cover at the sides"));
@@ -157,7 +161,7 @@ class DerivationTest {
         Map<String, String> meanings = Map.of("phi", "bar diameter", "eta2", "the rule's name for η2");
         Map<String, String> symbols = Map.of("phi", "φ", "eta2", "η2");
         List<StepView> steps = new Derivation(Glossary.bundled(), meanings, symbols).of(
-                "anchorage-x", List.of(
+                "pile-cap", "anchorage-x", List.of(
                         Step.ofRule("η2", "IF(phi <= 32, 1, (132 - phi) / 100)", "IF(12 <= 32, 1, (132 - 12) / 100)", 1,
                                 "-", "EN 1992-1-1 8.4.2(2) (rulesets/r.yaml)"),
                         Step.ofRule("fbd", "2.25 * eta2 * phi", "2.25 * 1 * 12", 27, "MPa",
@@ -172,7 +176,8 @@ class DerivationTest {
 
     @Test
     void aStepTheCodeBuiltKeepsItsOwnNotationEvenWhereItReadsAsARuleExpression() {
-        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of("fck", "FCK")).of("shear-x", List.of(
+        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of("fck", "FCK")).of("pile-cap",
+                "shear-x", List.of(
                 Step.of("V", "N + Wf + Ws (characteristic)", "1 + 2 + 3", 6, "kN", "EN 1990 6.5.3")), "e1-c1");
         assertThat(steps.get(0).formula()).isEqualTo("N + Wf + Ws (characteristic)");
         assertThat(steps.get(0).substituted()).isEqualTo("1 + 2 + 3");
@@ -183,7 +188,7 @@ class DerivationTest {
         Derivation derivation = new Derivation(Glossary.bundled(), Map.of("phi", "bar diameter"), Map.of("phi", "φ"));
         String formula = "MAX(phi, 2 * phi)";
         String clauseOfARule = "EN 1992-1-1 8.2(2) (rulesets/r.yaml)";
-        List<StepView> steps = derivation.of("spacing-x", List.of(
+        List<StepView> steps = derivation.of("pile-cap", "spacing-x", List.of(
                 Step.of("s", formula, "MAX(12, 2 * 12)", 24, "mm", clauseOfARule),
                 Step.ofRule("s", formula, "MAX(12, 2 * 12)", 24, "mm", "EN 1992-1-1 8.2(2)")), "e1-c1");
         assertThat(steps.get(0).formula()).as("the code's step whose clause reads like a rule's keeps its text")
@@ -205,7 +210,7 @@ class DerivationTest {
 
     @Test
     void aValueStatedOnceIsNotRepeatedAndARulesetParameterNamesItsFileBeforeTheValue() {
-        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of()).of("x", List.of(
+        List<StepView> steps = new Derivation(Glossary.bundled(), Map.of(), Map.of()).of("pad-footing", "x", List.of(
                 Step.of("b", "footing width across the section", "2200", 2200, "mm", "EN 1992-1-1 6.2.2(1)"),
                 Step.of("γG", "ruleset parameter gamma_g", "1.35 (rulesets/r.yaml)", 1.35, "-", "EN 1990")), "e1-c1");
         assertThat(steps.get(0).substituted()).isEmpty();
