@@ -16,9 +16,11 @@ import java.util.WeakHashMap;
 
 /**
  * What each name a rule's formula may write means, taken from where the name is declared: a parameter's or a
- * table's note, a scope variable's description (every kind's scopes, in the order of the kinds and the scopes'
- * names; a name that two scopes describe differently, such as {@code phi}, has both), a derived quantity's symbol. The report
- * defines the names of a rule-derived step with it; built once per ruleset loaded (the scopes' part once).
+ * table's note, a scope variable's description, a derived quantity's symbol. A scope variable is described as its
+ * kind's scopes describe it, under {@code <element type>/<name>} (a name that two scopes of the kind describe
+ * differently, such as {@code phi}, has both, in the order of the scopes' names), so that a pad's report never
+ * reads a cap's words nor a cap's a pad's; the others under the name alone. The report defines the names of a
+ * rule-derived step with it; built once per ruleset loaded (the scopes' part once).
  */
 final class RulesetNames {
 
@@ -85,7 +87,7 @@ final class RulesetNames {
             Map<String, Set<String>> described = new TreeMap<>();
             for (ElementKind<?> kind : ElementKinds.ALL) {
                 for (Map<String, Variable> scope : new TreeMap<>(kind.ruleVocabulary().scopes()).values()) {
-                    new TreeMap<>(scope).forEach((name, v) -> described.computeIfAbsent(name,
+                    new TreeMap<>(scope).forEach((name, v) -> described.computeIfAbsent(kind.type() + "/" + name,
                             k -> new LinkedHashSet<>()).add(v.description()));
                 }
             }

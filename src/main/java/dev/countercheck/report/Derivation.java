@@ -31,7 +31,8 @@ final class Derivation {
     private final RuleNotation notation;
 
     /**
-     * @param rulesetNames what each name a rule's formula may write means
+     * @param rulesetNames what each name a rule's formula may write means ({@code <element type>/<name>} for a
+     *                     kind's scope variable)
      * @param ruleSymbols  the symbol of each such name that has one
      */
     Derivation(Glossary glossary, Map<String, String> rulesetNames, Map<String, String> ruleSymbols) {
@@ -52,8 +53,7 @@ final class Derivation {
             String name = FormulaSymbols.base(step.symbol());
             boolean fromRule = step.fromRule();
             String symbol = fromRule || name.indexOf('_') >= 0 ? notation.symbol(name) : name;
-            Optional<String> quantity = meaning(symbol, elementType, checkId)
-                    .or(() -> Optional.ofNullable(rulesetNames.get(name)));
+            Optional<String> quantity = meaning(symbol, elementType, checkId).or(() -> named(elementType, name));
             boolean definesSymbol = quantity.isPresent() && !quantity.get().equals(defined.get(symbol));
             quantity.ifPresent(q -> defined.put(symbol, q));
             List<String> uses = new ArrayList<>();
@@ -61,7 +61,7 @@ final class Derivation {
             List<Definition> where = new ArrayList<>();
             Optional<RuleNotation.Node> rule = fromRule ? RuleNotation.parsedFormula(step.formula()) : Optional.empty();
             if (rule.isPresent()) {
-                defineRuleNames(RuleNotation.names(rule.get()), symbol, defined, uses, where);
+                defineRuleNames(RuleNotation.names(rule.get()), symbol, elementType, defined, uses, where);
             } else {
                 defineSymbols(step.formula(), symbol, elementType, checkId, defined, uses, where);
             }
@@ -107,23 +107,28 @@ final class Derivation {
      * The names of a rule's formula ({@code names}), each written as its symbol and defined by the ruleset's declaration at its
      * first use, unless an earlier step defined that symbol already (a derived quantity by its own step).
      */
-    private void defineRuleNames(List<String> names, String symbol, Map<String, String> defined, List<String> uses,
-                                 List<Definition> where) {
+    private void defineRuleNames(List<String> names, String symbol, String elementType, Map<String, String> defined,
+                                 List<String> uses, List<Definition> where) {
         for (String name : names) {
             String shown = notation.symbol(name);
             if (shown.equals(symbol) || uses.contains(shown)) {
                 continue;
             }
             uses.add(shown);
-            String meaning = rulesetNames.get(name);
-            if (meaning != null && !defined.containsKey(shown)) {
-                defined.put(shown, meaning);
-                where.add(new Definition(shown, meaning));
+            Optional<String> meaning = named(elementType, name);
+            if (meaning.isPresent() && !defined.containsKey(shown)) {
+                defined.put(shown, meaning.get());
+                where.add(new Definition(shown, meaning.get()));
             }
         }
     }
 
     private Optional<String> meaning(String symbol, String elementType, String checkId) {
-        return glossary.meaning(symbol, elementType, checkId).or(() -> Optional.ofNullable(rulesetNames.get(symbol)));
+        return glossary.meaning(symbol, elementType, checkId).or(() -> named(elementType, symbol));
+    }
+
+    /** What a rule's name means for an element of {@code elementType}: as its kind's scopes describe it, else as declared. */
+    private Optional<String> named(String elementType, String name) {
+        return Optional.ofNullable(rulesetNames.getOrDefault(elementType + "/" + name, rulesetNames.get(name)));
     }
 }

@@ -157,6 +157,17 @@ class DerivationTest {
     }
 
     @Test
+    void aRuleNameIsDefinedInTheWordsOfTheElementsOwnKind() {
+        Derivation derivation = new Derivation(Glossary.bundled(), Map.of("pad-footing/b_t", "footing width",
+                "pile-cap/b_t", "cap width", "spacing_k2", "k2 of 8.2(2)"), Map.of("b_t", "bt"));
+        List<Step> trace = List.of(Step.ofRule("s", "b_t - spacing_k2", "2200 - 5", 2195, "mm", "invented (r.yaml)"));
+        assertThat(derivation.of("pad-footing", "bar-spacing-x", trace, "e1-c1").get(0).where()).containsExactly(
+                new HtmlModel.Definition("bt", "footing width"), new HtmlModel.Definition("spacing_k2", "k2 of 8.2(2)"));
+        assertThat(derivation.of("pile-cap", "bar-spacing-x", trace, "e1-c1").get(0).where()).containsExactly(
+                new HtmlModel.Definition("bt", "cap width"), new HtmlModel.Definition("spacing_k2", "k2 of 8.2(2)"));
+    }
+
+    @Test
     void aRuleStepIsWrittenInSymbolsAndDefinesEachNameByItsSymbolOnce() {
         Map<String, String> meanings = Map.of("phi", "bar diameter", "eta2", "the rule's name for η2");
         Map<String, String> symbols = Map.of("phi", "φ", "eta2", "η2");
