@@ -28,7 +28,7 @@ public record CheckDef(String id, List<String> elementTypes, String scope, Optio
 
     /**
      * What a check shared by several element types says otherwise for one of them ({@code for: <type>:}): the
-     * formula and clause of some derived quantities (symbol and unit stay the check's) and the message or clause
+     * formula or clause of some derived quantities (symbol and unit stay the check's) and the message or clause
      * of some requirements. Everything else is the check's own.
      *
      * @param derived      the derived quantities it restates, by name

@@ -159,7 +159,7 @@ final class RuleDefinitions {
     }
 
     /**
-     * The {@code for:} block of a check: for an element type it applies to, the derived quantities (formula and
+     * The {@code for:} block of a check: for an element type it applies to, the derived quantities (formula,
      * clause) and the requirements (message, clause; by finding) that the type states otherwise.
      */
     private Map<String, Variant> variants(MapNode c, String path, List<String> types, List<DerivedDef> derived,
@@ -188,8 +188,10 @@ final class RuleDefinitions {
                 }
                 mapping(d.value(), dPath).ifPresent(m -> {
                     unknownKeys(m, dPath, VARIANT_DERIVED_KEYS);
-                    restated.put(d.key(), new DerivedDef(d.key(), own.get().symbol(), expression(m, "formula", dPath),
-                            own.get().unit(), required(m, "clause", dPath), d.keyLocation()));
+                    restateOne(m, dPath, "its formula, its clause or both");
+                    restated.put(d.key(), new DerivedDef(d.key(), own.get().symbol(),
+                            optionalExpression(m, "formula", dPath).orElse(own.get().formula()), own.get().unit(),
+                            text(m, "clause").orElse(own.get().clause()), d.keyLocation()));
                 });
             }
             Map<String, Words> words = new LinkedHashMap<>();
@@ -203,9 +205,7 @@ final class RuleDefinitions {
                 }
                 mapping(f.value(), fPath).ifPresent(m -> {
                     unknownKeys(m, fPath, VARIANT_REQUIREMENT_KEYS);
-                    if (text(m, "message").isEmpty() && text(m, "clause").isEmpty()) {
-                        problems.add(m.location(), fPath, "a restated requirement gives its message, its clause or both");
-                    }
+                    restateOne(m, fPath, "its message, its clause or both");
                     words.put(f.key(), new Words(text(m, "message"), text(m, "clause"),
                             m.entry("message").map(x -> x.value().location()).orElse(m.location())));
                 });
@@ -213,6 +213,13 @@ final class RuleDefinitions {
             variants.put(t.key(), new Variant(restated, words));
         }
         return variants;
+    }
+
+    /** Reports a restatement of a variant ({@code for:}) that restates nothing: it gives {@code what}. */
+    private void restateOne(MapNode m, String path, String what) {
+        if (m.entries().stream().noneMatch(e -> text(m, e.key()).isPresent())) {
+            problems.add(m.location(), path, "a restatement gives " + what);
+        }
     }
 
     /** The entries of the mapping {@code key} of {@code map}; none when it is absent or not a mapping (reported). */

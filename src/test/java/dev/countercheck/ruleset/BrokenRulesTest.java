@@ -46,10 +46,10 @@ class BrokenRulesTest {
             variant of a type the check does not apply to | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [], for: {pad-footing: {}}} | 6 | is not a type the check applies to (pile-cap)
             variant of a quantity the check does not derive | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [], for: {pile-cap: {derived: {as_max: {formula: 'as_x', clause: x}}}}} | 6 | to restate
             variant with an unknown variable | max-steel: {applies_to: [pile-cap, pad-footing], scope: section, derived: {as_max: {formula: 'as_x', unit: mm2, clause: x}}, values: [as_max], requirements: [], for: {pad-footing: {derived: {as_max: {formula: 'as_q', clause: x}}}}} | 6 | 'as_q'
-            variant without clause | max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'as_x', unit: mm2, clause: x}}, values: [], requirements: [], for: {pile-cap: {derived: {as_max: {formula: 'as_y'}}}}} | 6 | every rule names the clause
+            variant restating nothing | max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'as_x', unit: mm2, clause: x}}, values: [], requirements: [], for: {pile-cap: {derived: {as_max: {}}}}} | 6 | a restatement gives its formula, its clause or both
             variant restating a unit | max-steel: {applies_to: [pile-cap], scope: section, derived: {as_max: {formula: 'as_x', unit: mm2, clause: x}}, values: [], requirements: [], for: {pile-cap: {derived: {as_max: {formula: 'as_y', unit: mm, clause: x}}}}} | 6 | unknown key
             variant of a finding no requirement raises | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {requirements: {as-y: {message: m}}}}} | 6 | no requirement of the check raises finding
-            variant requirement without words | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {requirements: {as-x: {}}}}} | 6 | gives its message, its clause or both
+            variant requirement without words | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {requirements: {as-x: {}}}}} | 6 | a restatement gives its message, its clause or both
             variant message with an unknown name | max-steel: {applies_to: [pile-cap], scope: section, derived: {}, values: [], requirements: [{that: 'as_x > 0', finding: as-x, severity: major, message: m, clause: x}], for: {pile-cap: {requirements: {as-x: {message: 'see {nothing}'}}}}} | 6 | {nothing}
             """)
     void aBrokenRuleIsRefusedWithItsLocation(String name, String check, int line, String message, @TempDir Path dir)
@@ -127,8 +127,19 @@ class BrokenRulesTest {
                 .isEqualTo("EN 1992-1-1 9.8.1(3)");
         assertThat(rules.rule("pad-footing", "min-steel-x").orElseThrow().def().requirements().get(1).clause())
                 .isEqualTo("EN 1992-1-1 9.8.2.1(1)");
+        assertThat(derived(rules, "pile-cap", "crack-control", "sigma_s").clause()).contains("governing tie case");
+        assertThat(derived(rules, "pad-footing", "crack-control", "sigma_s").clause()).doesNotContain("tie")
+                .contains("the largest quasi-permanent and ULS axial forces");
+        assertThat(derived(rules, "pad-footing", "crack-control", "sigma_s").formula())
+                .as("a clause restated alone keeps the formula").isEqualTo(
+                        derived(rules, "pile-cap", "crack-control", "sigma_s").formula());
         assertThat(rules.rule("pile-cap", "max-steel").orElseThrow().def()).as("a check without variants")
                 .isSameAs(rules.rule("pad-footing", "max-steel").orElseThrow().def());
+    }
+
+    private static CheckDef.DerivedDef derived(Ruleset rules, String type, String check, String name) {
+        return rules.rule(type, check).orElseThrow().def().derived().stream().filter(d -> d.name().equals(name))
+                .findFirst().orElseThrow();
     }
 
     private static String formula(CheckDef check, String name) {
