@@ -6,7 +6,6 @@ import dev.countercheck.review.ElementAssembler;
 import dev.countercheck.review.ElementReview;
 import dev.countercheck.review.Finding;
 import dev.countercheck.review.FindingKind;
-import dev.countercheck.review.Parallelism;
 import dev.countercheck.review.Review;
 import dev.countercheck.review.Severity;
 import dev.countercheck.review.SeverityPolicy;
@@ -32,10 +31,13 @@ import java.util.stream.Stream;
 /**
  * Reviews a whole submission: each element by the kind of its type, then the summary. The elements
  * are independent, so several are reviewed at once on the common fork-join pool (one per core); the
- * results keep the submission's order and are the same as one at a time ({@link Parallelism} turns
- * this off).
+ * results keep the submission's order and are the same as one at a time. The system property
+ * {@value #PARALLEL_PROPERTY}{@code =false} reviews them one at a time.
  */
 public final class ProjectReviewer {
+
+    /** Set to {@code false} to review the elements of a submission one at a time. */
+    public static final String PARALLEL_PROPERTY = "countercheck.parallel";
 
     /** Stated on every report and in the README (rule of the product). */
     public static final String GENERAL_CAUTION = "This review assists a competent engineer and does not replace one."
@@ -63,9 +65,9 @@ public final class ProjectReviewer {
     private final Review.ToolInfo tool;
     private final boolean parallel;
 
-    /** Reviews elements in parallel unless {@link Parallelism} is turned off. */
+    /** Reviews elements in parallel unless the system property {@value #PARALLEL_PROPERTY} is {@code false}. */
     public ProjectReviewer(Review.ToolInfo tool) {
-        this(tool, Parallelism.enabled());
+        this(tool, !"false".equals(System.getProperty(PARALLEL_PROPERTY)));
     }
 
     /** @param parallel whether several elements are reviewed at once */

@@ -15,7 +15,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ThreadLocalRandom;
-import java.util.function.Supplier;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -119,23 +118,14 @@ public final class OutputSet implements AutoCloseable {
      * slices (a writer's encoder takes its slow path at the first character beyond ASCII).
      */
     public OutputSet add(String name, String content) {
-        return add(name, (Supplier<String>) () -> content);
-    }
-
-    /**
-     * Adds a text file whose text {@code content} gives when the set is committed (a text made on another
-     * thread meanwhile), written as {@link #add(String, String)} writes it.
-     */
-    public OutputSet add(String name, Supplier<String> content) {
         return add(name, out -> {
-            String text = content.get();
             int start = 0;
-            while (start < text.length()) {
-                int end = Math.min(text.length(), start + SLICE);
-                if (end < text.length() && Character.isHighSurrogate(text.charAt(end - 1))) {
+            while (start < content.length()) {
+                int end = Math.min(content.length(), start + SLICE);
+                if (end < content.length() && Character.isHighSurrogate(content.charAt(end - 1))) {
                     end--; // a surrogate pair stays in one slice
                 }
-                out.write(text.substring(start, end).getBytes(StandardCharsets.UTF_8));
+                out.write(content.substring(start, end).getBytes(StandardCharsets.UTF_8));
                 start = end;
             }
         });

@@ -1,13 +1,10 @@
 package dev.countercheck.report;
 
-import dev.countercheck.review.Parallelism;
 import dev.countercheck.review.Review;
 import dev.countercheck.round.ReviewRound;
 
 import java.util.List;
 import java.util.Optional;
-import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.CompletionException;
 
 /**
  * The reports of one reviewed submission, joined to its {@link OutputSet}: the JSON result and the
@@ -15,9 +12,7 @@ import java.util.concurrent.CompletionException;
  * element by element, the HTML as the template runs; a large project's HTML on several pages, see
  * {@link Paging}), and, when asked for, the PDF. The PDF is laid out once from the report as one
  * HTML page, with the JSON result attached (which is then made as text once, for both files); for a
- * report of one page, that very HTML text is also the HTML file. Without the PDF, a report of one page is made as
- * text on a second core while the JSON and the other files of the set are made and written (unless
- * {@link Parallelism} is off; the bytes are the same). Part pages of an earlier, larger
+ * report of one page, that very HTML text is also the HTML file. Part pages of an earlier, larger
  * report of the same name that this one does not write are removed once the new reports are in place.
  */
 public final class ReviewReports {
@@ -44,24 +39,11 @@ public final class ReviewReports {
      */
     public static List<String> addTo(OutputSet set, Review review, ReviewRound round, String json, String html,
                                      Optional<String> pdf) {
-        return addTo(set, review, round, json, html, pdf, Parallelism.enabled());
-    }
-
-    /** As {@link #addTo(OutputSet, Review, ReviewRound, String, String, Optional)}; {@code parallel} as {@link Parallelism}. */
-    static List<String> addTo(OutputSet set, Review review, ReviewRound round, String json, String html,
-                              Optional<String> pdf, boolean parallel) {
         List<HtmlReportWriter.Page> pages = new HtmlReportWriter().pages(review, round, html);
         set.retire(Paging.partFiles(html));
         if (pdf.isEmpty()) {
             set.addText(json, out -> new JsonResultWriter().write(review, round, out));
-            if (pages.size() == 1 && parallel) {
-                // one page: made as text on a second core while the JSON and the other files are made and written
-                CompletableFuture<String> page = CompletableFuture.supplyAsync(
-                        () -> new HtmlReportWriter().write(review, round));
-                set.add(html, () -> joined(page));
-            } else {
-                pages.forEach(p -> set.addText(p.fileName(), p.content()));
-            }
+            pages.forEach(p -> set.addText(p.fileName(), p.content()));
         } else {
             String result = new JsonResultWriter().write(review, round);
             set.add(json, result);
@@ -74,20 +56,5 @@ public final class ReviewReports {
             set.add(pdf.get(), out -> new PdfReportWriter().render(page, review, json, result, out));
         }
         return pages.stream().skip(1).map(HtmlReportWriter.Page::fileName).toList();
-    }
-
-    /** The text {@code page} makes, once it is made; what stopped it is thrown as it was thrown. */
-    private static String joined(CompletableFuture<String> page) {
-        try {
-            return page.join();
-        } catch (CompletionException e) {
-            if (e.getCause() instanceof RuntimeException cause) {
-                throw cause;
-            }
-            if (e.getCause() instanceof Error cause) {
-                throw cause;
-            }
-            throw e;
-        }
     }
 }

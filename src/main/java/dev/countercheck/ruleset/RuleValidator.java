@@ -127,8 +127,10 @@ final class RuleValidator {
         CheckDef validated = check.withDerived(check.derived().stream()
                 .sorted(Comparator.comparingInt(d -> order.indexOf(d.name()))).toList());
         ordered.forEach((type, derived) -> {
-            CheckDef own = check.forType(type).withDerived(derived);
-            byType.put(type, own.equals(validated) ? validated : own);
+            // a type without a variant whose evaluation order is the listing's runs the listed check itself
+            boolean asListed = !check.variants().containsKey(type)
+                    && derived.stream().map(DerivedDef::name).toList().equals(order);
+            byType.put(type, asListed ? validated : check.forType(type).withDerived(derived));
         });
         return Optional.of(validated);
     }

@@ -5,7 +5,6 @@ import dev.countercheck.round.ReviewRound;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
 import java.io.IOException;
@@ -14,14 +13,13 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
-import java.util.stream.Stream;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
 /**
  * The reports written straight into their files through the output set (JSON element by element,
- * HTML as the template runs or, at once with the JSON, made on a second core; the PDF from the same HTML
- * text) hold the very bytes the writers give in memory, for every sample.
+ * HTML as the template runs, the PDF from the same HTML text) hold the very bytes the writers give
+ * in memory, for every sample.
  */
 class StreamedReportsTest {
 
@@ -32,17 +30,12 @@ class StreamedReportsTest {
         return SampleReviews.samples();
     }
 
-    static Stream<Arguments> samplesInTurnAndAtOnce() {
-        return samples().stream().flatMap(sample -> Stream.of(Arguments.of(sample, false), Arguments.of(sample, true)));
-    }
-
-    /** In turn, the page is written as the template runs; at once, it is made as text on a second core meanwhile. */
     @ParameterizedTest
-    @MethodSource("samplesInTurnAndAtOnce")
-    void streamedReportsEqualTheReportsBuiltInMemory(Path sample, boolean atOnce) throws IOException {
+    @MethodSource("samples")
+    void streamedReportsEqualTheReportsBuiltInMemory(Path sample) throws IOException {
         Review review = SampleReviews.review(sample);
         try (OutputSet set = OutputSet.in(dir)) {
-            ReviewReports.addTo(set, review, ReviewRound.none(""), "r.json", "r.html", Optional.empty(), atOnce);
+            ReviewReports.addTo(set, review, ReviewRound.none(""), "r.json", "r.html", Optional.empty());
             set.commit();
         }
 
