@@ -75,7 +75,7 @@ public final class JunitXml {
     private static String lines(List<Finding> findings) {
         StringBuilder s = new StringBuilder();
         findings.forEach(f -> s.append(f.id()).append(" [").append(f.severity().label()).append("] ")
-                .append(f.message()).append(" (").append(f.basis()).append(")\n"));
+                .append(f.withBasis()).append("\n"));
         return s.toString();
     }
 }

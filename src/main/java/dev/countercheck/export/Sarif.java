@@ -51,7 +51,7 @@ public final class Sarif {
                 ObjectNode r = results.addObject();
                 r.put("ruleId", f.check());
                 r.put("level", level(f.severity()));
-                r.putObject("message").put("text", f.message() + " (" + f.basis() + ")");
+                r.putObject("message").put("text", f.withBasis());
                 ObjectNode location = r.putArray("locations").addObject();
                 location.putObject("physicalLocation").putObject("artifactLocation")
                         .put("uri", review.submission().file().replace('\\', '/'));
