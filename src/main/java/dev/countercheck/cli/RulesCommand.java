@@ -110,7 +110,8 @@ public final class RulesCommand implements Callable<Integer> {
     /** The element types that restate derived quantity {@code d} of check {@code c} ({@code for:}), with their own. */
     private static Map<String, CheckDef.DerivedDef> restated(CheckDef c, CheckDef.DerivedDef d) {
         Map<String, CheckDef.DerivedDef> out = new LinkedHashMap<>();
-        c.variants().forEach((type, v) -> Optional.ofNullable(v.derived().get(d.name())).ifPresent(r -> out.put(type, r)));
+        c.variants().forEach((type, v) -> Optional.ofNullable(v.derived().get(d.name()))
+                .ifPresent(r -> out.put(type, r)));
         return out;
     }
 

@@ -108,7 +108,8 @@ final class DetailingScopes {
         PileCap cap = ctx.cap;
         Section s = ctx.section.orElseThrow();
         Map<String, Object> v = DetailingVariables.sectionValues(new DetailingVariables.SectionFacts(
-                PileCapReviewer.NOUN, cap, cap.depthMm(), cap.materials(), r, s, ctx.fck.value(), ctx.fctm.value(), ctx.fctd.value(), ctx.fyd.value(),
+                PileCapReviewer.NOUN, cap, cap.depthMm(), cap.materials(), r, s, ctx.fck.value(), ctx.fctm.value(),
+                ctx.fctd.value(), ctx.fyd.value(),
                 cap.castAgainst().bottom().name().toLowerCase(Locale.ROOT),
                 cap.castAgainst().sides().name().toLowerCase(Locale.ROOT), ctx.rules.number("cover_deviation"),
                 cap.actions().stream().anyMatch(a -> a.kind() == ActionCase.Kind.SLS_QUASI_PERMANENT),
